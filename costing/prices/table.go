@@ -1,0 +1,29 @@
+// Package prices reads the site's price table: what each item costs, per
+// which unit, in which currency, from which source and date.
+package prices
+
+import (
+	"github.com/shopspring/decimal"
+
+	"sepcost/costing/units"
+)
+
+// Item is one row of the price table.
+type Item struct {
+	Name     string          // item name that usage demands refer to, e.g. "silica gel"
+	Unit     string          // unit as written, e.g. "kg", "L", "each", "h", "kWh"
+	Per      units.Unit      // parsed unit
+	Price    decimal.Decimal // price per Unit
+	Currency string          // ISO 4217 code, e.g. "EUR"
+	Category string          // free text: "consumable", "solvent", "labour", "disposal", ...
+	Source   string          // supplier, quote or catalogue reference
+	Date     string          // date of the price, as written (YYYY-MM-DD)
+	Line     int             // line number in the file, 1-based
+}
+
+// Table is a price table with a single currency.
+type Table struct {
+	File     string // file name used in error messages
+	Currency string
+	Items    []Item
+}

@@ -1,0 +1,157 @@
+// Package usage describes what one purification at one batch mass
+// physically consumes and produces: priced demands (materials, labour,
+// energy, disposal, product lost), waste streams, activities with their
+// hours, physical figures and notes. Models fill it; the ledger prices it.
+// It holds quantities in SI and imports no money type.
+package usage
+
+import "sepcost/costing/units"
+
+// Group sorts demands into the ledger's sections.
+type Group string
+
+// Ledger sections, in the order they are printed.
+const (
+	Materials   Group = "materials"
+	Labour      Group = "labour"
+	Energy      Group = "energy"
+	Disposal    Group = "disposal"
+	ProductLoss Group = "product lost"
+	Credit      Group = "credit"
+	OneTime     Group = "one-time"
+)
+
+// Groups lists the sections in print order.
+var Groups = []Group{Materials, Labour, Energy, Disposal, ProductLoss, Credit, OneTime}
+
+// Demand is one quantity to be priced by a price-table item.
+type Demand struct {
+	Item  string    // price-table item name, e.g. "silica gel", "ethyl acetate"
+	Label string    // what it is for, e.g. "eluent: ethyl acetate"
+	Group Group     // ledger section
+	Qty   float64   // SI units of Dim; negative for a credit
+	Dim   units.Dim // mass, volume, count, time or energy
+}
+
+// WasteClass is a disposal class, priced per kilogram.
+type WasteClass string
+
+// Waste classes (DESIGN §5.6).
+const (
+	NonHalogenated WasteClass = "non-halogenated solvent"
+	Halogenated    WasteClass = "halogenated solvent"
+	WetSolids      WasteClass = "solvent-wet solids"
+	Aqueous        WasteClass = "aqueous"
+)
+
+// WasteClasses lists the classes in print order.
+var WasteClasses = []WasteClass{NonHalogenated, Halogenated, WetSolids, Aqueous}
+
+// DisposalItem is the price-table item for disposing of a class.
+func (c WasteClass) DisposalItem() string { return "disposal: " + string(c) }
+
+// Component is one substance in a waste stream.
+type Component struct {
+	Name    string  // solvent id, "silica gel", "sand", "product", ...
+	Kg      float64 // mass
+	Solvent bool    // true for a solvent (counted in solvent totals)
+}
+
+// Stream is one waste stream.
+type Stream struct {
+	Name       string // e.g. "spent eluent", "solvent-wet silica"
+	Class      WasteClass
+	Components []Component
+	VolumeM3   float64 // liquid volume; 0 for solids
+}
+
+// Kg is the stream's total mass.
+func (s Stream) Kg() float64 {
+	t := 0.0
+	for _, c := range s.Components {
+		t += c.Kg
+	}
+	return t
+}
+
+// Activity is one step of the work with its elapsed and attended time.
+type Activity struct {
+	Name     string
+	Elapsed  float64 // seconds of clock time
+	Attended float64 // seconds a person is at the bench
+}
+
+// Figure is a physical result worth showing (silica mass, column diameter...).
+type Figure struct {
+	Key   string  // stable identifier for writers and tests
+	Label string  // plain words
+	SI    float64 // value in SI
+	Unit  string  // display unit, "" for plain numbers
+}
+
+// Level grades a note.
+type Level string
+
+// Note levels.
+const (
+	Info    Level = "info"
+	Warning Level = "warning"
+	Caution Level = "caution"
+)
+
+// Note is an assumption used, a warning about the inputs, or a safety caution.
+type Note struct {
+	Level Level
+	Text  string
+}
+
+// Usage is the physical result of one method at one batch mass.
+type Usage struct {
+	Method       string
+	CrudeKg      float64 // crude mass to purify
+	ProductInKg  float64 // product contained in the crude
+	ProductOutKg float64 // purified product recovered
+	Feasible     bool
+	Reason       string // why not feasible
+	Figures      []Figure
+	Demands      []Demand
+	Waste        []Stream
+	Activities   []Activity
+	Notes        []Note
+}
+
+// Hours returns total elapsed and attended hours.
+func (u Usage) Hours() (elapsed, attended float64) {
+	for _, a := range u.Activities {
+		elapsed += a.Elapsed
+		attended += a.Attended
+	}
+	return elapsed / 3600, attended / 3600
+}
+
+// WasteKg is the total mass of all waste streams.
+func (u Usage) WasteKg() float64 {
+	t := 0.0
+	for _, s := range u.Waste {
+		t += s.Kg()
+	}
+	return t
+}
+
+// Figure returns a figure by key.
+func (u Usage) Figure(key string) (Figure, bool) {
+	for _, f := range u.Figures {
+		if f.Key == key {
+			return f, true
+		}
+	}
+	return Figure{}, false
+}
+
+// Display is a figure's value in its display unit.
+func (f Figure) Display() float64 {
+	if f.Unit == "" {
+		return f.SI
+	}
+	return units.MustTo(f.SI, f.Unit)
+}

@@ -1,0 +1,37 @@
+package scale
+
+import (
+	"sepcost/costing/ledger"
+	"sepcost/costing/prices"
+	"sepcost/costing/source"
+	"sepcost/costing/usage"
+)
+
+// Input is one scenario field as the user wrote it and what the tool took it to mean.
+type Input struct {
+	Field   string // dotted path, e.g. "chromatography.product_rf"
+	Written string // as written in the file
+	Meaning string // as understood, e.g. "0.35 (column volumes to elute: 2.86)"
+}
+
+// Result is one method at one batch mass.
+type Result struct {
+	Usage  usage.Usage
+	Ledger ledger.Ledger
+}
+
+// Report is everything a writer needs: inputs, prices, results by mass and
+// method, coefficients with their sources, and cautions.
+type Report struct {
+	Title        string  // scenario name
+	ScenarioFile string  // path as given, or "built-in demo"
+	PricesFile   string  // path as given, or "built-in example prices"
+	Inputs       []Input // scenario echo for the Inputs sheet
+	Prices       *prices.Table
+	MassesKg     []float64  // crude masses, ascending
+	Methods      []string   // method names in column order
+	Results      [][]Result // Results[i][j]: mass i, method j
+	Coefficients []source.Coefficient
+	Cautions     []string     // safety cautions that apply to this scenario
+	Notes        []usage.Note // scenario-wide notes and warnings
+}
