@@ -1,7 +1,7 @@
 package scale
 
 import (
-	"sepcost/costing/ledger"
+	"sepcost/costing"
 	"sepcost/costing/prices"
 	"sepcost/costing/source"
 	"sepcost/costing/usage"
@@ -14,11 +14,8 @@ type Input struct {
 	Meaning string // as understood, e.g. "0.35 (column volumes to elute: 2.86)"
 }
 
-// Result is one method at one batch mass.
-type Result struct {
-	Usage  usage.Usage
-	Ledger ledger.Ledger
-}
+// Result is one method at one batch mass: physical usage and its ledger.
+type Result = costing.Result
 
 // Report is everything a writer needs: inputs, prices, results by mass and
 // method, coefficients with their sources, and cautions.

@@ -1,0 +1,122 @@
+package main
+
+import (
+	"context"
+	"errors"
+	"fmt"
+	"io"
+
+	"github.com/spf13/cobra"
+
+	"sepcost/costing"
+	"sepcost/costing/prices"
+	"sepcost/costing/scenario"
+	"sepcost/costing/usage"
+)
+
+type checkOptions struct {
+	scenario string
+	prices   string
+}
+
+func newCheckCommand() *cobra.Command {
+	opts := &checkOptions{}
+	cmd := &cobra.Command{
+		Use:   "check SCENARIO",
+		Short: "Check a scenario and price table and explain every problem found",
+		Long: `Reads the scenario and the price table, checks every field, runs the models at
+the scenario's batch masses and prices them. Every problem is listed with its
+file, line and field and what would be valid; model warnings are listed too.
+The exit code is 1 when anything must be fixed.`,
+		Args: cobra.ExactArgs(1),
+		RunE: func(cmd *cobra.Command, args []string) error {
+			opts.scenario = args[0]
+			return runCheck(cmd.Context(), opts, cmd.OutOrStdout())
+		},
+	}
+	cmd.Flags().StringVar(&opts.prices, "prices", "", "price table CSV (default: prices.csv beside the scenario)")
+	return cmd
+}
+
+// errCheckFailed is returned after the problems have been printed.
+var errCheckFailed = errors.New("check found problems (listed above)")
+
+func runCheck(_ context.Context, opts *checkOptions, stdout io.Writer) error {
+	var problems []error
+	sc, err := loadScenario(opts.scenario)
+	if err != nil {
+		problems = append(problems, err)
+	}
+	t, err := loadPrices(opts.prices, opts.scenario)
+	var ue usageError
+	if errors.As(err, &ue) {
+		return err
+	}
+	if err != nil {
+		problems = append(problems, err)
+	}
+	var plan *costing.Plan
+	if sc != nil {
+		plan, err = costing.Prepare(sc)
+		if err != nil {
+			problems = append(problems, err)
+		}
+	}
+	var results [][]costing.Result
+	if plan != nil && t != nil {
+		results, err = plan.Run(sc.MassesKg, t)
+		if err != nil {
+			problems = append(problems, err)
+		}
+	}
+	n := 0
+	for _, p := range problems {
+		n += printProblems(stdout, p)
+	}
+	if n > 0 {
+		fmt.Fprintf(stdout, "\n%d problem(s) to fix.\n", n)
+		return errCheckFailed
+	}
+	fmt.Fprintf(stdout, "%s: scenario %q reads cleanly (%d batch masses, methods: %v)\n", opts.scenario, sc.Name, len(sc.MassesKg), plan.MethodNames())
+	fmt.Fprintf(stdout, "%s: %d prices in %s; every item the models need is priced\n", t.File, len(t.Items), t.Currency)
+	warned := 0
+	for i, m := range sc.MassesKg {
+		for j, name := range plan.MethodNames() {
+			u := results[i][j].Usage
+			if !u.Feasible {
+				fmt.Fprintf(stdout, "%s, %s: not feasible: %s\n", scenario.FormatMass(m), name, u.Reason)
+				warned++
+			}
+			for _, note := range u.Notes {
+				if note.Level == usage.Warning {
+					fmt.Fprintf(stdout, "%s, %s: warning: %s\n", scenario.FormatMass(m), name, note.Text)
+					warned++
+				}
+			}
+		}
+	}
+	if warned == 0 {
+		fmt.Fprintln(stdout, "no model warnings")
+	}
+	return nil
+}
+
+// printProblems prints each problem of an error on its own line.
+func printProblems(w io.Writer, err error) int {
+	var sp scenario.Problems
+	var pe prices.Errors
+	switch {
+	case errors.As(err, &sp):
+		for _, p := range sp {
+			fmt.Fprintln(w, p.Error())
+		}
+		return len(sp)
+	case errors.As(err, &pe):
+		for _, p := range pe {
+			fmt.Fprintln(w, p.Error())
+		}
+		return len(pe)
+	}
+	fmt.Fprintln(w, err.Error())
+	return 1
+}

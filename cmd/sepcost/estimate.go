@@ -1,0 +1,95 @@
+package main
+
+import (
+	"context"
+	"fmt"
+	"io"
+
+	"github.com/spf13/cobra"
+
+	"sepcost/costing"
+	"sepcost/costing/prices"
+	"sepcost/costing/scenario"
+	"sepcost/scale"
+)
+
+type estimateOptions struct {
+	scenario string
+	prices   string
+	masses   massList
+	out      string
+	format   string
+	force    bool
+}
+
+func newEstimateCommand() *cobra.Command {
+	opts := &estimateOptions{}
+	cmd := &cobra.Command{
+		Use:   "estimate SCENARIO",
+		Short: "Cost every applicable method at the given batch masses",
+		Long: `Runs every method the scenario describes at each batch mass and prices it with
+the price table. Without -o a summary is printed; with -o the format follows
+the file's extension (.xlsx, .json, .csv) unless --format says otherwise.`,
+		Example: `  sepcost estimate mycase/scenario.yaml --prices mycase/prices.csv --mass 0.25g,20g,2kg -o plan.xlsx
+  sepcost estimate mycase/scenario.yaml --format json`,
+		Args: cobra.ExactArgs(1),
+		RunE: func(cmd *cobra.Command, args []string) error {
+			opts.scenario = args[0]
+			return runEstimate(cmd.Context(), opts, cmd.OutOrStdout(), cmd.ErrOrStderr())
+		},
+	}
+	f := cmd.Flags()
+	f.StringVar(&opts.prices, "prices", "", "price table CSV (default: prices.csv beside the scenario)")
+	f.Var(&opts.masses, "mass", `crude batch masses with units, e.g. "250mg,20g,2kg" (default: the scenario's masses)`)
+	addOutputFlags(cmd, &opts.out, &opts.format, &opts.force)
+	return cmd
+}
+
+func addOutputFlags(cmd *cobra.Command, out, format *string, force *bool) {
+	cmd.Flags().StringVarP(out, "output", "o", "", "write to this file instead of the terminal")
+	cmd.Flags().StringVar(format, "format", "", "xlsx, json, csv or text (default: from the -o extension, else text)")
+	cmd.Flags().BoolVar(force, "force", false, "replace an existing output file")
+}
+
+func runEstimate(_ context.Context, opts *estimateOptions, stdout, stderr io.Writer) error {
+	format, err := formatFor(opts.format, opts.out)
+	if err != nil {
+		return err
+	}
+	sc, err := loadScenario(opts.scenario)
+	if err != nil {
+		return err
+	}
+	t, err := loadPrices(opts.prices, opts.scenario)
+	if err != nil {
+		return err
+	}
+	masses := sc.MassesKg
+	if opts.masses.set {
+		masses = opts.masses.kg
+	}
+	r, err := buildReport(sc, t, masses)
+	if err != nil {
+		return err
+	}
+	buf, err := render(r, format)
+	if err != nil {
+		return err
+	}
+	if err := emit(buf, opts.out, opts.force, stdout); err != nil {
+		return err
+	}
+	if opts.out != "" && opts.out != "-" {
+		fmt.Fprintf(stderr, "wrote %s\n", opts.out)
+	}
+	return nil
+}
+
+// buildReport prepares the plan and runs it at the masses.
+func buildReport(sc *scenario.Scenario, t *prices.Table, masses []float64) (*scale.Report, error) {
+	plan, err := costing.Prepare(sc)
+	if err != nil {
+		return nil, err
+	}
+	return scale.Estimate(plan, t, masses)
+}

@@ -1,0 +1,70 @@
+package main
+
+import (
+	"bytes"
+	"errors"
+	"fmt"
+	"io/fs"
+	"os"
+	"path/filepath"
+
+	"sepcost/cmd/sepcost/internal/plain"
+	"sepcost/cmd/sepcost/internal/workbook"
+	"sepcost/costing/prices"
+	"sepcost/costing/scenario"
+	"sepcost/scale"
+)
+
+// openInput reads a user file, with an error that names it.
+func openInput(path, what string) ([]byte, error) {
+	data, err := os.ReadFile(path)
+	if errors.Is(err, fs.ErrNotExist) {
+		return nil, fmt.Errorf("%s: no such %s file", path, what)
+	}
+	if err != nil {
+		return nil, fmt.Errorf("%s: cannot read the %s file: %w", path, what, err)
+	}
+	return data, nil
+}
+
+func loadScenario(path string) (*scenario.Scenario, error) {
+	data, err := openInput(path, "scenario")
+	if err != nil {
+		return nil, err
+	}
+	return scenario.Load(bytes.NewReader(data), path)
+}
+
+// loadPrices reads --prices, or else prices.csv beside the scenario (the
+// layout `sepcost init` writes); the report names the file used.
+func loadPrices(path, scenarioPath string) (*prices.Table, error) {
+	if path == "" {
+		guess := filepath.Join(filepath.Dir(scenarioPath), "prices.csv")
+		if _, err := os.Stat(guess); err != nil {
+			return nil, usageError{fmt.Errorf("no price table: give --prices FILE (`sepcost init` writes an example), or put prices.csv beside %s", scenarioPath)}
+		}
+		path = guess
+	}
+	data, err := openInput(path, "price table")
+	if err != nil {
+		return nil, err
+	}
+	return prices.Read(bytes.NewReader(data), path)
+}
+
+// render lays a report out in the chosen format.
+func render(r *scale.Report, format string) (*bytes.Buffer, error) {
+	var buf bytes.Buffer
+	var err error
+	switch format {
+	case "xlsx":
+		err = workbook.Write(&buf, r, workbook.Options{})
+	case "json":
+		err = plain.JSON(&buf, r)
+	case "csv":
+		err = plain.CSV(&buf, r)
+	default:
+		err = plain.Text(&buf, r)
+	}
+	return &buf, err
+}

@@ -1,0 +1,50 @@
+package plain
+
+import (
+	"encoding/csv"
+	"io"
+	"strconv"
+	"strings"
+
+	"sepcost/scale"
+)
+
+// CSV writes one row per ledger line: batch mass, method, group, item,
+// label, quantity, unit, unit price, amount, currency. Text cells that a
+// spreadsheet would read as a formula are written with a leading
+// apostrophe (OWASP, "CSV Injection", guidance: prefix cells that begin
+// with =, +, -, @, tab or carriage return).
+func CSV(w io.Writer, r *scale.Report) error {
+	cw := csv.NewWriter(w)
+	header := []string{"crude_kg", "method", "group", "item", "label", "quantity", "unit", "unit_price", "amount", "currency"}
+	if err := cw.Write(header); err != nil {
+		return err
+	}
+	for i, m := range r.MassesKg {
+		for j, name := range r.Methods {
+			res := r.Results[i][j]
+			mass := strconv.FormatFloat(m, 'g', -1, 64)
+			for _, l := range res.Ledger.Lines {
+				row := []string{mass, Safe(name), Safe(string(l.Demand.Group)), Safe(l.Demand.Item), Safe(l.Demand.Label),
+					l.Qty.String(), Safe(l.Unit), l.UnitPrice.String(), l.Amount.StringFixed(res.Ledger.Places), Safe(res.Ledger.Currency)}
+				if err := cw.Write(row); err != nil {
+					return err
+				}
+			}
+			row := []string{mass, Safe(name), "total", "", "", "", "", "", res.Ledger.Total.StringFixed(res.Ledger.Places), Safe(res.Ledger.Currency)}
+			if err := cw.Write(row); err != nil {
+				return err
+			}
+		}
+	}
+	cw.Flush()
+	return cw.Error()
+}
+
+// Safe guards a text cell against being read as a formula.
+func Safe(s string) string {
+	if s != "" && strings.ContainsRune("=+-@\t\r", rune(s[0])) {
+		return "'" + s
+	}
+	return s
+}

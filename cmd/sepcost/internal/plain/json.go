@@ -1,0 +1,113 @@
+package plain
+
+import (
+	"encoding/json"
+	"io"
+	"math"
+
+	"sepcost/costing/usage"
+	"sepcost/scale"
+)
+
+// The JSON shape: money as strings with the currency's fixed places, so
+// that scripts read exact amounts; physical figures as numbers in their
+// display units.
+type jsonReport struct {
+	Title    string      `json:"title"`
+	Scenario string      `json:"scenario"`
+	Prices   string      `json:"prices"`
+	Currency string      `json:"currency"`
+	Batches  []jsonBatch `json:"batches"`
+	Cautions []string    `json:"cautions"`
+}
+
+type jsonBatch struct {
+	CrudeKg float64      `json:"crude_kg"`
+	Methods []jsonMethod `json:"methods"`
+}
+
+type jsonMethod struct {
+	Method        string         `json:"method"`
+	Feasible      bool           `json:"feasible"`
+	Reason        string         `json:"reason,omitempty"`
+	ProductInKg   float64        `json:"product_in_kg"`
+	ProductOutKg  float64        `json:"product_out_kg"`
+	HoursElapsed  float64        `json:"hours_elapsed"`
+	HoursAttended float64        `json:"hours_hands_on"`
+	WasteKg       float64        `json:"waste_kg"`
+	Figures       []jsonFigure   `json:"figures"`
+	Lines         []jsonLine     `json:"ledger"`
+	Total         string         `json:"total"`
+	Activities    []jsonActivity `json:"activities"`
+	Waste         []jsonStream   `json:"waste"`
+	Notes         []usage.Note   `json:"notes"`
+}
+
+type jsonFigure struct {
+	Key   string  `json:"key"`
+	Label string  `json:"label"`
+	Value float64 `json:"value"`
+	Unit  string  `json:"unit"`
+}
+
+type jsonLine struct {
+	Group     string `json:"group"`
+	Item      string `json:"item"`
+	Label     string `json:"label"`
+	Qty       string `json:"quantity"`
+	Unit      string `json:"unit"`
+	UnitPrice string `json:"unit_price"`
+	Amount    string `json:"amount"`
+}
+
+type jsonActivity struct {
+	Name     string  `json:"name"`
+	Elapsed  float64 `json:"hours_elapsed"`
+	Attended float64 `json:"hours_hands_on"`
+}
+
+type jsonStream struct {
+	Name       string             `json:"name"`
+	Class      string             `json:"class"`
+	Kg         float64            `json:"kg"`
+	Litres     float64            `json:"litres"`
+	Components map[string]float64 `json:"components_kg"`
+}
+
+// JSON writes the report as indented JSON.
+func JSON(w io.Writer, r *scale.Report) error {
+	out := jsonReport{Title: r.Title, Scenario: r.ScenarioFile, Prices: r.PricesFile, Currency: r.Prices.Currency, Cautions: r.Cautions}
+	for i, m := range r.MassesKg {
+		b := jsonBatch{CrudeKg: m}
+		for j, name := range r.Methods {
+			res := r.Results[i][j]
+			u := res.Usage
+			el, at := u.Hours()
+			jm := jsonMethod{Method: name, Feasible: u.Feasible, Reason: u.Reason, ProductInKg: u.ProductInKg, ProductOutKg: u.ProductOutKg,
+				HoursElapsed: el, HoursAttended: at, WasteKg: u.WasteKg(), Total: res.Ledger.Total.StringFixed(res.Ledger.Places), Notes: u.Notes}
+			for _, f := range u.Figures {
+				if v := f.Display(); !math.IsNaN(v) && !math.IsInf(v, 0) {
+					jm.Figures = append(jm.Figures, jsonFigure{f.Key, f.Label, v, f.Unit})
+				}
+			}
+			for _, l := range res.Ledger.Lines {
+				jm.Lines = append(jm.Lines, jsonLine{string(l.Demand.Group), l.Demand.Item, l.Demand.Label, l.Qty.String(), l.Unit, l.UnitPrice.String(), l.Amount.StringFixed(res.Ledger.Places)})
+			}
+			for _, a := range u.Activities {
+				jm.Activities = append(jm.Activities, jsonActivity{a.Name, a.Elapsed / 3600, a.Attended / 3600})
+			}
+			for _, s := range u.Waste {
+				js := jsonStream{Name: s.Name, Class: string(s.Class), Kg: s.Kg(), Litres: s.VolumeM3 * 1000, Components: map[string]float64{}}
+				for _, c := range s.Components {
+					js.Components[c.Name] += c.Kg
+				}
+				jm.Waste = append(jm.Waste, js)
+			}
+			b.Methods = append(b.Methods, jm)
+		}
+		out.Batches = append(out.Batches, b)
+	}
+	enc := json.NewEncoder(w)
+	enc.SetIndent("", "  ")
+	return enc.Encode(out)
+}

@@ -1,0 +1,96 @@
+// Package plain writes a report as a terminal summary, JSON or CSV. Like
+// every writer it lays out what the report holds and computes nothing.
+package plain
+
+import (
+	"fmt"
+	"io"
+	"strings"
+	"text/tabwriter"
+
+	"sepcost/costing/scenario"
+	"sepcost/costing/usage"
+	"sepcost/scale"
+)
+
+// Text writes a terminal summary: per batch mass and method the key
+// figures, the cost and the warnings; then the cautions.
+func Text(w io.Writer, r *scale.Report) error {
+	ew := &errWriter{w: w}
+	ew.printf("%s\n", r.Title)
+	ew.printf("scenario: %s   prices: %s (%s)\n", r.ScenarioFile, r.PricesFile, r.Prices.Currency)
+	for i, m := range r.MassesKg {
+		for j, name := range r.Methods {
+			res := r.Results[i][j]
+			u := res.Usage
+			ew.printf("\n== %s of crude by %s ==\n", scenario.FormatMass(m), name)
+			if !u.Feasible {
+				ew.printf("not feasible: %s\n", u.Reason)
+				continue
+			}
+			tw := tabwriter.NewWriter(ew, 0, 0, 2, ' ', 0)
+			for _, f := range u.Figures {
+				if strings.HasPrefix(f.Key, "solvent:") || f.Key == "k_product" || f.Key == "band_cv" {
+					continue
+				}
+				fmt.Fprintf(tw, "  %s\t%s %s\n", f.Label, num(f.Display()), f.Unit)
+			}
+			el, at := u.Hours()
+			fmt.Fprintf(tw, "  time, elapsed / hands-on\t%s h / %s h\n", num(el), num(at))
+			fmt.Fprintf(tw, "  waste\t%s kg\n", num(u.WasteKg()))
+			for _, g := range usage.Groups {
+				if s := res.Ledger.Subtotal(g); !s.IsZero() {
+					fmt.Fprintf(tw, "  cost: %s\t%s %s\n", g, s.StringFixed(res.Ledger.Places), res.Ledger.Currency)
+				}
+			}
+			fmt.Fprintf(tw, "  TOTAL\t%s %s\n", res.Ledger.Total.StringFixed(res.Ledger.Places), res.Ledger.Currency)
+			if u.ProductOutKg > 0 {
+				perG := res.Ledger.Total.InexactFloat64() / (u.ProductOutKg * 1000)
+				fmt.Fprintf(tw, "  per gram of purified product\t%.2f %s/g\n", perG, res.Ledger.Currency)
+			}
+			if err := tw.Flush(); err != nil {
+				return err
+			}
+			for _, n := range u.Notes {
+				if n.Level != usage.Info {
+					ew.printf("  %s: %s\n", n.Level, n.Text)
+				}
+			}
+		}
+	}
+	if len(r.Cautions) > 0 {
+		ew.printf("\nCautions:\n")
+		for _, c := range r.Cautions {
+			ew.printf("  - %s\n", c)
+		}
+	}
+	return ew.err
+}
+
+// num prints a figure with about four significant digits.
+func num(v float64) string {
+	switch {
+	case v == 0:
+		return "0"
+	case v >= 1000 || v <= -1000:
+		return fmt.Sprintf("%.0f", v)
+	default:
+		return strings.TrimSuffix(strings.TrimRight(fmt.Sprintf("%.4g", v), "."), ".")
+	}
+}
+
+type errWriter struct {
+	w   io.Writer
+	err error
+}
+
+func (e *errWriter) Write(p []byte) (int, error) {
+	if e.err != nil {
+		return 0, e.err
+	}
+	n, err := e.w.Write(p)
+	e.err = err
+	return n, err
+}
+
+func (e *errWriter) printf(format string, a ...any) { fmt.Fprintf(e, format, a...) }

@@ -1,0 +1,49 @@
+package main
+
+import (
+	"fmt"
+	"sort"
+	"strings"
+
+	"sepcost/costing/units"
+)
+
+// massList is a pflag.Value for "--mass 250mg,20g,2kg": masses with units.
+type massList struct {
+	kg  []float64
+	set bool
+}
+
+func (m *massList) String() string {
+	parts := make([]string, len(m.kg))
+	for i, v := range m.kg {
+		parts[i] = fmt.Sprintf("%g kg", v)
+	}
+	return strings.Join(parts, ",")
+}
+
+func (m *massList) Set(s string) error {
+	m.kg = nil
+	for _, part := range strings.Split(s, ",") {
+		part = strings.TrimSpace(part)
+		if part == "" {
+			continue
+		}
+		v, err := units.ParseAs(part, units.Mass)
+		if err != nil {
+			return fmt.Errorf("--mass %q: %v", part, err)
+		}
+		if v <= 0 {
+			return fmt.Errorf("--mass %q: a batch mass must be above zero", part)
+		}
+		m.kg = append(m.kg, v)
+	}
+	if len(m.kg) == 0 {
+		return fmt.Errorf(`--mass: give at least one mass with its unit, e.g. "250mg,20g,2kg"`)
+	}
+	sort.Float64s(m.kg)
+	m.set = true
+	return nil
+}
+
+func (m *massList) Type() string { return "masses" }

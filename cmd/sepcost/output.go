@@ -1,0 +1,95 @@
+package main
+
+import (
+	"bytes"
+	"errors"
+	"fmt"
+	"io/fs"
+	"os"
+	"path/filepath"
+	"strings"
+)
+
+// ErrExists is returned when an output file exists and --force was not given.
+var ErrExists = errors.New("output file exists")
+
+// writeFile writes data to path through a temporary file in the same folder
+// and a rename, so a failed write never leaves half a file. Without force,
+// an existing file is refused and left untouched.
+func writeFile(path string, data []byte, force bool) error {
+	if !force {
+		if _, err := os.Stat(path); err == nil {
+			return fmt.Errorf("%s: %w; choose another name with -o or add --force to replace it", path, ErrExists)
+		} else if !errors.Is(err, fs.ErrNotExist) {
+			return err
+		}
+	}
+	dir := filepath.Dir(path)
+	tmp, err := os.CreateTemp(dir, "."+filepath.Base(path)+".*.tmp")
+	if err != nil {
+		return fmt.Errorf("cannot write in %s: %w", dir, err)
+	}
+	name := tmp.Name()
+	_, werr := tmp.Write(data)
+	cerr := tmp.Close()
+	if werr != nil || cerr != nil {
+		os.Remove(name)
+		return fmt.Errorf("writing %s: %w", path, errors.Join(werr, cerr))
+	}
+	if force {
+		err = os.Rename(name, path)
+	} else {
+		// Link fails if the target appeared meanwhile: never clobber.
+		err = os.Link(name, path)
+		os.Remove(name)
+	}
+	if err != nil {
+		os.Remove(name)
+		if errors.Is(err, fs.ErrExist) {
+			return fmt.Errorf("%s: %w; add --force to replace it", path, ErrExists)
+		}
+		return fmt.Errorf("writing %s: %w", path, err)
+	}
+	return nil
+}
+
+// formatFor decides the output format: the --format flag, else from the
+// -o file's extension, else text to the terminal.
+func formatFor(flag, out string) (string, error) {
+	f := strings.ToLower(flag)
+	if f == "" {
+		switch strings.ToLower(filepath.Ext(out)) {
+		case ".xlsx":
+			f = "xlsx"
+		case ".json":
+			f = "json"
+		case ".csv":
+			f = "csv"
+		case "":
+			f = "text"
+		default:
+			f = "text"
+			if out != "" {
+				return "", usageError{fmt.Errorf("-o %s: cannot tell the format from the extension; add --format xlsx, json, csv or text", out)}
+			}
+		}
+	}
+	switch f {
+	case "xlsx", "json", "csv", "text":
+	default:
+		return "", usageError{fmt.Errorf("--format %q: write xlsx, json, csv or text", flag)}
+	}
+	if f == "xlsx" && out == "" {
+		return "", usageError{errors.New("--format xlsx needs an output file: add -o plan.xlsx")}
+	}
+	return f, nil
+}
+
+// emit writes rendered output to the file or to stdout.
+func emit(buf *bytes.Buffer, out string, force bool, stdout interface{ Write([]byte) (int, error) }) error {
+	if out == "" || out == "-" {
+		_, err := stdout.Write(buf.Bytes())
+		return err
+	}
+	return writeFile(out, buf.Bytes(), force)
+}

@@ -1,0 +1,74 @@
+package main
+
+import (
+	"context"
+	"errors"
+	"io"
+	"strings"
+
+	"github.com/spf13/cobra"
+)
+
+// usageError marks a mistake in the command line itself (exit code 2).
+type usageError struct{ err error }
+
+func (e usageError) Error() string { return e.err.Error() }
+func (e usageError) Unwrap() error { return e.err }
+
+// exitCode maps an error to the process exit code: 0 ok, 1 failure, 2 usage.
+func exitCode(err error) int {
+	if err == nil {
+		return 0
+	}
+	var u usageError
+	if errors.As(err, &u) {
+		return 2
+	}
+	return 1
+}
+
+// newRootCommand builds the command tree. Commands are built fresh each
+// call so that flag values never leak between runs (tests run many).
+func newRootCommand() *cobra.Command {
+	root := &cobra.Command{
+		Use:   "sepcost",
+		Short: "Cost the purification of a compound from milligrams to kilograms",
+		Long: `sepcost reads a scenario (TLC Rf values and eluent, crude purity, batch masses)
+and a price table, models flash chromatography on silica at each batch mass,
+and writes the plan: silica, columns, solvent, time, waste, cost and cautions.`,
+		SilenceUsage:  true,
+		SilenceErrors: true,
+	}
+	root.SetFlagErrorFunc(func(c *cobra.Command, err error) error { return usageError{err} })
+	root.AddCommand(newDemoCommand(), newInitCommand(), newEstimateCommand(), newCheckCommand(), newSolventsCommand())
+	return root
+}
+
+// run executes the command line with injected streams.
+func run(ctx context.Context, args []string, stdout, stderr io.Writer) error {
+	root := newRootCommand()
+	root.SetArgs(args)
+	root.SetOut(stdout)
+	root.SetErr(stderr)
+	root.SetContext(ctx)
+	cmd, err := root.ExecuteC()
+	if err != nil && cmd != nil && isArgError(err) {
+		return usageError{err}
+	}
+	return err
+}
+
+// isArgError recognises cobra's own argument and command errors.
+func isArgError(err error) bool {
+	var u usageError
+	if errors.As(err, &u) {
+		return false
+	}
+	msg := err.Error()
+	for _, p := range []string{"unknown command", "accepts ", "requires at least", "requires exactly", "unknown flag", "unknown shorthand", "invalid argument"} {
+		if strings.Contains(msg, p) {
+			return true
+		}
+	}
+	return false
+}

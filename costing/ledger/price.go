@@ -1,0 +1,161 @@
+package ledger
+
+import (
+	"errors"
+	"fmt"
+	"math"
+	"strings"
+
+	"github.com/shopspring/decimal"
+
+	"sepcost/costing/prices"
+	"sepcost/costing/usage"
+)
+
+// QtyPlaces is the number of decimal places to which a line's quantity, in
+// the price item's unit, is rounded before it is multiplied by the price:
+// a millionth of a kilogram, litre, hour or kWh. It removes the binary
+// noise of float64 (0.125 L arriving as 0.12500000000000003) so that the
+// quantity printed on a line and in a workbook is the one priced.
+const QtyPlaces = 6
+
+// Price turns one usage into a ledger: each demand, in the order of
+// u.Demands, becomes a line priced by the table item that Find returns for
+// the demand's Item.
+//
+// Rounding rule: round half away from zero to the currency's minor unit,
+// line by line; totals are sums of rounded lines.
+//
+//	q      = Q / f                        quantity in the price unit
+//	qty    = round(q, QtyPlaces)
+//	amount = round(qty × p, m)            half away from zero
+//	Total  = Σ amount
+//
+// where Q is the demand's quantity in SI units (kg, m³, s, J, each), f the
+// price unit's factor to SI (units.Unit.Factor: 1e-3 for L, 3600 for h,
+// 3.6e6 for kWh), p the unit price (exact decimal from the table) and m =
+// prices.MinorUnits(currency) (2 for EUR, 0 for JPY, 3 for KWD; ISO 4217).
+// decimal.Round rounds half away from zero (shopspring/decimal v1.6.0,
+// read in its source), as the spreadsheet ROUND function does (OASIS
+// OpenDocument 1.2 Part 2, OpenFormula, ROUND, from memory; OpenOffice.org
+// Calc Guide 3.2, "symmetric arithmetic rounding", confirmed), so a
+// workbook cell =ROUND(qty*price, m) reproduces each line to the cent and
+// the total reconciles with the printed lines exactly. A negative quantity
+// (a credit) gives a negative amount, rounded symmetrically.
+//
+// Valid range: any finite quantity of either sign. A quantity smaller than
+// 5×10⁻⁷ of the price unit (under 0.5 mg of an item priced per kg) prices
+// as zero.
+//
+// Errors: every item the table lacks is listed in one *MissingPrices
+// (ErrMissingPrice); a demand whose dimension differs from its item's unit
+// gives a *DimensionError (ErrDimension); a NaN or infinite quantity, or a
+// demand that names no item, gives a *QuantityError (ErrQuantity). All
+// problems are returned together (errors.Join when there are several
+// kinds), and no ledger is returned with them.
+func Price(u usage.Usage, t *prices.Table) (Ledger, error) {
+	if t == nil {
+		return Ledger{}, errors.New("ledger: no price table")
+	}
+	var miss missingSet
+	l, errs := price(u, t, &miss)
+	if e := miss.err(t.File, t.Currency); e != nil {
+		errs = append(errs, e)
+	}
+	if err := joinErrors(errs); err != nil {
+		return Ledger{}, err
+	}
+	return l, nil
+}
+
+// PriceAll prices many usages (methods and batch masses) against one
+// table. Missing prices from all of them come back as one *MissingPrices
+// naming each item once with all its uses; other problems are returned
+// alongside, each distinct problem once. On error no ledgers are returned.
+func PriceAll(us []usage.Usage, t *prices.Table) ([]Ledger, error) {
+	if t == nil {
+		return nil, errors.New("ledger: no price table")
+	}
+	var miss missingSet
+	var errs []error
+	seen := map[string]bool{}
+	out := make([]Ledger, len(us))
+	for i, u := range us {
+		l, es := price(u, t, &miss)
+		for _, e := range es {
+			// The same model fault repeats at every batch mass; say it once.
+			if s := e.Error(); !seen[s] {
+				seen[s] = true
+				errs = append(errs, e)
+			}
+		}
+		out[i] = l
+	}
+	if e := miss.err(t.File, t.Currency); e != nil {
+		errs = append(errs, e)
+	}
+	if err := joinErrors(errs); err != nil {
+		return nil, err
+	}
+	return out, nil
+}
+
+// price builds the ledger of one usage, adding missing items to miss and
+// returning the other problems.
+func price(u usage.Usage, t *prices.Table, miss *missingSet) (Ledger, []error) {
+	places := prices.MinorUnits(t.Currency)
+	l := Ledger{Currency: t.Currency, Places: places, Total: decimal.Zero}
+	var errs []error
+	for _, d := range u.Demands {
+		if strings.TrimSpace(d.Item) == "" {
+			errs = append(errs, &QuantityError{Method: u.Method, Label: d.Label, Qty: d.Qty,
+				Msg: "the demand names no price item"})
+			continue
+		}
+		if math.IsNaN(d.Qty) || math.IsInf(d.Qty, 0) {
+			errs = append(errs, &QuantityError{Method: u.Method, Item: d.Item, Label: d.Label, Qty: d.Qty,
+				Msg: fmt.Sprintf("quantity is %v; the model produced no usable number", d.Qty)})
+			continue
+		}
+		idx, ok := t.Find(d.Item)
+		if !ok {
+			miss.add(u.Method, d)
+			continue
+		}
+		it := t.Items[idx]
+		if it.Per.Dim != d.Dim {
+			errs = append(errs, &DimensionError{Item: d.Item, Label: d.Label, Group: d.Group,
+				File: t.File, Line: it.Line, Unit: it.Unit, Priced: it.Per.Dim, Used: d.Dim})
+			continue
+		}
+		q := d.Qty / it.Per.Factor
+		if math.IsNaN(q) || math.IsInf(q, 0) {
+			errs = append(errs, &QuantityError{Method: u.Method, Item: d.Item, Label: d.Label, Qty: q, Unit: it.Unit,
+				Msg: fmt.Sprintf("quantity is %v %s after conversion to the price unit; the model produced no usable number", q, it.Unit)})
+			continue
+		}
+		qty := decimal.NewFromFloat(q).Round(QtyPlaces)
+		amount := qty.Mul(it.Price).Round(places)
+		l.Lines = append(l.Lines, Line{
+			Demand:    d,
+			PriceRow:  idx,
+			Qty:       qty,
+			Unit:      it.Unit,
+			UnitPrice: it.Price,
+			Amount:    amount,
+		})
+		l.Total = l.Total.Add(amount)
+	}
+	return l, errs
+}
+
+// joinErrors is nil for none, the error itself for one, else errors.Join.
+func joinErrors(errs []error) error {
+	switch len(errs) {
+	case 0:
+		return nil
+	case 1:
+		return errs[0]
+	}
+	return errors.Join(errs...)
+}

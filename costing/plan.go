@@ -1,0 +1,148 @@
+// Package costing costs one purification at one batch mass: it prepares a
+// checked scenario (model coefficients with the user's settings applied and
+// calibrations run), runs each applicable method model to get physical
+// usage, and prices that usage into a ledger.
+package costing
+
+import (
+	"errors"
+	"fmt"
+	"sort"
+
+	"sepcost/costing/chrom"
+	"sepcost/costing/ledger"
+	"sepcost/costing/prices"
+	"sepcost/costing/scenario"
+	"sepcost/costing/source"
+	"sepcost/costing/units"
+	"sepcost/costing/usage"
+)
+
+// Method is one purification method ready to run at any batch mass.
+type Method struct {
+	Name string
+	Run  func(crudeKg float64) usage.Usage
+}
+
+// Plan is a scenario with its model coefficients settled.
+type Plan struct {
+	Scenario *scenario.Scenario
+	Coef     source.Set
+	Methods  []Method
+}
+
+// Result is one method at one batch mass: physical usage and its ledger.
+type Result struct {
+	Usage  usage.Usage
+	Ledger ledger.Ledger
+}
+
+// Prepare settles the coefficients: model defaults, the user's settings
+// (each checked for a known key and the right dimension), then the
+// calibrations that depend on them. Problems name the scenario file, line
+// and setting.
+func Prepare(sc *scenario.Scenario) (*Plan, error) {
+	coef := source.NewSet(chrom.Defaults())
+	var problems scenario.Problems
+	calibrated := map[string]bool{chrom.KeyQs: true, chrom.KeyPlates: true}
+	apply := func(later bool) {
+		for _, s := range sc.Settings {
+			if calibrated[s.Key] != later {
+				continue
+			}
+			if err := coef.Override(s.Key, s.Value, s.Written); err != nil {
+				problems = append(problems, &scenario.Problem{File: sc.File, Line: s.Line, Field: "settings." + s.Key, Msg: err.Error()})
+			}
+		}
+	}
+	apply(false)
+	chrom.AddCalibration(coef)
+	apply(true)
+	if len(problems) > 0 {
+		return nil, problems
+	}
+	p := &Plan{Scenario: sc, Coef: coef}
+	if sc.Chromatography != nil {
+		p.Methods = append(p.Methods, Method{Name: chrom.Method, Run: func(m float64) usage.Usage { return chrom.Run(sc, coef, m) }})
+	}
+	if len(p.Methods) == 0 {
+		return nil, &scenario.Problem{File: sc.File, Msg: "describes no purification method; add a chromatography: section (see `sepcost init`)"}
+	}
+	return p, nil
+}
+
+// MethodNames lists the plan's methods in order.
+func (p *Plan) MethodNames() []string {
+	names := make([]string, len(p.Methods))
+	for i, m := range p.Methods {
+		names[i] = m.Name
+	}
+	return names
+}
+
+// Run runs every method at every mass and prices the results. Missing
+// prices from all runs come back together in one error.
+func (p *Plan) Run(massesKg []float64, t *prices.Table) ([][]Result, error) {
+	var us []usage.Usage
+	for _, m := range massesKg {
+		if !(m > 0) {
+			return nil, fmt.Errorf("batch mass %g kg: %w", m, units.ErrUnit)
+		}
+		for _, meth := range p.Methods {
+			us = append(us, meth.Run(m))
+		}
+	}
+	ls, err := ledger.PriceAll(us, t)
+	if err != nil {
+		return nil, err
+	}
+	out := make([][]Result, len(massesKg))
+	k := 0
+	for i := range massesKg {
+		out[i] = make([]Result, len(p.Methods))
+		for j := range p.Methods {
+			out[i][j] = Result{Usage: us[k], Ledger: ls[k]}
+			k++
+		}
+	}
+	return out, nil
+}
+
+// Coefficients lists every coefficient the plan uses, with the properties of
+// the solvents the scenario names.
+func (p *Plan) Coefficients() []source.Coefficient {
+	out := p.Coef.Sorted()
+	for _, id := range p.SolventsUsed() {
+		if s, ok := p.Scenario.Solvents.Find(id); ok {
+			out = append(out, s.Coefficients()...)
+		}
+	}
+	return out
+}
+
+// SolventsUsed lists the ids of the solvents the scenario's methods use.
+func (p *Plan) SolventsUsed() []string {
+	seen := map[string]bool{}
+	if ch := p.Scenario.Chromatography; ch != nil {
+		for _, part := range ch.TLCEluent {
+			seen[part.Solvent] = true
+		}
+		for _, st := range ch.Gradient {
+			for _, part := range st.Eluent {
+				seen[part.Solvent] = true
+			}
+		}
+		if ch.LoadingSolvent != "" {
+			seen[ch.LoadingSolvent] = true
+		}
+	}
+	ids := make([]string, 0, len(seen))
+	for id := range seen {
+		ids = append(ids, id)
+	}
+	sort.Strings(ids)
+	return ids
+}
+
+// ErrNoMethod is returned when a scenario describes no method.
+var ErrNoMethod = errors.New("no purification method described")

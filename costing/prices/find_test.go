@@ -1,0 +1,61 @@
+package prices
+
+import (
+	"strings"
+	"testing"
+)
+
+func TestFind(t *testing.T) {
+	// Items invented for the test (common practice, no source).
+	tb, err := Read(strings.NewReader(header+
+		"silica gel,kg,48.60,EUR,,,\n"+
+		"ethyl acetate,L,12.40,EUR,,,\n"+
+		"Straße salt,kg,1,EUR,,,\n"), "prices.csv")
+	if err != nil {
+		t.Fatal(err)
+	}
+	tests := []struct {
+		name string
+		idx  int
+		ok   bool
+	}{
+		{"silica gel", 0, true},
+		{"Silica Gel", 0, true},
+		{"  SILICA GEL\t", 0, true},
+		{"ethyl acetate", 1, true},
+		{"STRASSE SALT", 0, false}, // simple case folding does not turn ß into ss; that is a full folding (Unicode CaseFolding.txt, status F; from memory)
+		{"straße SALT", 2, true},
+		{"silica", 0, false},
+		{"", 0, false},
+		{"   ", 0, false},
+	}
+	for _, tc := range tests {
+		idx, ok := tb.Find(tc.name)
+		if ok != tc.ok || (ok && idx != tc.idx) {
+			t.Errorf("Find(%q) = %d, %v; want %d, %v", tc.name, idx, ok, tc.idx, tc.ok)
+		}
+	}
+	var none *Table
+	if _, ok := none.Find("silica gel"); ok {
+		t.Errorf("Find on a nil table found something")
+	}
+}
+
+// nameKey must agree with strings.EqualFold, which Find uses, so that Read
+// refuses exactly the duplicates Find could confuse.
+func TestNameKeyAgreesWithEqualFold(t *testing.T) {
+	pairs := [][2]string{
+		{"silica gel", "SILICA GEL"},
+		{"Kelvin", "\u212Aelvin"}, // KELVIN SIGN folds to k (Unicode CaseFolding.txt; from memory)
+		{"σ", "Σ"}, {"ς", "Σ"},    // final and medial sigma share a folding orbit (from memory)
+		{"straße", "STRASSE"},
+		{"a", "b"},
+		{"\xff", "\xfe"},
+	}
+	for _, p := range pairs {
+		a, b := p[0], p[1]
+		if (nameKey(a) == nameKey(b)) != strings.EqualFold(a, b) {
+			t.Errorf("nameKey and EqualFold disagree on %q, %q", a, b)
+		}
+	}
+}
