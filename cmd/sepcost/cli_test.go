@@ -1,0 +1,198 @@
+package main
+
+import (
+	"bytes"
+	"context"
+	"encoding/json"
+	"errors"
+	"os"
+	"path/filepath"
+	"strings"
+	"testing"
+)
+
+func runCLI(t *testing.T, args ...string) (string, string, error) {
+	t.Helper()
+	var out, errOut bytes.Buffer
+	err := run(context.Background(), args, &out, &errOut)
+	return out.String(), errOut.String(), err
+}
+
+// Every command answers --help with its usage and exit code 0.
+func TestHelpEveryCommand(t *testing.T) {
+	root := newRootCommand()
+	names := []string{""}
+	for _, c := range root.Commands() {
+		names = append(names, c.Name())
+	}
+	for _, n := range names {
+		args := []string{"--help"}
+		if n != "" {
+			args = []string{n, "--help"}
+		}
+		out, _, err := runCLI(t, args...)
+		if err != nil || !strings.Contains(out, "Usage:") {
+			t.Errorf("%s --help: err %v, output %q", n, err, out)
+		}
+	}
+}
+
+func TestUsageErrorsExit2(t *testing.T) {
+	for _, args := range [][]string{
+		{"estimate"},
+		{"nosuchcommand"},
+		{"estimate", "x.yaml", "--mass", "20"},
+		{"estimate", "x.yaml", "--format", "pdf"},
+		{"demo", "--bogus"},
+	} {
+		_, _, err := runCLI(t, args...)
+		if exitCode(err) != 2 {
+			t.Errorf("%v: exit %d (%v), want 2", args, exitCode(err), err)
+		}
+	}
+}
+
+// init writes both files, estimate reads them; outputs are never
+// overwritten without --force, and a refused file is left untouched.
+func TestInitEstimateAndOverwrite(t *testing.T) {
+	dir := t.TempDir()
+	out, _, err := runCLI(t, "init", filepath.Join(dir, "case"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	if !strings.Contains(out, "scenario.yaml") {
+		t.Errorf("init output %q", out)
+	}
+	if _, _, err := runCLI(t, "init", filepath.Join(dir, "case")); !errors.Is(err, ErrExists) {
+		t.Errorf("second init: %v, want refusal", err)
+	}
+	sc := filepath.Join(dir, "case", "scenario.yaml")
+	pr := filepath.Join(dir, "case", "prices.csv")
+
+	out, _, err = runCLI(t, "estimate", sc, "--prices", pr, "--mass", "0.25g,20g,2kg", "--format", "json")
+	if err != nil {
+		t.Fatal(err)
+	}
+	var doc struct {
+		Currency string
+		Batches  []struct {
+			CrudeKg float64 `json:"crude_kg"`
+			Methods []struct {
+				Method string
+				Total  string
+			}
+		}
+	}
+	if err := json.Unmarshal([]byte(out), &doc); err != nil {
+		t.Fatalf("json: %v\n%s", err, out)
+	}
+	if doc.Currency != "EUR" || len(doc.Batches) != 3 || doc.Batches[2].CrudeKg != 2 || doc.Batches[0].Methods[0].Method != "chromatography" {
+		t.Errorf("json = %+v", doc)
+	}
+
+	target := filepath.Join(dir, "plan.json")
+	if err := os.WriteFile(target, []byte("keep me"), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	_, _, err = runCLI(t, "estimate", sc, "--prices", pr, "-o", target)
+	if !errors.Is(err, ErrExists) || exitCode(err) != 1 {
+		t.Errorf("existing output: %v", err)
+	}
+	if b, _ := os.ReadFile(target); string(b) != "keep me" {
+		t.Errorf("refused output was changed: %q", b)
+	}
+	if _, _, err := runCLI(t, "estimate", sc, "--prices", pr, "-o", target, "--force"); err != nil {
+		t.Fatal(err)
+	}
+	if b, _ := os.ReadFile(target); !bytes.HasPrefix(b, []byte("{")) {
+		t.Errorf("--force did not replace the file")
+	}
+	// No temporary files left behind.
+	entries, _ := os.ReadDir(dir)
+	for _, e := range entries {
+		if strings.HasSuffix(e.Name(), ".tmp") {
+			t.Errorf("left %s", e.Name())
+		}
+	}
+
+	csvOut, _, err := runCLI(t, "estimate", sc, "--prices", pr, "--format", "csv")
+	if err != nil || !strings.HasPrefix(csvOut, "crude_kg,method,group,item") {
+		t.Errorf("csv: %v %q", err, csvOut[:min(80, len(csvOut))])
+	}
+	text, _, err := runCLI(t, "estimate", sc, "--prices", pr)
+	if err != nil || !strings.Contains(text, "TOTAL") || !strings.Contains(text, "Cautions") {
+		t.Errorf("text: %v", err)
+	}
+}
+
+func TestCheck(t *testing.T) {
+	dir := t.TempDir()
+	if _, _, err := runCLI(t, "init", dir); err != nil {
+		t.Fatal(err)
+	}
+	sc := filepath.Join(dir, "scenario.yaml")
+	pr := filepath.Join(dir, "prices.csv")
+	out, _, err := runCLI(t, "check", sc, "--prices", pr)
+	if err != nil || !strings.Contains(out, "reads cleanly") {
+		t.Fatalf("check good: %v\n%s", err, out)
+	}
+
+	// Break both files: several problems, all listed, exit 1.
+	y, _ := os.ReadFile(sc)
+	y = bytes.Replace(y, []byte("product_rf: 0.30"), []byte("product_rf: 1.30"), 1)
+	y = bytes.Replace(y, []byte(`masses: ["250 mg"`), []byte(`masses: [250`), 1)
+	os.WriteFile(sc, y, 0o644)
+	p, _ := os.ReadFile(pr)
+	p = bytes.Replace(p, []byte("tlc plate,each,1.50,EUR"), []byte("tlc plate,each,1.50,USD"), 1)
+	os.WriteFile(pr, p, 0o644)
+	out, _, err = runCLI(t, "check", sc, "--prices", pr)
+	if exitCode(err) != 1 {
+		t.Fatalf("check bad: exit %d", exitCode(err))
+	}
+	for _, w := range []string{"chromatography.product_rf", "masses[0]", "has no unit", "currency", "USD"} {
+		if !strings.Contains(out, w) {
+			t.Errorf("check output lacks %q:\n%s", w, out)
+		}
+	}
+}
+
+// Missing prices are listed together, each with a line to add.
+func TestMissingPrices(t *testing.T) {
+	dir := t.TempDir()
+	if _, _, err := runCLI(t, "init", dir); err != nil {
+		t.Fatal(err)
+	}
+	pr := filepath.Join(dir, "prices.csv")
+	p, _ := os.ReadFile(pr)
+	var keep []string
+	for _, line := range strings.Split(string(p), "\n") {
+		if strings.HasPrefix(line, "silica gel,") || strings.HasPrefix(line, "chemist time,") {
+			continue
+		}
+		keep = append(keep, line)
+	}
+	os.WriteFile(pr, []byte(strings.Join(keep, "\n")), 0o644)
+	_, _, err := runCLI(t, "estimate", filepath.Join(dir, "scenario.yaml"), "--prices", pr)
+	if err == nil || !strings.Contains(err.Error(), "silica gel") || !strings.Contains(err.Error(), "chemist time") {
+		t.Errorf("missing prices error: %v", err)
+	}
+}
+
+func TestMissingFiles(t *testing.T) {
+	_, _, err := runCLI(t, "estimate", "no/such/scenario.yaml", "--prices", "x.csv")
+	if err == nil || !strings.Contains(err.Error(), "no/such/scenario.yaml") {
+		t.Errorf("missing scenario: %v", err)
+	}
+}
+
+func TestSolventsCommand(t *testing.T) {
+	out, _, err := runCLI(t, "solvents")
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, w := range []string{"ethyl acetate", "dichloromethane", "Sources", "from memory"} {
+		if !strings.Contains(out, w) {
+			t.Errorf("solvents output lacks %q", w)
+		}
+	}
+}
