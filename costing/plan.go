@@ -7,6 +7,7 @@ package costing
 import (
 	"errors"
 	"fmt"
+	"math"
 	"sort"
 
 	"sepcost/costing/chrom"
@@ -146,3 +147,22 @@ func (p *Plan) SolventsUsed() []string {
 
 // ErrNoMethod is returned when a scenario describes no method.
 var ErrNoMethod = errors.New("no purification method described")
+
+// RunOne runs method j at one mass and prices it.
+func (p *Plan) RunOne(j int, crudeKg float64, t *prices.Table) (Result, error) {
+	u := p.Methods[j].Run(crudeKg)
+	l, err := ledger.Price(u, t)
+	if err != nil {
+		return Result{}, err
+	}
+	return Result{Usage: u, Ledger: l}, nil
+}
+
+// PerGram is the cost per gram of purified product, or NaN when the
+// method is not feasible or recovers nothing.
+func (r Result) PerGram() float64 {
+	if !r.Usage.Feasible || r.Usage.ProductOutKg <= 0 {
+		return math.NaN()
+	}
+	return r.Ledger.Total.InexactFloat64() / (r.Usage.ProductOutKg * 1000)
+}

@@ -126,6 +126,10 @@ func Run(sc *scenario.Scenario, coef source.Set, crudeKg float64) usage.Usage {
 	v0PerKg := ColumnVolumePerMass(rhoB, get(KeySkeletalDensity))
 	v0 := col.Silica * v0PerKg
 	area := math.Pi * col.Diameter * col.Diameter / 4
+	u.Equipment = fmt.Sprintf("%.0f mm column, %.0f cm bed", col.Diameter*1000, col.BedHeight*100)
+	if col.Runs > 1 {
+		u.Equipment += fmt.Sprintf(" × %d runs", col.Runs)
+	}
 	fig("silica_needed", "silica needed by the loading rule", silicaNeeded, "g")
 	fig("column_diameter", "column inner diameter", col.Diameter, "mm")
 	fig("bed_height", "bed height", col.BedHeight, "cm")

@@ -100,6 +100,12 @@ func resolve(c *collector, raw *rawScenario, root *yaml.Node) *Scenario {
 	if raw.Chromatography != nil {
 		s.Chromatography = c.chromatography(raw.Chromatography, s, root, echo)
 	}
+	if raw.Crystallization != nil {
+		s.Crystallization = c.crystallization(raw.Crystallization, s, root, echo)
+	}
+	if raw.Distillation != nil {
+		s.Distillation = c.distillation(raw.Distillation, s, root, echo)
+	}
 
 	// Settings: checked against the models' coefficient tables later (costing.Prepare).
 	keys := make([]string, 0, len(raw.Settings))

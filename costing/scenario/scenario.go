@@ -74,6 +74,8 @@ type Scenario struct {
 	Purity          float64   // mass fraction of product in the crude
 	NearestImpurity float64   // mass fraction of the crude that is the nearest-running impurity
 	Chromatography  *Chromatography
+	Crystallization *Crystallization // nil when the scenario has no crystallization section
+	Distillation    *Distillation    // nil when the scenario has no distillation section
 	Settings        []Setting
 	Solvents        *solvent.Book
 	Notes           string

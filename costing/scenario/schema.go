@@ -5,16 +5,18 @@ package scenario
 // Field names here are the names a user writes (see templates/scenario.yaml).
 
 type rawScenario struct {
-	Name           Text              `yaml:"name"`
-	Product        Text              `yaml:"product"`
-	Masses         []Text            `yaml:"masses"`
-	TargetMass     Text              `yaml:"target_mass"`
-	Crude          rawCrude          `yaml:"crude"`
-	Chromatography *rawChrom         `yaml:"chromatography"`
-	Settings       map[string]Text   `yaml:"settings"`
-	Solvents       []rawSolvent      `yaml:"solvents"`
-	Notes          Text              `yaml:"notes"`
-	Extra          map[string]rawAny `yaml:",inline"`
+	Name            Text              `yaml:"name"`
+	Product         Text              `yaml:"product"`
+	Masses          []Text            `yaml:"masses"`
+	TargetMass      Text              `yaml:"target_mass"`
+	Crude           rawCrude          `yaml:"crude"`
+	Chromatography  *rawChrom         `yaml:"chromatography"`
+	Crystallization *rawCryst         `yaml:"crystallization"`
+	Distillation    *rawDistil        `yaml:"distillation"`
+	Settings        map[string]Text   `yaml:"settings"`
+	Solvents        []rawSolvent      `yaml:"solvents"`
+	Notes           Text              `yaml:"notes"`
+	Extra           map[string]rawAny `yaml:",inline"`
 }
 
 // rawAny catches unknown keys so that they are reported with their line.

@@ -113,6 +113,7 @@ type Usage struct {
 	ProductOutKg float64 // purified product recovered
 	Feasible     bool
 	Reason       string // why not feasible
+	Equipment    string // the equipment used, in words, e.g. "300 mm column × 51 runs"
 	Figures      []Figure
 	Demands      []Demand
 	Waste        []Stream
