@@ -27,6 +27,10 @@ func Estimate(p *costing.Plan, t *prices.Table, massesKg []float64) (*Report, er
 		Coefficients: p.Coefficients(),
 		Cautions:     p.Cautions(),
 	}
+	r.TargetKg = sc.TargetKg
+	if r.Decision, err = Decide(p, t, sc.TargetKg); err != nil {
+		return nil, err
+	}
 	for _, in := range sc.Inputs {
 		r.Inputs = append(r.Inputs, Input(in))
 	}

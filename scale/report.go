@@ -31,4 +31,8 @@ type Report struct {
 	Coefficients []source.Coefficient
 	Cautions     []string     // safety cautions that apply to this scenario
 	Notes        []usage.Note // scenario-wide notes and warnings
+	TargetKg     float64      // the batch mass the decision is made at
+	Decision     *Decision    // the recommendation at TargetKg
+	Crossovers   []Crossover  // masses where methods change places (sweeps only)
+	IsSweep      bool         // the masses are a log-spaced curve
 }

@@ -30,6 +30,9 @@ func writeFile(path string, data []byte, force bool) error {
 		return fmt.Errorf("cannot write in %s: %w", dir, err)
 	}
 	name := tmp.Name()
+	// CreateTemp makes the file private (0600); an output is an ordinary
+	// document, readable by others (0644).
+	_ = tmp.Chmod(0o644)
 	_, werr := tmp.Write(data)
 	cerr := tmp.Close()
 	if werr != nil || cerr != nil {

@@ -13,12 +13,42 @@ import (
 // that scripts read exact amounts; physical figures as numbers in their
 // display units.
 type jsonReport struct {
-	Title    string      `json:"title"`
-	Scenario string      `json:"scenario"`
-	Prices   string      `json:"prices"`
-	Currency string      `json:"currency"`
-	Batches  []jsonBatch `json:"batches"`
-	Cautions []string    `json:"cautions"`
+	Title      string          `json:"title"`
+	Scenario   string          `json:"scenario"`
+	Prices     string          `json:"prices"`
+	Currency   string          `json:"currency"`
+	Batches    []jsonBatch     `json:"batches"`
+	Decision   *jsonDecision   `json:"decision,omitempty"`
+	Crossovers []jsonCrossover `json:"crossovers,omitempty"`
+	Cautions   []string        `json:"cautions"`
+}
+
+type jsonDecision struct {
+	TargetKg    float64           `json:"target_kg"`
+	Winner      string            `json:"method"`
+	RunnerUp    string            `json:"runner_up,omitempty"`
+	WinnerPerG  float64           `json:"cost_per_g"`
+	RunnerPerG  float64           `json:"runner_up_cost_per_g,omitempty"`
+	Margin      float64           `json:"margin"`
+	Tie         bool              `json:"tie"`
+	Infeasible  map[string]string `json:"infeasible,omitempty"`
+	Explanation []string          `json:"explanation"`
+	Flips       []jsonFlip        `json:"break_even_prices,omitempty"`
+}
+
+type jsonFlip struct {
+	Item      string `json:"item"`
+	Unit      string `json:"unit"`
+	Price     string `json:"price"`
+	BreakEven string `json:"break_even"`
+	Rising    bool   `json:"flips_when_rising"`
+}
+
+type jsonCrossover struct {
+	MassKg       float64 `json:"crude_kg"`
+	CheaperBelow string  `json:"cheaper_below"`
+	CheaperAbove string  `json:"cheaper_above"`
+	Step         bool    `json:"at_equipment_step"`
 }
 
 type jsonBatch struct {
@@ -106,6 +136,22 @@ func JSON(w io.Writer, r *scale.Report) error {
 			b.Methods = append(b.Methods, jm)
 		}
 		out.Batches = append(out.Batches, b)
+	}
+	if d := r.Decision; d != nil {
+		jd := &jsonDecision{TargetKg: d.TargetKg, Winner: d.Winner, RunnerUp: d.RunnerUp, Margin: d.Margin, Tie: d.Tie, Infeasible: d.Infeasible, Explanation: d.Explanation}
+		if !math.IsNaN(d.WinnerPerG) {
+			jd.WinnerPerG = d.WinnerPerG
+		}
+		if d.RunnerUp != "" {
+			jd.RunnerPerG = d.RunnerPerG
+		}
+		for _, f := range d.Flips {
+			jd.Flips = append(jd.Flips, jsonFlip{f.Item, f.Unit, f.Price.String(), f.BreakEven.String(), f.Rising})
+		}
+		out.Decision = jd
+	}
+	for _, c := range r.Crossovers {
+		out.Crossovers = append(out.Crossovers, jsonCrossover{c.MassKg, c.CheaperBelow, c.CheaperAbove, c.Step})
 	}
 	enc := json.NewEncoder(w)
 	enc.SetIndent("", "  ")

@@ -58,6 +58,28 @@ func Text(w io.Writer, r *scale.Report) error {
 			}
 		}
 	}
+	if d := r.Decision; d != nil {
+		ew.printf("\nDecision at %s of crude:\n", scenario.FormatMass(d.TargetKg))
+		for _, line := range d.Explanation {
+			ew.printf("  %s\n", line)
+		}
+		for _, dr := range d.Drivers {
+			ew.printf("  %s: %s is %.0f %% of the cost\n", dr.Method, dr.Item, dr.Share*100)
+		}
+	}
+	if r.IsSweep {
+		ew.printf("\nCrossovers (cost per gram of purified product):\n")
+		if len(r.Crossovers) == 0 {
+			ew.printf("  none in %s to %s: the cost order of the methods does not change\n", scenario.FormatMass(r.MassesKg[0]), scenario.FormatMass(r.MassesKg[len(r.MassesKg)-1]))
+		}
+		for _, c := range r.Crossovers {
+			kind := "smooth crossing"
+			if c.Step {
+				kind = "at an equipment step"
+			}
+			ew.printf("  %s: %s cheaper below, %s cheaper above (%s)\n", scenario.FormatMass(c.MassKg), c.CheaperBelow, c.CheaperAbove, kind)
+		}
+	}
 	if len(r.Cautions) > 0 {
 		ew.printf("\nCautions:\n")
 		for _, c := range r.Cautions {

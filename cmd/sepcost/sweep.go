@@ -1,0 +1,95 @@
+package main
+
+import (
+	"context"
+	"fmt"
+	"io"
+
+	"github.com/spf13/cobra"
+
+	"sepcost/costing"
+	"sepcost/costing/units"
+	"sepcost/scale"
+)
+
+type sweepOptions struct {
+	scenario string
+	prices   string
+	from, to string
+	points   int
+	out      string
+	format   string
+	force    bool
+}
+
+func newSweepCommand() *cobra.Command {
+	opts := &sweepOptions{}
+	cmd := &cobra.Command{
+		Use:   "sweep SCENARIO",
+		Short: "The scale-up curve: every method across batch masses, crossovers and the decision",
+		Long: `Runs every method the scenario describes at log-spaced batch masses, finds the
+masses where the cheapest method per gram of purified product changes (by
+bisection on the models), and decides at the scenario's target mass: the
+method, the margin, the largest cost drivers and the prices that would flip it.`,
+		Example: `  sepcost sweep scenario.yaml --prices prices.csv --from 100mg --to 10kg --points 40 -o sweep.xlsx
+  sepcost sweep scenario.yaml --format csv > curve.csv`,
+		Args: cobra.ExactArgs(1),
+		RunE: func(cmd *cobra.Command, args []string) error {
+			opts.scenario = args[0]
+			return runSweep(cmd.Context(), opts, cmd.OutOrStdout(), cmd.ErrOrStderr())
+		},
+	}
+	f := cmd.Flags()
+	f.StringVar(&opts.prices, "prices", "", "price table CSV (default: prices.csv beside the scenario)")
+	f.StringVar(&opts.from, "from", "100mg", "smallest crude batch mass, with its unit")
+	f.StringVar(&opts.to, "to", "10kg", "largest crude batch mass, with its unit")
+	f.IntVar(&opts.points, "points", 30, "number of log-spaced masses (2 to 10000)")
+	addOutputFlags(cmd, &opts.out, &opts.format, &opts.force)
+	return cmd
+}
+
+func runSweep(_ context.Context, opts *sweepOptions, stdout, stderr io.Writer) error {
+	format, err := formatFor(opts.format, opts.out)
+	if err != nil {
+		return err
+	}
+	from, err := units.ParseAs(opts.from, units.Mass)
+	if err != nil {
+		return usageError{fmt.Errorf("--from %q: %v", opts.from, err)}
+	}
+	to, err := units.ParseAs(opts.to, units.Mass)
+	if err != nil {
+		return usageError{fmt.Errorf("--to %q: %v", opts.to, err)}
+	}
+	masses, err := scale.LogSpace(from, to, opts.points)
+	if err != nil {
+		return usageError{err}
+	}
+	sc, err := loadScenario(opts.scenario)
+	if err != nil {
+		return err
+	}
+	t, err := loadPrices(opts.prices, opts.scenario)
+	if err != nil {
+		return err
+	}
+	plan, err := costing.Prepare(sc)
+	if err != nil {
+		return err
+	}
+	r, err := scale.Sweep(plan, t, masses)
+	if err != nil {
+		return err
+	}
+	buf, err := render(r, format)
+	if err != nil {
+		return err
+	}
+	if err := emit(buf, opts.out, opts.force, stdout); err != nil {
+		return err
+	}
+	if opts.out != "" && opts.out != "-" {
+		fmt.Fprintf(stderr, "wrote %s\n", opts.out)
+	}
+	return nil
+}

@@ -1,0 +1,184 @@
+package scale
+
+import (
+	"fmt"
+	"math"
+	"sort"
+
+	"github.com/shopspring/decimal"
+
+	"sepcost/costing"
+	"sepcost/costing/prices"
+	"sepcost/costing/scenario"
+	"sepcost/costing/usage"
+)
+
+// TieMargin is the relative difference in cost per gram below which two
+// methods are called a tie: the models' inputs (Rf values, solubilities,
+// prices) are rarely known better than about ±15 % (common practice, no
+// source).
+const TieMargin = 0.15
+
+// Driver is one of a method's largest cost items at the target mass.
+type Driver struct {
+	Method string
+	Item   string
+	Amount decimal.Decimal // total over the item's ledger lines
+	Share  float64         // of the method's total
+}
+
+// Flip is the price of one item at which the decision would change.
+type Flip struct {
+	Item      string
+	Unit      string
+	Price     decimal.Decimal // current unit price
+	BreakEven decimal.Decimal // unit price at which winner and runner-up cost the same per gram
+	Rising    bool            // the decision flips when the price rises above BreakEven
+}
+
+// Decision is the recommendation at the target mass.
+type Decision struct {
+	TargetKg    float64
+	Winner      string // "" when no method is feasible
+	RunnerUp    string // "" when only one method is feasible
+	WinnerPerG  float64
+	RunnerPerG  float64
+	Margin      float64 // (runner − winner) / runner
+	Tie         bool
+	Drivers     []Driver
+	Flips       []Flip
+	Infeasible  map[string]string // method → reason
+	Explanation []string          // the decision in words a budget request can quote
+}
+
+// Decide runs every method at the target mass and names the cheapest
+// feasible one per gram of purified product, the margin, the three largest
+// cost drivers of each, and the price of each driver at which the answer
+// would flip.
+func Decide(p *costing.Plan, t *prices.Table, targetKg float64) (*Decision, error) {
+	d := &Decision{TargetKg: targetKg, Infeasible: map[string]string{}}
+	type cand struct {
+		j    int
+		name string
+		res  costing.Result
+		perG float64
+	}
+	var cands []cand
+	for j, name := range p.MethodNames() {
+		r, err := p.RunOne(j, targetKg, t)
+		if err != nil {
+			return nil, err
+		}
+		pg := r.PerGram()
+		if math.IsNaN(pg) {
+			d.Infeasible[name] = r.Usage.Reason
+			continue
+		}
+		cands = append(cands, cand{j, name, r, pg})
+		d.Drivers = append(d.Drivers, topDrivers(name, r, 3)...)
+	}
+	mass := scenario.FormatMass(targetKg)
+	cur := t.Currency
+	if len(cands) == 0 {
+		d.Explanation = append(d.Explanation, fmt.Sprintf("At %s of crude no method is feasible.", mass))
+		return d, nil
+	}
+	sort.SliceStable(cands, func(a, b int) bool { return cands[a].perG < cands[b].perG })
+	w := cands[0]
+	d.Winner, d.WinnerPerG = w.name, w.perG
+	if len(cands) == 1 {
+		d.Explanation = append(d.Explanation, fmt.Sprintf("At %s of crude, %s is the only feasible method: %.2f %s per gram of purified product (%s %s for the batch).", mass, w.name, w.perG, cur, w.res.Ledger.Total.StringFixed(w.res.Ledger.Places), cur))
+		return d, nil
+	}
+	r := cands[1]
+	d.RunnerUp, d.RunnerPerG = r.name, r.perG
+	d.Margin = (r.perG - w.perG) / r.perG
+	d.Tie = d.Margin < TieMargin
+	if d.Tie {
+		d.Explanation = append(d.Explanation, fmt.Sprintf("At %s of crude, %s (%.2f %s/g) and %s (%.2f %s/g) are within %.0f %% of each other: a tie within the models' uncertainty; choose on other grounds (development time, equipment, risk).", mass, w.name, w.perG, cur, r.name, r.perG, cur, TieMargin*100))
+	} else {
+		d.Explanation = append(d.Explanation, fmt.Sprintf("At %s of crude, choose %s: %.2f %s per gram of purified product against %.2f %s/g by %s, %.0f %% cheaper (%s against %s %s for the batch).", mass, w.name, w.perG, cur, r.perG, cur, r.name, d.Margin*100, w.res.Ledger.Total.StringFixed(w.res.Ledger.Places), r.res.Ledger.Total.StringFixed(r.res.Ledger.Places), cur))
+	}
+	// Break-even prices for the drivers of the two leading methods.
+	seen := map[string]bool{}
+	for _, dr := range d.Drivers {
+		if (dr.Method != w.name && dr.Method != r.name) || seen[dr.Item] {
+			continue
+		}
+		seen[dr.Item] = true
+		if f, ok := breakEven(dr.Item, t, w.res, r.res); ok {
+			d.Flips = append(d.Flips, f)
+			dir := "rose above"
+			if !f.Rising {
+				dir = "fell below"
+			}
+			d.Explanation = append(d.Explanation, fmt.Sprintf("The answer would flip to %s if the price of %s %s %s %s per %s (now %s).", r.name, dr.Item, dir, f.BreakEven.StringFixed(2), cur, f.Unit, f.Price.StringFixed(2)))
+		}
+	}
+	return d, nil
+}
+
+// topDrivers returns a method's n largest cost items.
+func topDrivers(method string, r costing.Result, n int) []Driver {
+	byItem := map[string]decimal.Decimal{}
+	var order []string
+	for _, l := range r.Ledger.Lines {
+		if l.Demand.Group == usage.Credit {
+			continue
+		}
+		if _, ok := byItem[l.Demand.Item]; !ok {
+			order = append(order, l.Demand.Item)
+		}
+		byItem[l.Demand.Item] = byItem[l.Demand.Item].Add(l.Amount)
+	}
+	sort.SliceStable(order, func(a, b int) bool { return byItem[order[a]].GreaterThan(byItem[order[b]]) })
+	var out []Driver
+	total := r.Ledger.Total.InexactFloat64()
+	for _, it := range order {
+		if len(out) == n || !byItem[it].IsPositive() {
+			break
+		}
+		share := 0.0
+		if total > 0 {
+			share = byItem[it].InexactFloat64() / total
+		}
+		out = append(out, Driver{Method: method, Item: it, Amount: byItem[it], Share: share})
+	}
+	return out
+}
+
+// breakEven solves, for one item's unit price p, the equality of cost per
+// gram of the winner w and the runner-up r. Ledger totals are linear in p
+// (up to the rounding of each line to the minor unit):
+//
+//	C(p) = C0 + Q·(p − p0),   Δ(p) = Cw(p)/Gw − Cr(p)/Gr
+//	p*   = p0 − Δ(p0) / (Qw/Gw − Qr/Gr)
+//
+// with Q the item's quantity in its price unit and G grams of product.
+func breakEven(item string, t *prices.Table, w, r costing.Result) (Flip, bool) {
+	idx, ok := t.Find(item)
+	if !ok {
+		return Flip{}, false
+	}
+	p0 := t.Items[idx].Price.InexactFloat64()
+	qty := func(res costing.Result) float64 {
+		q := 0.0
+		for _, l := range res.Ledger.Lines {
+			if l.PriceRow == idx {
+				q += l.Qty.InexactFloat64()
+			}
+		}
+		return q
+	}
+	gw, gr := w.Usage.ProductOutKg*1000, r.Usage.ProductOutKg*1000
+	slope := qty(w)/gw - qty(r)/gr
+	if slope == 0 {
+		return Flip{}, false
+	}
+	delta := w.Ledger.Total.InexactFloat64()/gw - r.Ledger.Total.InexactFloat64()/gr
+	p := p0 - delta/slope
+	if !(p > 0) || math.IsInf(p, 0) {
+		return Flip{}, false
+	}
+	return Flip{Item: t.Items[idx].Name, Unit: t.Items[idx].Unit, Price: t.Items[idx].Price, BreakEven: decimal.NewFromFloat(p).Round(4), Rising: slope > 0}, true
+}
