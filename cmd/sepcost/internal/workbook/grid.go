@@ -1,0 +1,263 @@
+package workbook
+
+import (
+	"fmt"
+	"math"
+	"sort"
+	"strconv"
+
+	"github.com/xuri/excelize/v2"
+)
+
+// Layout constants for every sheet.
+const (
+	lineHeight = 15.0 // points per text line in the default 11 pt font (excelize's default row height)
+	minWidth   = 8.0  // narrowest fitted column, in character widths
+	maxWidth   = 60.0 // widest fitted column; longer text wraps or spills
+)
+
+// cell is one cell to be written: a plain value, or a formula with the
+// value it is expected to show.
+type cell struct {
+	value   any    // string or float64; the cached result for a formula
+	formula string // without the leading "="; "" for a plain value
+	style   int
+	wrap    bool // wrapped text: sets the row height, counts at most maxWidth for the column
+	spill   bool // text that may run over empty neighbours: not used to fit widths
+}
+
+type merge struct{ row, first, last int }
+
+// grid is one sheet held in memory so that column widths and row heights
+// can be fitted to the content before the StreamWriter writes it.
+type grid struct {
+	name       string
+	cells      map[int]map[int]cell // row → column → cell
+	maxRow     int
+	merges     []merge
+	freezeRows int
+	freezeCols int
+	widths     map[int]float64 // widths fixed by the sheet's builder
+}
+
+func newGrid(name string) *grid {
+	return &grid{name: name, cells: map[int]map[int]cell{}, widths: map[int]float64{}}
+}
+
+func (g *grid) set(row, col int, c cell) {
+	if g.cells[row] == nil {
+		g.cells[row] = map[int]cell{}
+	}
+	g.cells[row][col] = c
+	if row > g.maxRow {
+		g.maxRow = row
+	}
+}
+
+// text writes a string.
+func (g *grid) text(row, col int, s string, style int) {
+	g.set(row, col, cell{value: s, style: style})
+}
+
+// num writes a number, or the text "n/a" when v is NaN or infinite: such a
+// value must never reach a cell (DESIGN §9).
+func (g *grid) num(row, col int, v float64, style int) {
+	if !finite(v) {
+		g.set(row, col, cell{value: "n/a", style: style})
+		return
+	}
+	g.set(row, col, cell{value: v, style: style})
+}
+
+// blank writes an empty cell that carries a style (a border under a header).
+func (g *grid) blank(row, col, style int) {
+	g.set(row, col, cell{style: style})
+}
+
+// formula writes a formula with its cached result.
+func (g *grid) formula(row, col int, f string, cached any, style int) {
+	g.set(row, col, cell{formula: f, value: cached, style: style})
+}
+
+func (g *grid) merge(row, first, last int) {
+	g.merges = append(g.merges, merge{row, first, last})
+}
+
+func (g *grid) freeze(rows, cols int) { g.freezeRows, g.freezeCols = rows, cols }
+
+func finite(v float64) bool { return !math.IsNaN(v) && !math.IsInf(v, 0) }
+
+// round15 rounds v to 15 significant digits, the precision a spreadsheet
+// keeps. excelize cuts longer numbers off instead of rounding them, so
+// 0.9199999999999999 would be written as 0.919999999999999; rounded first
+// it is written as 0.92. The change is below 5 parts in 10^16.
+func round15(v float64) float64 {
+	r, err := strconv.ParseFloat(strconv.FormatFloat(v, 'g', 15, 64), 64)
+	if err != nil {
+		return v
+	}
+	return r
+}
+
+// merged reports whether (row, col) lies in a merged range, and its width in columns.
+func (g *grid) merged(row, col int) (merge, bool) {
+	for _, m := range g.merges {
+		if m.row == row && m.first <= col && col <= m.last {
+			return m, true
+		}
+	}
+	return merge{}, false
+}
+
+// fitWidths sets every column's width from its longest content.
+func (g *grid) fitWidths(st *styles) map[int]float64 {
+	need := map[int]int{}
+	maxCol := 0
+	for row, cols := range g.cells {
+		for col, c := range cols {
+			if col > maxCol {
+				maxCol = col
+			}
+			if _, ok := g.merged(row, col); ok || c.spill {
+				continue
+			}
+			n := st.displayWidth(c)
+			if c.wrap && n > int(maxWidth) {
+				n = int(maxWidth)
+			}
+			if n > need[col] {
+				need[col] = n
+			}
+		}
+	}
+	out := map[int]float64{}
+	for col := 1; col <= maxCol; col++ {
+		if w, ok := g.widths[col]; ok {
+			out[col] = w
+			continue
+		}
+		w := float64(need[col] + 2)
+		out[col] = math.Min(math.Max(w, minWidth), maxWidth)
+	}
+	return out
+}
+
+// flush writes the grid to its sheet with a StreamWriter: widths and panes
+// first, rows in ascending order, merges, then one Flush (DESIGN §9).
+// With omit set, formulas are written without their cached values.
+func (g *grid) flush(f *excelize.File, st *styles, omit bool) error {
+	sw, err := f.NewStreamWriter(g.name)
+	if err != nil {
+		return fmt.Errorf("workbook: sheet %s: %w", g.name, err)
+	}
+	widths := g.fitWidths(st)
+	cols := make([]int, 0, len(widths))
+	for c := range widths {
+		cols = append(cols, c)
+	}
+	sort.Ints(cols)
+	for _, c := range cols {
+		if err := sw.SetColWidth(c, c, widths[c]); err != nil {
+			return fmt.Errorf("workbook: sheet %s: column %s width: %w", g.name, colName(c), err)
+		}
+	}
+	if g.freezeRows > 0 || g.freezeCols > 0 {
+		if err := sw.SetPanes(g.panes()); err != nil {
+			return fmt.Errorf("workbook: sheet %s: panes: %w", g.name, err)
+		}
+	}
+	for row := 1; row <= g.maxRow; row++ {
+		cols := g.cells[row]
+		if len(cols) == 0 {
+			continue
+		}
+		last := 0
+		for c := range cols {
+			if c > last {
+				last = c
+			}
+		}
+		vals := make([]any, last)
+		lines := 1
+		for col, c := range cols {
+			if v, ok := c.value.(float64); ok && !finite(v) {
+				return fmt.Errorf("workbook: sheet %s: cell %s would hold %v; this is a bug in the writer", g.name, cellName(col, row), v)
+			}
+			x := excelize.Cell{StyleID: c.style, Formula: c.formula, Value: c.value}
+			if v, ok := c.value.(float64); ok {
+				x.Value = round15(v)
+			}
+			if c.formula != "" && omit {
+				x.Value = nil
+			}
+			vals[col-1] = x
+			if s, ok := c.value.(string); ok && c.wrap {
+				w := widths[col]
+				if m, ok := g.merged(row, col); ok {
+					w = 0
+					for k := m.first; k <= m.last; k++ {
+						w += widths[k]
+					}
+				}
+				if n := wrappedLines(s, w); n > lines {
+					lines = n
+				}
+			}
+		}
+		var opts []excelize.RowOpts
+		if lines > 1 {
+			opts = append(opts, excelize.RowOpts{Height: lineHeight * float64(lines)})
+		}
+		if err := sw.SetRow(cellName(1, row), vals, opts...); err != nil {
+			return fmt.Errorf("workbook: sheet %s: row %d: %w", g.name, row, err)
+		}
+	}
+	for _, m := range g.merges {
+		if err := sw.MergeCell(cellName(m.first, m.row), cellName(m.last, m.row)); err != nil {
+			return fmt.Errorf("workbook: sheet %s: merge: %w", g.name, err)
+		}
+	}
+	if err := sw.Flush(); err != nil {
+		return fmt.Errorf("workbook: sheet %s: %w", g.name, err)
+	}
+	return nil
+}
+
+// panes freezes the first freezeRows rows and freezeCols columns.
+func (g *grid) panes() *excelize.Panes {
+	top := cellName(g.freezeCols+1, g.freezeRows+1)
+	pane := "bottomRight"
+	switch {
+	case g.freezeCols == 0:
+		pane = "bottomLeft"
+	case g.freezeRows == 0:
+		pane = "topRight"
+	}
+	return &excelize.Panes{
+		Freeze: true, XSplit: g.freezeCols, YSplit: g.freezeRows, TopLeftCell: top, ActivePane: pane,
+		Selection: []excelize.Selection{{SQRef: top, ActiveCell: top, Pane: pane}},
+	}
+}
+
+// displayWidth estimates how many characters a cell shows.
+func (st *styles) displayWidth(c cell) int {
+	switch v := c.value.(type) {
+	case string:
+		return textWidth(v)
+	case float64:
+		m := st.meta[c.style]
+		var s string
+		if m.places < 0 {
+			s = strconv.FormatFloat(v, 'g', 10, 64)
+		} else {
+			s = strconv.FormatFloat(v, 'f', m.places, 64)
+		}
+		n := len(s)
+		if m.grouping {
+			digits := len(strconv.FormatFloat(math.Abs(math.Trunc(v)), 'f', 0, 64))
+			n += (digits - 1) / 3
+		}
+		return n + m.suffix
+	}
+	return 0
+}

@@ -1,0 +1,143 @@
+package workbook
+
+import (
+	"strings"
+
+	"github.com/shopspring/decimal"
+
+	"sepcost/scale"
+)
+
+// buildSummary writes the title and files, a table per batch mass and
+// method whose numbers are references to the method sheets (with their
+// cached values), the cheapest method per mass where there are several,
+// then the report's notes and cautions.
+func buildSummary(g *grid, st *styles, r *scale.Report, m money, methods []methodOut, lay *layout) {
+	title := r.Title
+	if title == "" {
+		title = "Purification cost estimate"
+	}
+	g.set(1, 1, cell{value: title, style: st.title, spill: true})
+	for k, kv := range [][2]string{{"Scenario file", r.ScenarioFile}, {"Prices file", r.PricesFile}, {"Currency", m.currency}} {
+		g.text(2+k, 1, kv[0], st.bold)
+		g.set(2+k, 2, cell{value: kv[1], style: st.text, spill: true})
+	}
+
+	solvent := false
+	for _, mo := range methods {
+		for _, mc := range mo.mass {
+			solvent = solvent || mc.hasSolvent
+		}
+	}
+	cheapest := len(r.Methods) > 1
+	type column struct {
+		head string
+		get  func(massCells) numCell
+		st   int
+	}
+	cols := []column{
+		{"Cost per gram", func(c massCells) numCell { return c.perGram }, st.perGram},
+		{"Elapsed h", func(c massCells) numCell { return c.elapsed }, st.hours},
+		{"Hands-on h", func(c massCells) numCell { return c.attended }, st.hours},
+	}
+	if solvent {
+		cols = append(cols, column{"Solvent L", func(c massCells) numCell { return c.solventL }, st.litres})
+	}
+	cols = append(cols,
+		column{"Waste kg", func(c massCells) numCell { return c.wasteKg }, st.kg},
+		column{"Recovery", func(c massCells) numCell { return c.recovery }, st.percent})
+
+	g.set(6, 1, cell{value: "Cost, time and waste by batch mass and method", style: st.heading, spill: true})
+	head := []string{"Batch mass", "Method", "Total cost"}
+	for _, c := range cols {
+		head = append(head, c.head)
+	}
+	if cheapest {
+		head = append(head, "Cheapest")
+	}
+	for c, h := range head {
+		g.text(7, c+1, h, st.header)
+	}
+	g.freeze(7, 0)
+	lastCol := len(head)
+
+	row := 8
+	for i, kg := range r.MassesKg {
+		var feasibleRows [][2]int // summary row, method index
+		var low decimal.Decimal
+		lowSet := false
+		for j := range r.Methods {
+			mc := methods[j].mass[i]
+			g.text(row, 1, massLabel(kg), st.text)
+			g.text(row, 2, methods[j].sheet, st.text)
+			if !mc.feasible {
+				g.set(row, 3, cell{value: "not feasible: " + mc.reason, style: st.text, spill: true})
+				row++
+				continue
+			}
+			ref := sheetRef(methods[j].sheet, mc.totalRef)
+			g.formula(row, 3, ref, mc.total.InexactFloat64(), st.money)
+			lay.add(sheetSummary, cellName(3, row), mc.total, "summary total")
+			for k, c := range cols {
+				nc := c.get(mc)
+				switch {
+				case !nc.ok:
+					g.text(row, 4+k, "n/a", st.text)
+				case nc.ref == "":
+					g.num(row, 4+k, nc.v, c.st)
+				default:
+					g.formula(row, 4+k, sheetRef(methods[j].sheet, nc.ref), nc.v, c.st)
+				}
+			}
+			feasibleRows = append(feasibleRows, [2]int{row, j})
+			if !lowSet || mc.total.LessThan(low) {
+				low, lowSet = mc.total, true
+			}
+			row++
+		}
+		if cheapest && len(feasibleRows) > 0 {
+			// A formula, so that the mark moves when a price is edited:
+			// IF(C8=MIN(C8,C9,...),"cheapest","").
+			refs := make([]string, len(feasibleRows))
+			for k, fr := range feasibleRows {
+				refs[k] = cellName(3, fr[0])
+			}
+			for _, fr := range feasibleRows {
+				mark := ""
+				if methods[fr[1]].mass[i].total.Equal(low) {
+					mark = "cheapest"
+				}
+				f := "IF(" + cellName(3, fr[0]) + "=MIN(" + strings.Join(refs, ",") + "),\"cheapest\",\"\")"
+				g.formula(fr[0], lastCol, f, mark, st.bold)
+			}
+		}
+	}
+
+	row++
+	g.set(row, 1, cell{value: "Notes", style: st.heading, spill: true})
+	row++
+	if len(r.Notes) == 0 {
+		g.set(row, 1, cell{value: "No notes.", style: st.note, spill: true})
+		row++
+	}
+	for _, n := range r.Notes {
+		g.text(row, 1, string(n.Level), st.text)
+		g.set(row, 2, cell{value: n.Text, style: st.text, spill: true})
+		row++
+	}
+
+	row++
+	g.set(row, 1, cell{value: "Cautions", style: st.heading, spill: true})
+	row++
+	if len(r.Cautions) == 0 {
+		g.set(row, 1, cell{value: "No cautions recorded for this scenario.", style: st.note, spill: true})
+	}
+	for _, c := range r.Cautions {
+		g.set(row, 1, cell{value: c, style: st.wrap, wrap: true})
+		for k := 2; k <= lastCol; k++ {
+			g.blank(row, k, st.wrap)
+		}
+		g.merge(row, 1, lastCol)
+		row++
+	}
+}

@@ -1,0 +1,139 @@
+package workbook
+
+import (
+	"math"
+	"strconv"
+	"strings"
+	"unicode"
+	"unicode/utf8"
+
+	"github.com/xuri/excelize/v2"
+)
+
+// cellName is the A1 reference of a cell; col and row are 1-based.
+func cellName(col, row int) string {
+	s, err := excelize.CoordinatesToCellName(col, row)
+	if err != nil {
+		// Columns and rows here are small positive numbers computed by this
+		// package; an error is a programming error.
+		panic(err)
+	}
+	return s
+}
+
+// absName is the absolute reference ($C$7) of a cell.
+func absName(col, row int) string {
+	s, err := excelize.CoordinatesToCellName(col, row, true)
+	if err != nil {
+		panic(err)
+	}
+	return s
+}
+
+// colName is the letter name of a column.
+func colName(col int) string {
+	s, err := excelize.ColumnNumberToName(col)
+	if err != nil {
+		panic(err)
+	}
+	return s
+}
+
+// sheetRef prefixes a reference with a sheet name, quoted when the name
+// holds anything but letters and digits (Excel's rule for sheet names in
+// formulas).
+func sheetRef(sheet, ref string) string {
+	plain := sheet != ""
+	for _, r := range sheet {
+		if !(r < 128 && (unicode.IsLetter(r) || unicode.IsDigit(r))) {
+			plain = false
+			break
+		}
+	}
+	if plain {
+		return sheet + "!" + ref
+	}
+	return "'" + strings.ReplaceAll(sheet, "'", "''") + "'!" + ref
+}
+
+// sigFigs formats v with at most n significant digits and no trailing zeros.
+func sigFigs(v float64, n int) string {
+	if v == 0 || math.IsNaN(v) || math.IsInf(v, 0) {
+		return strconv.FormatFloat(v, 'f', -1, 64)
+	}
+	p := float64(n - 1 - int(math.Floor(math.Log10(math.Abs(v)))))
+	r := math.Round(v*math.Pow(10, p)) / math.Pow(10, p)
+	s := strconv.FormatFloat(r, 'f', -1, 64)
+	// Rounding in binary can leave a tail such as 0.30000000000000004.
+	if len(s) > 17 {
+		s = strconv.FormatFloat(r, 'g', n, 64)
+	}
+	return s
+}
+
+// massLabel writes a mass given in kg the way a chemist would say it:
+// "250 mg" below 0.1 g, "0.25 g" or "20 g" below 1 kg, "2 kg" above.
+func massLabel(kg float64) string {
+	switch {
+	case math.IsNaN(kg) || math.IsInf(kg, 0):
+		return "n/a"
+	case math.Abs(kg) >= 1:
+		return sigFigs(kg, 4) + " kg"
+	case math.Abs(kg) >= 1e-4:
+		return sigFigs(kg*1e3, 4) + " g"
+	default:
+		return sigFigs(kg*1e6, 4) + " mg"
+	}
+}
+
+// capitalize upper-cases the first letter: "chromatography" → "Chromatography".
+func capitalize(s string) string {
+	r, n := utf8.DecodeRuneInString(s)
+	if n == 0 {
+		return s
+	}
+	return string(unicode.ToUpper(r)) + s[n:]
+}
+
+// textWidth is the length in characters of the longest line of s.
+func textWidth(s string) int {
+	w := 0
+	for _, line := range strings.Split(s, "\n") {
+		if n := utf8.RuneCountInString(line); n > w {
+			w = n
+		}
+	}
+	return w
+}
+
+// wrappedLines estimates how many lines s takes when wrapped in a column
+// of the given width (in character widths of the default font). Words are
+// not split; a word longer than the line takes the lines it needs.
+func wrappedLines(s string, width float64) int {
+	per := int(width) - 1
+	if per < 1 {
+		per = 1
+	}
+	lines := 0
+	for _, para := range strings.Split(s, "\n") {
+		n, used := 1, 0
+		for _, word := range strings.Fields(para) {
+			w := utf8.RuneCountInString(word)
+			switch {
+			case used == 0:
+				used = w
+			case used+1+w <= per:
+				used += 1 + w
+			default:
+				n++
+				used = w
+			}
+			for used > per {
+				n++
+				used -= per
+			}
+		}
+		lines += n
+	}
+	return lines
+}
