@@ -247,9 +247,6 @@ func Run(sc *scenario.Scenario, coef source.Set, crudeKg float64) usage.Usage {
 	lostMixed := u.ProductInKg * get(KeyMixedLoss)
 	lostSilica := u.ProductInKg * get(KeyRetainedLoss)
 	u.ProductOutKg = u.ProductInKg - lostMixed - lostSilica
-	fig("product_in", "product in the crude", u.ProductInKg, "g")
-	fig("product_out", "product recovered", u.ProductOutKg, "g")
-	fig("recovery", "recovery", u.ProductOutKg/u.ProductInKg, "%")
 
 	// Waste. Solvent left in the pores of the spent silica goes with the
 	// solids; the rest of the eluent, with the impurities and mixed

@@ -202,9 +202,9 @@ func (ms *methodSheet) figures() error {
 			continue
 		}
 		u, c := ms.res[i].Usage, blockCol(i)
-		g.num(crudeRow, c, gram(u.CrudeKg), st.general)
-		g.num(inRow, c, gram(u.ProductInKg), st.general)
-		g.num(outRow, c, gram(u.ProductOutKg), st.general)
+		g.num(crudeRow, c, gram(u.CrudeKg), st.figure)
+		g.num(inRow, c, gram(u.ProductInKg), st.figure)
+		g.num(outRow, c, gram(u.ProductOutKg), st.figure)
 		ms.outG[i] = outRow
 		rec := u.ProductOutKg / u.ProductInKg
 		if u.ProductInKg > 0 && finite(rec) && finite(u.ProductOutKg) {
@@ -249,7 +249,7 @@ func (ms *methodSheet) figures() error {
 				}
 			}
 			c := blockCol(i)
-			g.num(ms.row, c, v, st.general)
+			g.num(ms.row, c, v, st.figure)
 			if k.a == solventFigure {
 				ms.out[i].hasSolvent = true
 				if l, err := units.To(f.SI, "L"); err == nil && finite(l) && finite(v) {

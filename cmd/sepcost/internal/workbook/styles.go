@@ -21,6 +21,7 @@ type styles struct {
 	title, heading, header, massHeader int
 	text, bold, wrap, note             int
 	general, generalBold               int
+	figure                             int // physical figures: thousands separators, up to 3 decimals
 	money, moneyBold, perGram          int
 	price                              map[int32]int // by decimal places shown
 	hours, hoursBold                   int
@@ -72,6 +73,7 @@ func newStyles(f *excelize.File, m money) (*styles, error) {
 		{&st.wrap, excelize.Style{Alignment: &excelize.Alignment{WrapText: true, Vertical: "top"}}, fmtMeta{places: -1}},
 		{&st.note, excelize.Style{Font: &excelize.Font{Italic: true}}, fmtMeta{places: -1}},
 		{&st.general, excelize.Style{}, fmtMeta{places: -1}},
+		{&st.figure, excelize.Style{CustomNumFmt: str("#,##0.###")}, fmtMeta{3, true, 0}},
 		{&st.generalBold, excelize.Style{Font: &excelize.Font{Bold: true}, Border: top}, fmtMeta{places: -1}},
 		{&st.money, excelize.Style{CustomNumFmt: str(moneyFmt)}, fmtMeta{int(m.places), true, suffix}},
 		{&st.moneyBold, excelize.Style{CustomNumFmt: str(moneyFmt), Font: &excelize.Font{Bold: true}, Border: top},

@@ -87,6 +87,7 @@ func TestGolden(t *testing.T) {
 	}{
 		{"workbook-fixture.txt", fixtureReport()},
 		{"workbook-two-methods.txt", twoMethodReport()},
+		{"workbook-demo.txt", demoReport(t)},
 	} {
 		t.Run(tc.file, func(t *testing.T) {
 			b, _ := render(t, tc.r, Options{})
@@ -313,7 +314,7 @@ func TestLibreOfficeRecalculation(t *testing.T) {
 	}
 	dir := t.TempDir()
 	out := filepath.Join(dir, "out")
-	reports := map[string]*scale.Report{"fixture": fixtureReport(), "two-methods": twoMethodReport()}
+	reports := map[string]*scale.Report{"fixture": fixtureReport(), "two-methods": twoMethodReport(), "demo": demoReport(t)}
 	type written struct {
 		cached []byte
 		lay    *layout

@@ -1,0 +1,35 @@
+package workbook
+
+import (
+	"bytes"
+	"testing"
+
+	"sepcost/costing"
+	"sepcost/costing/prices"
+	"sepcost/costing/scenario"
+	"sepcost/scale"
+	"sepcost/templates"
+)
+
+// demoReport runs the built-in demo scenario with the example prices
+// through the real models and ledger, as `sepcost demo` does.
+func demoReport(t *testing.T) *scale.Report {
+	t.Helper()
+	sc, err := scenario.Load(bytes.NewReader(templates.Scenario), "built-in demo scenario")
+	if err != nil {
+		t.Fatal(err)
+	}
+	pt, err := prices.Read(bytes.NewReader(templates.Prices), "built-in example prices")
+	if err != nil {
+		t.Fatal(err)
+	}
+	plan, err := costing.Prepare(sc)
+	if err != nil {
+		t.Fatal(err)
+	}
+	r, err := scale.Estimate(plan, pt, sc.MassesKg)
+	if err != nil {
+		t.Fatal(err)
+	}
+	return r
+}
