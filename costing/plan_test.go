@@ -1,0 +1,78 @@
+package costing
+
+import (
+	"errors"
+	"strings"
+	"testing"
+
+	"sepcost/costing/chrom"
+	"sepcost/costing/scenario"
+)
+
+const base = `name: t
+masses: ["1 g"]
+crude: {purity: 0.8}
+chromatography:
+  tlc_eluent: {diethyl ether: 0.2, n-pentane: 0.8}
+  product_rf: 0.3
+  impurity_rf: 0.45
+`
+
+func load(t *testing.T, y string) *scenario.Scenario {
+	t.Helper()
+	sc, err := scenario.Load(strings.NewReader(y), "s.yaml")
+	if err != nil {
+		t.Fatal(err)
+	}
+	return sc
+}
+
+// Settings override the defaults and are recorded as such; unknown keys
+// and wrong dimensions are refused with file, line and the valid choices.
+func TestSettings(t *testing.T) {
+	p, err := Prepare(load(t, base+"settings:\n  chromatography.bed_density: \"0.45 g/mL\"\n"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	if c := p.Coef[chrom.KeyBedDensity]; c.SI != 450 || c.Mark != "scenario" {
+		t.Errorf("bed density = %+v", c)
+	}
+	_, err = Prepare(load(t, base+"settings:\n  chromatography.bed_hieght: \"12 cm\"\n  chromatography.bed_density: \"12 cm\"\n"))
+	var ps scenario.Problems
+	if !errors.As(err, &ps) || len(ps) != 2 {
+		t.Fatalf("want 2 problems, got %v", err)
+	}
+	msg := err.Error()
+	for _, w := range []string{"s.yaml:9: settings.chromatography.bed_hieght", "valid settings:", "chromatography.bed_height", "s.yaml:10:", "is length", "density"} {
+		if !strings.Contains(msg, w) {
+			t.Errorf("error lacks %q:\n%s", w, msg)
+		}
+	}
+}
+
+// A scenario without any method section is refused.
+func TestNoMethod(t *testing.T) {
+	_, err := Prepare(load(t, "name: t\nmasses: [\"1 g\"]\ncrude: {purity: 0.8}\n"))
+	if err == nil || !strings.Contains(err.Error(), "no purification method") {
+		t.Errorf("err = %v", err)
+	}
+}
+
+// Cautions follow the solvents: diethyl ether is flammable (flash point
+// −45 °C, National Academies 2016, Appendix D, confirmed) and forms
+// peroxides; every scenario gets the EHS deferral.
+func TestCautions(t *testing.T) {
+	p, err := Prepare(load(t, base))
+	if err != nil {
+		t.Fatal(err)
+	}
+	all := strings.Join(p.Cautions(), "\n")
+	for _, w := range []string{"diethyl ether (flash point -45 °C)", "Peroxide-forming ethers: diethyl ether", "Silica gel dust", "licensed environmental-health-and-safety"} {
+		if !strings.Contains(all, w) {
+			t.Errorf("cautions lack %q:\n%s", w, all)
+		}
+	}
+	if strings.Contains(all, "Halogenated") {
+		t.Errorf("no halogenated solvent here")
+	}
+}
