@@ -2,7 +2,6 @@ package main
 
 import (
 	"context"
-	"fmt"
 	"io"
 
 	"github.com/spf13/cobra"
@@ -72,17 +71,7 @@ func runEstimate(_ context.Context, opts *estimateOptions, stdout, stderr io.Wri
 	if err != nil {
 		return err
 	}
-	buf, err := render(r, format)
-	if err != nil {
-		return err
-	}
-	if err := emit(buf, opts.out, opts.force, stdout); err != nil {
-		return err
-	}
-	if opts.out != "" && opts.out != "-" {
-		fmt.Fprintf(stderr, "wrote %s\n", opts.out)
-	}
-	return nil
+	return deliver(r, format, opts.out, opts.force, stdout, stderr)
 }
 
 // buildReport prepares the plan and runs it at the masses.

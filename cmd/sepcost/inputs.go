@@ -4,6 +4,7 @@ import (
 	"bytes"
 	"errors"
 	"fmt"
+	"io"
 	"io/fs"
 	"os"
 	"path/filepath"
@@ -67,4 +68,20 @@ func render(r *scale.Report, format string) (*bytes.Buffer, error) {
 		err = plain.Text(&buf, r)
 	}
 	return &buf, err
+}
+
+// deliver renders a report and writes it to the -o file (saying so on
+// stderr) or to stdout.
+func deliver(r *scale.Report, format, out string, force bool, stdout, stderr io.Writer) error {
+	buf, err := render(r, format)
+	if err != nil {
+		return err
+	}
+	if err := emit(buf, out, force, stdout); err != nil {
+		return err
+	}
+	if out != "" && out != "-" {
+		fmt.Fprintf(stderr, "wrote %s\n", out)
+	}
+	return nil
 }

@@ -4,6 +4,7 @@ import (
 	"bytes"
 	"errors"
 	"fmt"
+	"io"
 	"io/fs"
 	"os"
 	"path/filepath"
@@ -89,7 +90,7 @@ func formatFor(flag, out string) (string, error) {
 }
 
 // emit writes rendered output to the file or to stdout.
-func emit(buf *bytes.Buffer, out string, force bool, stdout interface{ Write([]byte) (int, error) }) error {
+func emit(buf *bytes.Buffer, out string, force bool, stdout io.Writer) error {
 	if out == "" || out == "-" {
 		_, err := stdout.Write(buf.Bytes())
 		return err

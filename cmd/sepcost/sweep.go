@@ -81,15 +81,5 @@ func runSweep(_ context.Context, opts *sweepOptions, stdout, stderr io.Writer) e
 	if err != nil {
 		return err
 	}
-	buf, err := render(r, format)
-	if err != nil {
-		return err
-	}
-	if err := emit(buf, opts.out, opts.force, stdout); err != nil {
-		return err
-	}
-	if opts.out != "" && opts.out != "-" {
-		fmt.Fprintf(stderr, "wrote %s\n", opts.out)
-	}
-	return nil
+	return deliver(r, format, opts.out, opts.force, stdout, stderr)
 }
