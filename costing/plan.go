@@ -11,6 +11,7 @@ import (
 	"sort"
 
 	"sepcost/costing/chrom"
+	"sepcost/costing/green"
 	"sepcost/costing/ledger"
 	"sepcost/costing/prices"
 	"sepcost/costing/scenario"
@@ -32,10 +33,25 @@ type Plan struct {
 	Methods  []Method
 }
 
-// Result is one method at one batch mass: physical usage and its ledger.
+// Result is one method at one batch mass: physical usage, its ledger and
+// its green metrics (nil when the method is not feasible).
 type Result struct {
-	Usage  usage.Usage
-	Ledger ledger.Ledger
+	Usage   usage.Usage
+	Ledger  ledger.Ledger
+	Metrics *green.Metrics
+}
+
+// result assembles a Result, computing the green metrics of a feasible usage.
+func (p *Plan) result(u usage.Usage, l ledger.Ledger) (Result, error) {
+	r := Result{Usage: u, Ledger: l}
+	if u.Feasible && u.ProductOutKg > 0 {
+		m, err := green.Compute(u, p.Scenario.Solvents)
+		if err != nil {
+			return Result{}, err
+		}
+		r.Metrics = &m
+	}
+	return r, nil
 }
 
 // Prepare settles the coefficients: model defaults, the user's settings
@@ -102,7 +118,9 @@ func (p *Plan) Run(massesKg []float64, t *prices.Table) ([][]Result, error) {
 	for i := range massesKg {
 		out[i] = make([]Result, len(p.Methods))
 		for j := range p.Methods {
-			out[i][j] = Result{Usage: us[k], Ledger: ls[k]}
+			if out[i][j], err = p.result(us[k], ls[k]); err != nil {
+				return nil, err
+			}
 			k++
 		}
 	}
@@ -155,7 +173,7 @@ func (p *Plan) RunOne(j int, crudeKg float64, t *prices.Table) (Result, error) {
 	if err != nil {
 		return Result{}, err
 	}
-	return Result{Usage: u, Ledger: l}, nil
+	return p.result(u, l)
 }
 
 // PerGram is the cost per gram of purified product, or NaN when the

@@ -1,9 +1,9 @@
 package scale
 
-// metrics fills the green metrics of a row.
+// metrics copies the green metrics of a feasible result into a row.
 func metrics(row *Row, res Result) {
-	u := res.Usage
-	if u.Feasible && u.ProductOutKg > 0 {
-		row.EFactor = u.WasteKg() / u.ProductOutKg
+	if m := res.Metrics; m != nil {
+		row.EFactor = m.EFactor
+		row.PMI = m.PMI
 	}
 }
