@@ -4,6 +4,8 @@ import (
 	"fmt"
 	"sort"
 	"strings"
+
+	"sepcost/costing/distil"
 )
 
 // Cautions lists the safety cautions that apply to the plan's methods and
@@ -44,6 +46,7 @@ func (p *Plan) Cautions() []string {
 			"Pressurised glass columns: use only columns and adaptors rated for the pressure, keep pressure low (flash columns run at a few tenths of a bar), fit a relief or use a regulated supply, and shield large glass columns.",
 			"Rotary evaporation works glass under vacuum: inspect flasks for cracks and stars, use a shield or netting on large flasks, and vent slowly.")
 	}
+	out = append(out, distil.Cautions(p.Scenario)...)
 	out = append(out, "Waste classification, waste codes, exposure limits and disposal follow local regulations and your site's licensed environmental-health-and-safety practice; the figures here are estimates to plan with, not a permit.")
 	return out
 }

@@ -5,12 +5,12 @@
 package costing
 
 import (
-	"errors"
 	"fmt"
 	"math"
 	"sort"
 
 	"sepcost/costing/chrom"
+	"sepcost/costing/distil"
 	"sepcost/costing/green"
 	"sepcost/costing/ledger"
 	"sepcost/costing/prices"
@@ -59,7 +59,7 @@ func (p *Plan) result(u usage.Usage, l ledger.Ledger) (Result, error) {
 // calibrations that depend on them. Problems name the scenario file, line
 // and setting.
 func Prepare(sc *scenario.Scenario) (*Plan, error) {
-	coef := source.NewSet(chrom.Defaults())
+	coef := source.NewSet(chrom.Defaults(), distil.Defaults())
 	var problems scenario.Problems
 	calibrated := map[string]bool{chrom.KeyQs: true, chrom.KeyPlates: true}
 	apply := func(later bool) {
@@ -78,15 +78,30 @@ func Prepare(sc *scenario.Scenario) (*Plan, error) {
 	if len(problems) > 0 {
 		return nil, problems
 	}
+	if sc.Chromatography == nil && sc.Distillation == nil {
+		return nil, &scenario.Problem{File: sc.File, Msg: "describes no purification method; add a chromatography:, crystallization: or distillation: section (see `sepcost init`)"}
+	}
 	p := &Plan{Scenario: sc, Coef: coef}
-	if sc.Chromatography != nil {
-		p.Methods = append(p.Methods, Method{Name: chrom.Method, Run: func(m float64) usage.Usage { return chrom.Run(sc, coef, m) }})
-	}
-	if len(p.Methods) == 0 {
-		return nil, &scenario.Problem{File: sc.File, Msg: "describes no purification method; add a chromatography: section (see `sepcost init`)"}
-	}
+	p.add(chrom.Method, sc.Chromatography != nil, func(m float64) usage.Usage { return chrom.Run(sc, coef, m) })
+	p.add(distil.Method, sc.Distillation != nil, func(m float64) usage.Usage { return distil.Run(sc, coef, m) })
 	return p, nil
 }
+
+// add registers a method. A method the scenario does not describe stays in
+// the plan as "not assessed", with the reason, so that no report silently
+// drops it.
+func (p *Plan) add(name string, described bool, run func(float64) usage.Usage) {
+	if !described {
+		run = func(m float64) usage.Usage {
+			return usage.Usage{Method: name, CrudeKg: m, ProductInKg: m * p.Scenario.Purity,
+				Reason: NotAssessed + ": the scenario has no " + name + " section"}
+		}
+	}
+	p.Methods = append(p.Methods, Method{Name: name, Run: run})
+}
+
+// NotAssessed begins the reason of a method the scenario does not describe.
+const NotAssessed = "not assessed"
 
 // MethodNames lists the plan's methods in order.
 func (p *Plan) MethodNames() []string {
@@ -155,6 +170,11 @@ func (p *Plan) SolventsUsed() []string {
 			seen[ch.LoadingSolvent] = true
 		}
 	}
+	if d := p.Scenario.Distillation; d != nil {
+		for _, id := range d.Solvents() {
+			seen[id] = true
+		}
+	}
 	ids := make([]string, 0, len(seen))
 	for id := range seen {
 		ids = append(ids, id)
@@ -162,9 +182,6 @@ func (p *Plan) SolventsUsed() []string {
 	sort.Strings(ids)
 	return ids
 }
-
-// ErrNoMethod is returned when a scenario describes no method.
-var ErrNoMethod = errors.New("no purification method described")
 
 // RunOne runs method j at one mass and prices it.
 func (p *Plan) RunOne(j int, crudeKg float64, t *prices.Table) (Result, error) {

@@ -16,7 +16,7 @@ import (
 func TestLayering(t *testing.T) {
 	root := filepath.Join("..", "..")
 	const mod = "sepcost/"
-	models := []string{"costing/chrom"}
+	models := []string{"costing/chrom", "costing/cryst", "costing/cryst/solubility", "costing/distil", "costing/waste", "costing/green"}
 	type rule struct {
 		pkg    func(string) bool
 		banned func(string) bool

@@ -8,6 +8,7 @@ import (
 	"strings"
 	"text/tabwriter"
 
+	"sepcost/costing"
 	"sepcost/costing/scenario"
 	"sepcost/costing/usage"
 	"sepcost/scale"
@@ -25,7 +26,11 @@ func Text(w io.Writer, r *scale.Report) error {
 			u := res.Usage
 			ew.printf("\n== %s of crude by %s ==\n", scenario.FormatMass(m), name)
 			if !u.Feasible {
-				ew.printf("not feasible: %s\n", u.Reason)
+				if strings.HasPrefix(u.Reason, costing.NotAssessed) {
+					ew.printf("%s\n", u.Reason)
+				} else {
+					ew.printf("not feasible: %s\n", u.Reason)
+				}
 				continue
 			}
 			tw := tabwriter.NewWriter(ew, 0, 0, 2, ' ', 0)
