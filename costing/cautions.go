@@ -46,6 +46,12 @@ func (p *Plan) Cautions() []string {
 			"Pressurised glass columns: use only columns and adaptors rated for the pressure, keep pressure low (flash columns run at a few tenths of a bar), fit a relief or use a regulated supply, and shield large glass columns.",
 			"Rotary evaporation works glass under vacuum: inspect flasks for cracks and stars, use a shield or netting on large flasks, and vent slowly.")
 	}
+	if p.Scenario.Crystallization != nil {
+		out = append(out,
+			"Hot recrystallization: heat flammable solvents only in a bath or heating mantle, never over an open flame, to reflux only with a condenser fitted, and never in a closed vessel: a sealed flask or a reactor without a vent or rated pressure relief can burst as the solvent's vapour pressure rises.",
+			"Jacketed reactors: keep within the vessel's rated pressure and temperature, check the relief device and the jacket fluid's limits, and cool under control; a crash-cool of a supersaturated solution can foul the jacket or entrain solids.",
+			"Vacuum filtration: use heavy-walled, clamped filter flasks with a trap; vent slowly. Dry solvent-wet solids only in an oven or dryer rated for solvent vapour.")
+	}
 	out = append(out, distil.Cautions(p.Scenario)...)
 	out = append(out, "Waste classification, waste codes, exposure limits and disposal follow local regulations and your site's licensed environmental-health-and-safety practice; the figures here are estimates to plan with, not a permit.")
 	return out

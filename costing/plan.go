@@ -10,6 +10,7 @@ import (
 	"sort"
 
 	"sepcost/costing/chrom"
+	"sepcost/costing/cryst"
 	"sepcost/costing/distil"
 	"sepcost/costing/green"
 	"sepcost/costing/ledger"
@@ -59,7 +60,7 @@ func (p *Plan) result(u usage.Usage, l ledger.Ledger) (Result, error) {
 // calibrations that depend on them. Problems name the scenario file, line
 // and setting.
 func Prepare(sc *scenario.Scenario) (*Plan, error) {
-	coef := source.NewSet(chrom.Defaults(), distil.Defaults())
+	coef := source.NewSet(chrom.Defaults(), cryst.Defaults(), distil.Defaults())
 	var problems scenario.Problems
 	calibrated := map[string]bool{chrom.KeyQs: true, chrom.KeyPlates: true}
 	apply := func(later bool) {
@@ -78,11 +79,12 @@ func Prepare(sc *scenario.Scenario) (*Plan, error) {
 	if len(problems) > 0 {
 		return nil, problems
 	}
-	if sc.Chromatography == nil && sc.Distillation == nil {
+	if sc.Chromatography == nil && sc.Crystallization == nil && sc.Distillation == nil {
 		return nil, &scenario.Problem{File: sc.File, Msg: "describes no purification method; add a chromatography:, crystallization: or distillation: section (see `sepcost init`)"}
 	}
 	p := &Plan{Scenario: sc, Coef: coef}
 	p.add(chrom.Method, sc.Chromatography != nil, func(m float64) usage.Usage { return chrom.Run(sc, coef, m) })
+	p.add(cryst.Method, sc.Crystallization != nil, func(m float64) usage.Usage { return cryst.Run(sc, coef, m) })
 	p.add(distil.Method, sc.Distillation != nil, func(m float64) usage.Usage { return distil.Run(sc, coef, m) })
 	return p, nil
 }
@@ -168,6 +170,11 @@ func (p *Plan) SolventsUsed() []string {
 		}
 		if ch.LoadingSolvent != "" {
 			seen[ch.LoadingSolvent] = true
+		}
+	}
+	if c := p.Scenario.Crystallization; c != nil {
+		for _, id := range c.Solvents() {
+			seen[id] = true
 		}
 	}
 	if d := p.Scenario.Distillation; d != nil {
