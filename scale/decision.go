@@ -106,16 +106,45 @@ func Decide(p *costing.Plan, t *prices.Table, targetKg float64) (*Decision, erro
 			continue
 		}
 		seen[dr.Item] = true
-		if f, ok := breakEven(dr.Item, t, w.res, r.res); ok {
-			d.Flips = append(d.Flips, f)
-			dir := "rose above"
-			if !f.Rising {
-				dir = "fell below"
-			}
-			d.Explanation = append(d.Explanation, fmt.Sprintf("The answer would flip to %s if the price of %s %s %s %s per %s (now %s).", r.name, dr.Item, dir, f.BreakEven.StringFixed(2), cur, f.Unit, f.Price.StringFixed(2)))
+		f, ok := breakEven(dr.Item, t, w.res, r.res)
+		if !ok {
+			continue
+		}
+		d.Flips = append(d.Flips, f)
+		dir := "rose above"
+		if !f.Rising {
+			dir = "fell below"
+		}
+		far := ""
+		if !plausible(f) {
+			far = fmt.Sprintf(": more than a %g-fold change, beyond what a budget plans for", FlipRange)
+		}
+		d.Explanation = append(d.Explanation, fmt.Sprintf("The answer would flip to %s only if the price of %s %s %s %s per %s (now %s)%s.", r.name, dr.Item, dir, f.BreakEven.StringFixed(2), cur, f.Unit, f.Price.StringFixed(2), far))
+	}
+	plausibleFlips := 0
+	for _, f := range d.Flips {
+		if plausible(f) {
+			plausibleFlips++
 		}
 	}
+	if plausibleFlips == 0 && !d.Tie {
+		d.Explanation = append(d.Explanation, fmt.Sprintf("No price of the largest cost items within a factor of %g of today's would change the answer.", FlipRange))
+	}
 	return d, nil
+}
+
+// FlipRange bounds the break-even prices worth reporting: a price would have
+// to move by less than this factor either way (a tenfold move is already
+// beyond what a budget plans for; common practice, no source).
+const FlipRange = 10.0
+
+// plausible reports whether a break-even price lies within FlipRange of today's.
+func plausible(f Flip) bool {
+	p, b := f.Price.InexactFloat64(), f.BreakEven.InexactFloat64()
+	if p <= 0 {
+		return true
+	}
+	return b/p <= FlipRange && b/p >= 1/FlipRange
 }
 
 // topDrivers returns a method's n largest cost items.

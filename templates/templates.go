@@ -15,6 +15,11 @@ var Scenario []byte
 //go:embed prices.csv
 var Prices []byte
 
+// Liquid is a second demo scenario: a liquid product that can be distilled.
+//
+//go:embed liquid.yaml
+var Liquid []byte
+
 // File names written by `sepcost init`.
 const (
 	ScenarioName = "scenario.yaml"

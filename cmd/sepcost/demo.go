@@ -14,6 +14,7 @@ import (
 )
 
 type demoOptions struct {
+	liquid bool
 	out    string
 	format string
 	force  bool
@@ -24,9 +25,11 @@ func newDemoCommand() *cobra.Command {
 	cmd := &cobra.Command{
 		Use:   "demo",
 		Short: "Run the built-in demo scenario with example prices",
-		Long: `Runs the built-in demo scenario (an invented compound) with the example price
-table and writes a workbook, sepcost-demo.xlsx unless -o says otherwise, then
-prints a summary. Needs no files. ` + "`sepcost init`" + ` writes the same scenario
+		Long: `Runs the built-in demo scenario (an invented solid compound: chromatography
+against recrystallization) with the example price table and writes a
+workbook, sepcost-demo.xlsx unless -o says otherwise, then prints a summary.
+With --liquid it runs a second demo, a liquid product (chromatography against
+distillation). Needs no files. ` + "`sepcost init`" + ` writes the same scenario
 and prices to edit.`,
 		Args: cobra.NoArgs,
 		RunE: func(cmd *cobra.Command, args []string) error {
@@ -34,17 +37,27 @@ and prices to edit.`,
 		},
 	}
 	addOutputFlags(cmd, &opts.out, &opts.format, &opts.force)
+	cmd.Flags().BoolVar(&opts.liquid, "liquid", false, "run the second demo, a liquid product that can also be distilled (default -o sepcost-demo-liquid.xlsx)")
 	cmd.Flags().Lookup("output").DefValue = "sepcost-demo.xlsx"
-	opts.out = "sepcost-demo.xlsx"
 	return cmd
 }
 
 func runDemo(_ context.Context, opts *demoOptions, stdout, stderr io.Writer) error {
+	data, name := templates.Scenario, "built-in demo scenario"
+	if opts.liquid {
+		data, name = templates.Liquid, "built-in liquid demo scenario"
+	}
+	if opts.out == "" {
+		opts.out = "sepcost-demo.xlsx"
+		if opts.liquid {
+			opts.out = "sepcost-demo-liquid.xlsx"
+		}
+	}
 	format, err := formatFor(opts.format, opts.out)
 	if err != nil {
 		return err
 	}
-	sc, err := scenario.Load(bytes.NewReader(templates.Scenario), "built-in demo scenario")
+	sc, err := scenario.Load(bytes.NewReader(data), name)
 	if err != nil {
 		return fmt.Errorf("the built-in demo scenario is broken: %w", err)
 	}

@@ -1,0 +1,213 @@
+package scale
+
+import (
+	"bytes"
+	"math"
+	"strings"
+	"testing"
+
+	"github.com/shopspring/decimal"
+
+	"sepcost/costing"
+	"sepcost/costing/prices"
+	"sepcost/costing/scenario"
+	"sepcost/templates"
+)
+
+func plan(t *testing.T, yaml []byte) (*costing.Plan, *prices.Table) {
+	t.Helper()
+	sc, err := scenario.Load(bytes.NewReader(yaml), "test.yaml")
+	if err != nil {
+		t.Fatal(err)
+	}
+	pt, err := prices.Read(bytes.NewReader(templates.Prices), "prices.csv")
+	if err != nil {
+		t.Fatal(err)
+	}
+	p, err := costing.Prepare(sc)
+	if err != nil {
+		t.Fatal(err)
+	}
+	return p, pt
+}
+
+// withPrice copies a table with one item's price changed.
+func withPrice(t *prices.Table, item string, p decimal.Decimal) *prices.Table {
+	c := *t
+	c.Items = append([]prices.Item(nil), t.Items...)
+	i, _ := t.Find(item)
+	c.Items[i].Price = p
+	return &c
+}
+
+// The demo is the common pattern of the trade (common practice, no
+// source): chromatography is cheaper for a few hundred milligrams, a
+// recrystallization at kilograms, so there is a crossover between.
+func TestDemoCrossover(t *testing.T) {
+	p, pt := plan(t, templates.Scenario)
+	masses, _ := LogSpace(1e-4, 1, 25)
+	r, err := Sweep(p, pt, masses)
+	if err != nil {
+		t.Fatal(err)
+	}
+	first, last := r.Results[0], r.Results[len(masses)-1]
+	if !(first[0].PerGram() < first[1].PerGram()) {
+		t.Errorf("at 100 mg chromatography should be cheaper: %g vs %g", first[0].PerGram(), first[1].PerGram())
+	}
+	if !(last[1].PerGram() < last[0].PerGram()) {
+		t.Errorf("at 1 kg crystallization should be cheaper: %g vs %g", last[1].PerGram(), last[0].PerGram())
+	}
+	found := false
+	for _, c := range r.Crossovers {
+		if c.CheaperBelow == "chromatography" && c.CheaperAbove == "crystallization" {
+			found = true
+		}
+	}
+	if !found {
+		t.Fatalf("no chromatography → crystallization crossover: %+v", r.Crossovers)
+	}
+	// Brute force on a fine grid of the model itself: every sign change of
+	// the cost difference lies within a grid step of a reported crossover.
+	fine, _ := LogSpace(1e-4, 1, 400)
+	var changes []float64
+	prev := math.NaN()
+	for _, m := range fine {
+		a, _ := p.RunOne(0, m, pt)
+		b, _ := p.RunOne(1, m, pt)
+		d := a.PerGram() - b.PerGram()
+		if !math.IsNaN(prev) && !math.IsNaN(d) && (d > 0) != (prev > 0) {
+			changes = append(changes, m)
+		}
+		prev = d
+	}
+	step := math.Log(fine[1] / fine[0])
+	for _, m := range changes {
+		ok := false
+		for _, c := range r.Crossovers {
+			if c.A == "chromatography" && c.B == "crystallization" && math.Abs(math.Log(c.MassKg/m)) <= step*1.01 {
+				ok = true
+			}
+		}
+		if !ok {
+			t.Errorf("brute force finds a change near %g kg that the sweep missed (%+v)", m, r.Crossovers)
+		}
+	}
+}
+
+// Break-even prices really flip the decision when applied: 1 % beyond the
+// break-even the runner-up wins, 1 % short of it the winner stays.
+func TestBreakEvenFlips(t *testing.T) {
+	p, pt := plan(t, templates.Scenario)
+	d, err := Decide(p, pt, 2)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if d.Winner != "crystallization" || len(d.Flips) == 0 {
+		t.Fatalf("decision %+v", d)
+	}
+	for _, f := range d.Flips {
+		beyond, short := 1.01, 0.99
+		if !f.Rising {
+			beyond, short = 0.99, 1.01
+		}
+		for _, c := range []struct {
+			factor float64
+			want   string
+		}{{beyond, d.RunnerUp}, {short, d.Winner}} {
+			tb := withPrice(pt, f.Item, f.BreakEven.Mul(decimal.NewFromFloat(c.factor)))
+			d2, err := Decide(p, tb, 2)
+			if err != nil {
+				t.Fatal(err)
+			}
+			if d2.Winner != c.want {
+				t.Errorf("%s at %.2f × break-even %s: winner %s, want %s", f.Item, c.factor, f.BreakEven, d2.Winner, c.want)
+			}
+		}
+	}
+}
+
+// A method that is infeasible is never recommended: a crystallization whose
+// impurity co-crystallises cannot reach the target purity.
+func TestInfeasibleNeverRecommended(t *testing.T) {
+	y := strings.Replace(string(templates.Scenario), `solubility: {"0 C": "30 g/L", "75 C": "140 g/L"}`, `solubility: {"0 C": "0.5 g/L", "75 C": "2 g/L"}`, 1)
+	p, pt := plan(t, []byte(y))
+	for _, m := range []float64{1e-3, 0.1, 2} {
+		d, err := Decide(p, pt, m)
+		if err != nil {
+			t.Fatal(err)
+		}
+		if d.Winner == "crystallization" {
+			t.Errorf("%g kg: an infeasible crystallization was recommended", m)
+		}
+		if _, ok := d.Infeasible["crystallization"]; !ok {
+			t.Errorf("%g kg: crystallization should be infeasible here", m)
+		}
+	}
+}
+
+// Scale 1 reproduces estimate: the sweep's result at a mass equals an
+// estimate at that mass, to the cent.
+func TestSweepReproducesEstimate(t *testing.T) {
+	p, pt := plan(t, templates.Scenario)
+	masses, _ := LogSpace(0.02, 2, 3)
+	sw, err := Sweep(p, pt, masses)
+	if err != nil {
+		t.Fatal(err)
+	}
+	est, err := Estimate(p, pt, []float64{masses[1]})
+	if err != nil {
+		t.Fatal(err)
+	}
+	for j := range sw.Methods {
+		if !sw.Results[1][j].Ledger.Total.Equal(est.Results[0][j].Ledger.Total) {
+			t.Errorf("%s: sweep %s vs estimate %s", sw.Methods[j], sw.Results[1][j].Ledger.Total, est.Results[0][j].Ledger.Total)
+		}
+	}
+}
+
+// Total cost never falls when a run or batch is added: along a fine sweep,
+// wherever the number of chromatography runs or crystallization batches
+// goes up, the batch's total cost does not go down (identity of the models).
+func TestCostNeverFallsWhenRunsAdded(t *testing.T) {
+	p, pt := plan(t, templates.Scenario)
+	masses, _ := LogSpace(0.1, 20, 300)
+	r, err := Sweep(p, pt, masses)
+	if err != nil {
+		t.Fatal(err)
+	}
+	for j, name := range r.Methods {
+		key := map[string]string{"chromatography": "runs", "crystallization": "batches"}[name]
+		if key == "" {
+			continue
+		}
+		for i := 1; i < len(masses); i++ {
+			a, b := r.Results[i-1][j], r.Results[i][j]
+			fa, okA := a.Usage.Figure(key)
+			fb, okB := b.Usage.Figure(key)
+			if !okA || !okB || !a.Usage.Feasible || !b.Usage.Feasible {
+				continue
+			}
+			if fb.SI > fa.SI && b.Ledger.Total.LessThan(a.Ledger.Total) {
+				t.Errorf("%s: %g → %g %s between %g and %g kg, cost fell %s → %s", name, fa.SI, fb.SI, key, masses[i-1], masses[i], a.Ledger.Total, b.Ledger.Total)
+			}
+		}
+	}
+}
+
+// Crystallization cost per gram falls as the one-time development cost is
+// spread over more product (DESIGN §5.2).
+func TestDevelopmentCostSpread(t *testing.T) {
+	p, pt := plan(t, templates.Scenario)
+	prev := math.Inf(1)
+	for _, m := range []float64{1e-3, 1e-2, 0.1, 1} {
+		r, err := p.RunOne(1, m, pt)
+		if err != nil {
+			t.Fatal(err)
+		}
+		if pg := r.PerGram(); !(pg < prev) {
+			t.Errorf("%g kg: %.2f per g, not below %.2f", m, pg, prev)
+		} else {
+			prev = pg
+		}
+	}
+}
