@@ -305,7 +305,7 @@ func Run(sc *scenario.Scenario, coef source.Set, crudeKg float64) usage.Usage {
 	d(ItemLabour, "hands-on time", usage.Labour, attended*3600, units.Time)
 	d(ItemElectricity, "rotary evaporator bath and chiller", usage.Energy, electric, units.Energy)
 	for _, s := range u.Waste {
-		d(s.Class.DisposalItem(), "disposal: "+s.Name, usage.Disposal, s.Kg(), units.Mass)
+		d(s.Class.DisposalItem(), s.DisposalLabel(), usage.Disposal, s.Kg(), units.Mass)
 	}
 	d(ItemProduct, "product lost (mixed fractions, retained on silica)", usage.ProductLoss, lostMixed+lostSilica, units.Mass)
 	if ch.RecoverSolvent > 0 {

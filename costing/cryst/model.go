@@ -519,7 +519,7 @@ func Run(sc *scenario.Scenario, coef source.Set, crudeKg float64) usage.Usage {
 	d(ItemLabour, "hands-on time", usage.Labour, attended*3600, units.Time)
 	d(ItemElectricity, "heating, chiller and drying", usage.Energy, electric, units.Energy)
 	for _, s := range u.Waste {
-		d(s.Class.DisposalItem(), "disposal: "+s.Name, usage.Disposal, s.Kg(), units.Mass)
+		d(s.Class.DisposalItem(), s.DisposalLabel(), usage.Disposal, s.Kg(), units.Mass)
 	}
 	d(ItemProduct, "product left in mother liquors and washes", usage.ProductLoss, u.ProductInKg-u.ProductOutKg, units.Mass)
 	d(ItemLabour, "solvent screening and development (one-time)", usage.OneTime, screenS, units.Time)

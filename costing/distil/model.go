@@ -446,7 +446,7 @@ func Run(sc *scenario.Scenario, coef source.Set, crudeKg float64) usage.Usage {
 	dm(ItemLabour, "hands-on time", usage.Labour, attended*3600, units.Time)
 	dm(ItemElectricity, "heater, condenser chiller and vacuum pump", usage.Energy, electric, units.Energy)
 	for _, w := range u.Waste {
-		dm(w.Class.DisposalItem(), "disposal: "+w.Name, usage.Disposal, w.Kg(), units.Mass)
+		dm(w.Class.DisposalItem(), w.DisposalLabel(), usage.Disposal, w.Kg(), units.Mass)
 	}
 	dm(ItemProduct, "product lost (fore-run, tails, hold-up, cold trap)", usage.ProductLoss, u.ProductInKg-u.ProductOutKg, units.Mass)
 	return u

@@ -50,6 +50,10 @@ var WasteClasses = []WasteClass{NonHalogenated, Halogenated, WetSolids, Aqueous}
 // DisposalItem is the price-table item for disposing of a class.
 func (c WasteClass) DisposalItem() string { return "disposal: " + string(c) }
 
+// DisposalLabel is the ledger label of the demand that pays for disposing
+// of a stream; reports use it to find the stream's disposal line.
+func (s Stream) DisposalLabel() string { return "disposal: " + s.Name }
+
 // Component is one substance in a waste stream.
 type Component struct {
 	Name    string  // solvent id, "silica gel", "sand", "product", ...
