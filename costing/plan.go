@@ -159,26 +159,8 @@ func (p *Plan) Coefficients() []source.Coefficient {
 // SolventsUsed lists the ids of the solvents the scenario's methods use.
 func (p *Plan) SolventsUsed() []string {
 	seen := map[string]bool{}
-	if ch := p.Scenario.Chromatography; ch != nil {
-		for _, part := range ch.TLCEluent {
-			seen[part.Solvent] = true
-		}
-		for _, st := range ch.Gradient {
-			for _, part := range st.Eluent {
-				seen[part.Solvent] = true
-			}
-		}
-		if ch.LoadingSolvent != "" {
-			seen[ch.LoadingSolvent] = true
-		}
-	}
-	if c := p.Scenario.Crystallization; c != nil {
-		for _, id := range c.Solvents() {
-			seen[id] = true
-		}
-	}
-	if d := p.Scenario.Distillation; d != nil {
-		for _, id := range d.Solvents() {
+	for _, name := range p.MethodNames() {
+		for _, id := range p.methodSolvents(name) {
 			seen[id] = true
 		}
 	}
@@ -187,6 +169,47 @@ func (p *Plan) SolventsUsed() []string {
 		ids = append(ids, id)
 	}
 	sort.Strings(ids)
+	return ids
+}
+
+// Uses reports whether a method of the scenario uses a solvent.
+func (p *Plan) Uses(method, id string) bool {
+	for _, s := range p.methodSolvents(method) {
+		if s == id {
+			return true
+		}
+	}
+	return false
+}
+
+// methodSolvents lists the solvent ids one method's section names.
+func (p *Plan) methodSolvents(method string) []string {
+	sc := p.Scenario
+	var ids []string
+	switch method {
+	case chrom.Method:
+		if ch := sc.Chromatography; ch != nil {
+			for _, part := range ch.TLCEluent {
+				ids = append(ids, part.Solvent)
+			}
+			for _, st := range ch.Gradient {
+				for _, part := range st.Eluent {
+					ids = append(ids, part.Solvent)
+				}
+			}
+			if ch.LoadingSolvent != "" {
+				ids = append(ids, ch.LoadingSolvent)
+			}
+		}
+	case cryst.Method:
+		if c := sc.Crystallization; c != nil {
+			ids = c.Solvents()
+		}
+	case distil.Method:
+		if d := sc.Distillation; d != nil {
+			ids = d.Solvents()
+		}
+	}
 	return ids
 }
 

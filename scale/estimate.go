@@ -4,8 +4,10 @@ package scale
 
 import (
 	"sepcost/costing"
+	"sepcost/costing/green"
 	"sepcost/costing/prices"
 	"sepcost/costing/usage"
+	"sepcost/costing/waste"
 )
 
 // Estimate runs every method of the plan at each mass, prices it and
@@ -28,6 +30,11 @@ func Estimate(p *costing.Plan, t *prices.Table, massesKg []float64) (*Report, er
 		Cautions:     p.Cautions(),
 	}
 	r.TargetKg = sc.TargetKg
+	r.Waste = wasteRows(p, massesKg, r.Methods, res)
+	r.Greenness = greenness(p)
+	r.WasteSector = sc.WasteSector.String()
+	r.Coefficients = append(r.Coefficients, waste.Sources()...)
+	r.Coefficients = append(r.Coefficients, green.Sources()...)
 	if r.Decision, err = Decide(p, t, sc.TargetKg); err != nil {
 		return nil, err
 	}

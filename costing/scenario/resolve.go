@@ -11,6 +11,7 @@ import (
 
 	"sepcost/costing/solvent"
 	"sepcost/costing/units"
+	"sepcost/costing/waste"
 )
 
 // mixTolerance is how far volume fractions may sum from 1 (rounding in a
@@ -30,6 +31,14 @@ func resolve(c *collector, raw *rawScenario, root *yaml.Node) *Scenario {
 	}
 	s.Product = raw.Product.Value
 	s.Notes = raw.Notes.Value
+	if raw.WasteSector.Set {
+		sec, err := waste.ParseSector(raw.WasteSector.Value)
+		if err != nil {
+			c.add(raw.WasteSector.Line, "waste_sector", "%v", err)
+		}
+		s.WasteSector = sec
+		echo("waste_sector", raw.WasteSector, "waste codes from "+sec.String())
+	}
 
 	// Solvents first: the eluents may name them.
 	for i, rs := range raw.Solvents {

@@ -8,6 +8,7 @@ package scenario
 import (
 	"sepcost/costing/solvent"
 	"sepcost/costing/units"
+	"sepcost/costing/waste"
 )
 
 // Part is one solvent of a mixture with its volume fraction.
@@ -79,7 +80,8 @@ type Scenario struct {
 	Settings        []Setting
 	Solvents        *solvent.Book
 	Notes           string
-	Inputs          []Input // every field as written and as understood
+	WasteSector     waste.Sector // EU List of Waste chapter for the waste codes
+	Inputs          []Input      // every field as written and as understood
 }
 
 // Input is one field as written and as understood, for the Inputs sheet.

@@ -16,6 +16,7 @@ type rawScenario struct {
 	Settings        map[string]Text   `yaml:"settings"`
 	Solvents        []rawSolvent      `yaml:"solvents"`
 	Notes           Text              `yaml:"notes"`
+	WasteSector     Text              `yaml:"waste_sector"`
 	Extra           map[string]rawAny `yaml:",inline"`
 }
 

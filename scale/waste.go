@@ -1,0 +1,114 @@
+package scale
+
+import (
+	"github.com/shopspring/decimal"
+
+	"sepcost/costing"
+	"sepcost/costing/green"
+	"sepcost/costing/scenario"
+	"sepcost/costing/usage"
+	"sepcost/costing/waste"
+)
+
+// WasteRow is one waste stream of one method at one mass, with its
+// suggested codes and its disposal cost from the ledger.
+type WasteRow struct {
+	CrudeKg        float64
+	Method         string
+	Mass, Col      int // Results[Mass][Col]
+	Stream         usage.Stream
+	Kg, Litres     float64
+	Classification waste.Classification
+	Disposal       decimal.Decimal // the ledger's disposal line for this stream (zero when none)
+	HasDisposal    bool
+}
+
+// SolventGreenness is a solvent the scenario uses, with its class in a
+// published selection guide and the substitutions published guidance suggests.
+type SolventGreenness struct {
+	Solvent     string
+	Class       green.GuideClass // "" when the guide does not rank it
+	Suggestions []green.Suggestion
+}
+
+// wasteRows classifies every stream of every feasible result. For
+// chromatography the eluents as made up before use (gradient steps and the
+// TLC eluent) are the blends the mixture rules judge.
+func wasteRows(p *costing.Plan, masses []float64, methods []string, results [][]Result) []WasteRow {
+	sc := p.Scenario
+	var out []WasteRow
+	for i, m := range masses {
+		for j, name := range methods {
+			res := results[i][j]
+			if !res.Usage.Feasible {
+				continue
+			}
+			for _, s := range res.Usage.Waste {
+				row := WasteRow{CrudeKg: m, Method: name, Mass: i, Col: j, Stream: s, Kg: s.Kg(), Litres: s.VolumeM3 * 1000}
+				if blends := eluentBlends(sc, name, s); blends != nil {
+					row.Classification = waste.ClassifyBlends(s, sc.Solvents, sc.WasteSector, blends)
+				} else {
+					row.Classification = waste.Classify(s, sc.Solvents, sc.WasteSector)
+				}
+				for _, l := range res.Ledger.Lines {
+					if l.Demand.Group == usage.Disposal && l.Demand.Label == s.DisposalLabel() {
+						row.Disposal = row.Disposal.Add(l.Amount)
+						row.HasDisposal = true
+					}
+				}
+				out = append(out, row)
+			}
+		}
+	}
+	return out
+}
+
+// eluentBlends returns the chromatography eluents as made up before use, or
+// nil for other methods.
+func eluentBlends(sc *scenario.Scenario, method string, s usage.Stream) []waste.Blend {
+	ch := sc.Chromatography
+	if method != "chromatography" || ch == nil {
+		return nil
+	}
+	mix := func(name string, m scenario.Mix) waste.Blend {
+		b := waste.Blend{Name: name, Parts: map[string]float64{}}
+		for _, p := range m {
+			b.Parts[p.Solvent] += p.Fraction
+		}
+		return b
+	}
+	var out []waste.Blend
+	for _, st := range ch.Gradient {
+		out = append(out, mix("gradient step "+st.Eluent.String(), st.Eluent))
+	}
+	out = append(out, mix("eluent "+ch.TLCEluent.String(), ch.TLCEluent))
+	if ch.LoadingSolvent != "" {
+		out = append(out, mix("loading solvent "+ch.LoadingSolvent, scenario.Mix{{Solvent: ch.LoadingSolvent, Fraction: 1}}))
+	}
+	return out
+}
+
+// greenness lists the scenario's solvents with their guide class and the
+// substitutions suggested for the methods that use them.
+func greenness(p *costing.Plan) []SolventGreenness {
+	uses := map[string]green.Use{"chromatography": green.Chromatography, "crystallization": green.Crystallization, "distillation": green.Distillation}
+	var out []SolventGreenness
+	for _, id := range p.SolventsUsed() {
+		g := SolventGreenness{Solvent: id}
+		g.Class, _ = green.Class(id)
+		seen := map[string]bool{}
+		for _, name := range p.MethodNames() {
+			if !p.Uses(name, id) {
+				continue
+			}
+			for _, s := range green.Substitutes(id, uses[name]) {
+				if !seen[s.Text] {
+					seen[s.Text] = true
+					g.Suggestions = append(g.Suggestions, s)
+				}
+			}
+		}
+		out = append(out, g)
+	}
+	return out
+}
