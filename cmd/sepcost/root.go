@@ -40,7 +40,7 @@ and writes the plan: silica, columns, solvent, time, waste, cost and cautions.`,
 		SilenceErrors: true,
 	}
 	root.SetFlagErrorFunc(func(c *cobra.Command, err error) error { return usageError{err} })
-	root.AddCommand(newDemoCommand(), newInitCommand(), newEstimateCommand(), newSweepCommand(), newCheckCommand(), newSolventsCommand())
+	root.AddCommand(newDemoCommand(), newInitCommand(), newEstimateCommand(), newSweepCommand(), newWasteCommand(), newPortfolioCommand(), newCheckCommand(), newSolventsCommand())
 	return root
 }
 

@@ -38,6 +38,17 @@ func (c Classification) CodeList() string {
 	return strings.Join(s, ", ")
 }
 
+// SchemeCodes is the codes of one scheme ("EU LoW" or "US EPA") joined with spaces.
+func (c Classification) SchemeCodes(scheme string) string {
+	var s []string
+	for _, k := range c.Codes {
+		if k.Scheme == scheme {
+			s = append(s, k.Code)
+		}
+	}
+	return strings.Join(s, " ")
+}
+
 // Blend is a solvent blend as made up before use: a premixed eluent, one
 // step of a gradient, a neat flush or rinse, a recrystallization solvent.
 type Blend struct {

@@ -1,0 +1,95 @@
+package workbook
+
+import (
+	"fmt"
+	"io"
+	"sort"
+	"strings"
+
+	"sepcost/costing/prices"
+	"sepcost/costing/scenario"
+	"sepcost/costing/waste"
+	"sepcost/scale"
+)
+
+// WriteWaste writes the waste forecast alone: one row per stream, in a
+// shape an EHS office can paste into its forecast.
+func WriteWaste(w io.Writer, r *scale.Report) error {
+	t := Table{Name: "Waste forecast", Title: "Waste forecast: " + r.Title + " (codes from " + r.WasteSector + ")",
+		Header: []string{"Crude batch", "Method", "Recommended", "Stream", "Class", "kg", "L", "Composition by mass", "EU List of Waste", "US EPA", "Rules applied", "Disposal cost"}}
+	for _, row := range r.Waste {
+		rec := ""
+		if d := r.Decision; d != nil && d.TargetKg == row.CrudeKg && d.Winner == row.Method {
+			rec = "yes"
+		}
+		cost := Text("")
+		if row.HasDisposal {
+			cost = Money(row.Disposal)
+		}
+		t.Rows = append(t.Rows, []Cell{Text(scenario.FormatMass(row.CrudeKg)), Text(row.Method), Text(rec), Text(row.Stream.Name), Text(string(row.Stream.Class)),
+			Num(row.Kg), Num(row.Litres), Text(row.Stream.Composition()), Text(row.Classification.SchemeCodes("EU LoW")), Text(row.Classification.SchemeCodes("US EPA")),
+			Text(strings.Join(row.Classification.Rules, " | ")), cost})
+	}
+	t.Notes = []string{waste.Caution}
+	places := prices.MinorUnits(r.Prices.Currency)
+	return WriteTables(w, r.Prices.Currency, places, []Table{t})
+}
+
+// WritePortfolio writes a year's plan: the plan lines, cost by method,
+// waste by class and by suggested code, solvent purchases, and cautions.
+// Totals are SUM formulas whose cached values are the portfolio's exact sums.
+func WritePortfolio(w io.Writer, pf *scale.Portfolio) error {
+	var tabs []Table
+	plan := Table{Name: "Plan", Title: "Plan " + pf.File + " (" + pf.Currency + ")",
+		Header: []string{"Line", "Scenario", "Crude batch", "Runs", "Method", "Forced", "Cost per batch", "Cost", "Waste kg", "Hours elapsed", "Hours hands-on"}}
+	for _, l := range pf.Lines {
+		el, at := l.Result.Usage.Hours()
+		runs := float64(l.Runs)
+		forced := ""
+		if l.Forced {
+			forced = "yes"
+		}
+		plan.Rows = append(plan.Rows, []Cell{Num(float64(l.Line)), Text(l.Title), Text(scenario.FormatMass(l.MassKg)), Num(runs), Text(l.Method), Text(forced),
+			Money(l.Result.Ledger.Total), Money(l.Total), Num(l.Result.Usage.WasteKg() * runs), Num(el * runs), Num(at * runs)})
+	}
+	n := len(pf.Lines)
+	total := Money(pf.Total)
+	total.Formula, total.Bold = fmt.Sprintf("SUM(H3:H%d)", n+2), true
+	plan.Rows = append(plan.Rows, []Cell{{}, {Text: "Total", Bold: true}, {}, {}, {}, {}, {}, total, {}, Num(pf.HoursElapsed), Num(pf.HoursAttended)})
+	tabs = append(tabs, plan)
+
+	byMethod := Table{Name: "By method", Title: "Cost by method as chosen", Header: []string{"Method", "Cost"}}
+	var ms []string
+	for m := range pf.ByMethod {
+		ms = append(ms, m)
+	}
+	sort.Strings(ms)
+	for _, m := range ms {
+		byMethod.Rows = append(byMethod.Rows, []Cell{Text(m), Money(pf.ByMethod[m])})
+	}
+	tabs = append(tabs, byMethod)
+
+	wasteT := Table{Name: "Waste", Title: "Waste over the plan", Header: []string{"Class", "kg", "Disposal cost"}}
+	for _, c := range pf.Classes {
+		wasteT.Rows = append(wasteT.Rows, []Cell{Text(string(c.Class)), Num(c.Kg), Money(c.Disposal)})
+	}
+	wasteT.Rows = append(wasteT.Rows, []Cell{}, []Cell{{Text: "Suggested code", Bold: true}, {Text: "kg", Bold: true}, {Text: "Title", Bold: true}})
+	for _, c := range pf.Codes {
+		wasteT.Rows = append(wasteT.Rows, []Cell{Text(c.Scheme + " " + c.Code), Num(c.Kg), Text(c.Title)})
+	}
+	wasteT.Notes = []string{"A stream counts under each of its suggested codes.", waste.Caution}
+	tabs = append(tabs, wasteT)
+
+	solv := Table{Name: "Solvents", Title: "Solvent purchases over the plan", Header: []string{"Solvent", "Litres bought", "Cost", "Litres recovered", "Credit"}}
+	for _, s := range pf.Solvents {
+		solv.Rows = append(solv.Rows, []Cell{Text(s.Solvent), Num(s.Litres), Money(s.Cost), Num(s.RecoveredL), Money(s.RecoveredCr)})
+	}
+	tabs = append(tabs, solv)
+
+	caut := Table{Name: "Cautions", Title: "Cautions", Header: []string{"Caution"}}
+	for _, c := range pf.Cautions {
+		caut.Rows = append(caut.Rows, []Cell{Text(c)})
+	}
+	tabs = append(tabs, caut)
+	return WriteTables(w, pf.Currency, pf.Places, tabs)
+}

@@ -1,0 +1,166 @@
+package workbook
+
+import (
+	"fmt"
+	"io"
+	"math"
+	"unicode/utf8"
+
+	"github.com/shopspring/decimal"
+	"github.com/xuri/excelize/v2"
+)
+
+// Cell is one cell of a plain table sheet: text, a number, or money; a
+// formula may stand with its cached value.
+type Cell struct {
+	Text    string
+	Num     float64
+	IsNum   bool
+	Money   bool   // a currency amount (Num holds it)
+	Formula string // e.g. "SUM(F2:F9)"; the cached value is Num
+	Bold    bool
+}
+
+// Text, Num and Money build cells.
+func Text(s string) Cell { return Cell{Text: s} }
+
+// Num is a plain number cell; NaN and ±Inf become "n/a" (never a NaN cell).
+func Num(v float64) Cell {
+	if math.IsNaN(v) || math.IsInf(v, 0) {
+		return Cell{Text: "n/a"}
+	}
+	return Cell{Num: v, IsNum: true}
+}
+
+// Money is a currency cell holding an exact decimal amount.
+func Money(d decimal.Decimal) Cell { return Cell{Num: d.InexactFloat64(), IsNum: true, Money: true} }
+
+// Table is one plain sheet: a title, a header row and rows, then notes.
+type Table struct {
+	Name   string
+	Title  string
+	Header []string
+	Rows   [][]Cell
+	Notes  []string
+}
+
+// WriteTables writes plain table sheets (for the waste export and the
+// year's plan) with currency formats, fitted column widths and a frozen
+// header, and fixed document properties.
+func WriteTables(w io.Writer, currency string, places int32, tables []Table) error {
+	f := excelize.NewFile()
+	defer f.Close()
+	if err := f.SetDocProps(&excelize.DocProperties{Creator: docCreator, Created: docTime, Modified: docTime, LastModifiedBy: docCreator}); err != nil {
+		return err
+	}
+	moneyFmt := currencyFormat(currency, places, "")
+	styles := map[string]int{}
+	for name, s := range map[string]*excelize.Style{
+		"title":  {Font: &excelize.Font{Bold: true, Size: 14}},
+		"header": {Font: &excelize.Font{Bold: true}, Border: []excelize.Border{{Type: "bottom", Color: "000000", Style: 1}}, Alignment: &excelize.Alignment{WrapText: true, Vertical: "bottom"}},
+		"num":    {CustomNumFmt: &[]string{"#,##0.###"}[0]},
+		"money":  {CustomNumFmt: &moneyFmt},
+		"bold":   {Font: &excelize.Font{Bold: true}},
+		"moneyB": {CustomNumFmt: &moneyFmt, Font: &excelize.Font{Bold: true}},
+		"wrap":   {Alignment: &excelize.Alignment{WrapText: true, Vertical: "top"}},
+	} {
+		id, err := f.NewStyle(s)
+		if err != nil {
+			return err
+		}
+		styles[name] = id
+	}
+	for k, t := range tables {
+		if k == 0 {
+			if err := f.SetSheetName("Sheet1", t.Name); err != nil {
+				return err
+			}
+		} else if _, err := f.NewSheet(t.Name); err != nil {
+			return err
+		}
+		sw, err := f.NewStreamWriter(t.Name)
+		if err != nil {
+			return err
+		}
+		widths := make([]int, len(t.Header))
+		for i, h := range t.Header {
+			widths[i] = utf8.RuneCountInString(h)
+		}
+		for _, row := range t.Rows {
+			for i, c := range row {
+				if i < len(widths) {
+					n := utf8.RuneCountInString(c.Text)
+					if c.IsNum {
+						n = 14
+					}
+					widths[i] = max(widths[i], min(n, 60))
+				}
+			}
+		}
+		for i, wd := range widths {
+			if err := sw.SetColWidth(i+1, i+1, float64(wd+2)); err != nil {
+				return err
+			}
+		}
+		if err := sw.SetPanes(&excelize.Panes{Freeze: true, YSplit: 2, TopLeftCell: "A3", ActivePane: "bottomLeft"}); err != nil {
+			return err
+		}
+		if err := sw.SetRow("A1", []any{excelize.Cell{Value: t.Title, StyleID: styles["title"]}}); err != nil {
+			return err
+		}
+		head := make([]any, len(t.Header))
+		for i, h := range t.Header {
+			head[i] = excelize.Cell{Value: h, StyleID: styles["header"]}
+		}
+		if err := sw.SetRow("A2", head); err != nil {
+			return err
+		}
+		r := 3
+		for _, row := range t.Rows {
+			cells := make([]any, len(row))
+			for i, c := range row {
+				cells[i] = tableCell(c, styles)
+			}
+			ref, _ := excelize.CoordinatesToCellName(1, r)
+			if err := sw.SetRow(ref, cells); err != nil {
+				return err
+			}
+			r++
+		}
+		r++
+		for _, n := range t.Notes {
+			ref, _ := excelize.CoordinatesToCellName(1, r)
+			if err := sw.SetRow(ref, []any{excelize.Cell{Value: n, StyleID: styles["wrap"]}}); err != nil {
+				return err
+			}
+			r++
+		}
+		if err := sw.Flush(); err != nil {
+			return fmt.Errorf("workbook: %s: %w", t.Name, err)
+		}
+	}
+	f.SetActiveSheet(0)
+	if err := f.SetCalcProps(&excelize.CalcPropsOptions{FullCalcOnLoad: &[]bool{true}[0]}); err != nil {
+		return err
+	}
+	_, err := f.WriteTo(w)
+	return err
+}
+
+func tableCell(c Cell, styles map[string]int) excelize.Cell {
+	style := 0
+	switch {
+	case c.Money && c.Bold:
+		style = styles["moneyB"]
+	case c.Money:
+		style = styles["money"]
+	case c.IsNum:
+		style = styles["num"]
+	case c.Bold:
+		style = styles["bold"]
+	}
+	if !c.IsNum {
+		return excelize.Cell{Value: c.Text, StyleID: style}
+	}
+	return excelize.Cell{Value: round15(c.Num), Formula: c.Formula, StyleID: style}
+}

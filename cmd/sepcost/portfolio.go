@@ -1,0 +1,102 @@
+package main
+
+import (
+	"bytes"
+	"context"
+	"fmt"
+	"io"
+	"path/filepath"
+
+	"github.com/spf13/cobra"
+
+	"sepcost/cmd/sepcost/internal/plain"
+	"sepcost/cmd/sepcost/internal/workbook"
+	"sepcost/costing"
+	"sepcost/scale"
+)
+
+type portfolioOptions struct {
+	plan   string
+	prices string
+	out    string
+	format string
+	force  bool
+}
+
+func newPortfolioCommand() *cobra.Command {
+	opts := &portfolioOptions{}
+	cmd := &cobra.Command{
+		Use:   "portfolio PLAN.csv",
+		Short: "Cost a year's plan of batches and roll up cost, waste, solvent and hours",
+		Long: `Reads a plan CSV with the header scenario,mass,runs and an optional method
+column: a scenario file (relative to the plan), a batch mass with its unit,
+how many times that batch is run, and optionally the method to force. Each
+row takes the cheapest feasible method at its mass unless forced. The
+roll-up gives cost per method, waste by class and by suggested code, solvent
+purchases by solvent and hours; totals reconcile to the cent.`,
+		Example: `  sepcost portfolio plan.csv --prices prices.csv -o year.xlsx`,
+		Args:    cobra.ExactArgs(1),
+		RunE: func(cmd *cobra.Command, args []string) error {
+			opts.plan = args[0]
+			return runPortfolio(cmd.Context(), opts, cmd.OutOrStdout(), cmd.ErrOrStderr())
+		},
+	}
+	cmd.Flags().StringVar(&opts.prices, "prices", "", "price table CSV (default: prices.csv beside the plan)")
+	addOutputFlags(cmd, &opts.out, &opts.format, &opts.force)
+	return cmd
+}
+
+func runPortfolio(_ context.Context, opts *portfolioOptions, stdout, stderr io.Writer) error {
+	format, err := formatFor(opts.format, opts.out)
+	if err != nil {
+		return err
+	}
+	data, err := openInput(opts.plan, "plan")
+	if err != nil {
+		return err
+	}
+	rows, err := scale.ReadPlan(bytes.NewReader(data), opts.plan)
+	if err != nil {
+		return err
+	}
+	t, err := loadPrices(opts.prices, opts.plan)
+	if err != nil {
+		return err
+	}
+	dir := filepath.Dir(opts.plan)
+	load := func(path string) (*costing.Plan, error) {
+		if !filepath.IsAbs(path) {
+			path = filepath.Join(dir, path)
+		}
+		sc, err := loadScenario(path)
+		if err != nil {
+			return nil, err
+		}
+		return costing.Prepare(sc)
+	}
+	pf, err := scale.BuildPortfolio(opts.plan, rows, load, t)
+	if err != nil {
+		return err
+	}
+	var buf bytes.Buffer
+	switch format {
+	case "xlsx":
+		err = workbook.WritePortfolio(&buf, pf)
+	case "json":
+		err = plain.PortfolioJSON(&buf, pf)
+	case "csv":
+		err = plain.PortfolioCSV(&buf, pf)
+	default:
+		err = plain.PortfolioText(&buf, pf)
+	}
+	if err != nil {
+		return err
+	}
+	if err := emit(&buf, opts.out, opts.force, stdout); err != nil {
+		return err
+	}
+	if opts.out != "" && opts.out != "-" {
+		fmt.Fprintf(stderr, "wrote %s\n", opts.out)
+	}
+	return nil
+}

@@ -1,0 +1,96 @@
+package main
+
+import (
+	"bytes"
+	"context"
+	"fmt"
+	"io"
+
+	"github.com/spf13/cobra"
+
+	"sepcost/cmd/sepcost/internal/plain"
+	"sepcost/cmd/sepcost/internal/workbook"
+	"sepcost/costing"
+	"sepcost/scale"
+)
+
+type wasteOptions struct {
+	scenario string
+	prices   string
+	masses   massList
+	out      string
+	format   string
+	force    bool
+}
+
+func newWasteCommand() *cobra.Command {
+	opts := &wasteOptions{}
+	cmd := &cobra.Command{
+		Use:   "waste SCENARIO",
+		Short: "The waste forecast alone: one row per stream, with suggested codes",
+		Long: `Writes every waste stream of every feasible method at each batch mass: class,
+mass, volume, composition, disposal cost, and suggested waste codes from the
+EU List of Waste and the US EPA spent-solvent and characteristic codes, with
+the rule applied. Classification is decided by your site's EHS office under
+local rules; the codes are suggestions to start from.`,
+		Example: `  sepcost waste scenario.yaml --prices prices.csv --mass 2kg --format csv > waste.csv
+  sepcost waste scenario.yaml --mass 20g,2kg -o waste.xlsx`,
+		Args: cobra.ExactArgs(1),
+		RunE: func(cmd *cobra.Command, args []string) error {
+			opts.scenario = args[0]
+			return runWaste(cmd.Context(), opts, cmd.OutOrStdout(), cmd.ErrOrStderr())
+		},
+	}
+	cmd.Flags().StringVar(&opts.prices, "prices", "", "price table CSV (default: prices.csv beside the scenario)")
+	cmd.Flags().Var(&opts.masses, "mass", `crude batch masses with units, e.g. "2kg" (default: the scenario's masses)`)
+	addOutputFlags(cmd, &opts.out, &opts.format, &opts.force)
+	return cmd
+}
+
+func runWaste(_ context.Context, opts *wasteOptions, stdout, stderr io.Writer) error {
+	format, err := formatFor(opts.format, opts.out)
+	if err != nil {
+		return err
+	}
+	sc, err := loadScenario(opts.scenario)
+	if err != nil {
+		return err
+	}
+	t, err := loadPrices(opts.prices, opts.scenario)
+	if err != nil {
+		return err
+	}
+	masses := sc.MassesKg
+	if opts.masses.set {
+		masses = opts.masses.kg
+	}
+	plan, err := costing.Prepare(sc)
+	if err != nil {
+		return err
+	}
+	r, err := scale.Estimate(plan, t, masses)
+	if err != nil {
+		return err
+	}
+	var buf bytes.Buffer
+	switch format {
+	case "xlsx":
+		err = workbook.WriteWaste(&buf, r)
+	case "json":
+		err = plain.WasteJSON(&buf, r)
+	case "csv":
+		err = plain.WasteCSV(&buf, r)
+	default:
+		err = plain.WasteText(&buf, r)
+	}
+	if err != nil {
+		return err
+	}
+	if err := emit(&buf, opts.out, opts.force, stdout); err != nil {
+		return err
+	}
+	if opts.out != "" && opts.out != "-" {
+		fmt.Fprintf(stderr, "wrote %s\n", opts.out)
+	}
+	return nil
+}
