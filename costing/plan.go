@@ -82,12 +82,21 @@ func Prepare(sc *scenario.Scenario) (*Plan, error) {
 	if sc.Chromatography == nil && sc.Crystallization == nil && sc.Distillation == nil {
 		return nil, &scenario.Problem{File: sc.File, Msg: "describes no purification method; add a chromatography:, crystallization: or distillation: section (see `sepcost init`)"}
 	}
+	return newPlan(sc, coef), nil
+}
+
+// newPlan registers the methods on a settled coefficient set.
+func newPlan(sc *scenario.Scenario, coef source.Set) *Plan {
 	p := &Plan{Scenario: sc, Coef: coef}
 	p.add(chrom.Method, sc.Chromatography != nil, func(m float64) usage.Usage { return chrom.Run(sc, coef, m) })
 	p.add(cryst.Method, sc.Crystallization != nil, func(m float64) usage.Usage { return cryst.Run(sc, coef, m) })
 	p.add(distil.Method, sc.Distillation != nil, func(m float64) usage.Usage { return distil.Run(sc, coef, m) })
-	return p, nil
+	return p
 }
+
+// WithCoefficients is the same plan on another coefficient set (used to
+// sample the models' uncertainty).
+func (p *Plan) WithCoefficients(coef source.Set) *Plan { return newPlan(p.Scenario, coef) }
 
 // add registers a method. A method the scenario does not describe stays in
 // the plan as "not assessed", with the reason, so that no report silently

@@ -45,6 +45,7 @@ type Decision struct {
 	RunnerPerG  float64
 	Margin      float64 // (runner − winner) / runner
 	Tie         bool
+	Confidence  float64 // share of Monte Carlo draws in which Winner is cheapest (0 when not sampled)
 	Drivers     []Driver
 	Flips       []Flip
 	Infeasible  map[string]string // method → reason
@@ -145,6 +146,32 @@ func plausible(f Flip) bool {
 		return true
 	}
 	return b/p <= FlipRange && b/p >= 1/FlipRange
+}
+
+// ConfidentShare is the share of Monte Carlo draws in which the winner must
+// be cheapest for the decision to stand; below it the methods tie within
+// the models' uncertainty (common practice, no source: four draws in five).
+const ConfidentShare = 0.8
+
+// weigh adds the Monte Carlo result to the decision: the share of draws in
+// which the winner is cheapest, and a tie when that share is below
+// ConfidentShare.
+func (d *Decision) weigh(u *Uncertainty) {
+	if d.Winner == "" || d.RunnerUp == "" {
+		return
+	}
+	for _, b := range u.Bands {
+		if b.Method != d.Winner {
+			continue
+		}
+		d.Confidence = b.Cheapest
+		line := fmt.Sprintf("In %d draws of the models' coefficients and the prices within their stated uncertainty, %s is cheapest in %.0f %% (P10–P90 %.2f–%.2f per gram).", u.Draws, d.Winner, b.Cheapest*100, b.P10, b.P90)
+		if b.Cheapest < ConfidentShare && !d.Tie {
+			d.Tie = true
+			line += " That is not a clear win: treat the methods as tied and choose on other grounds."
+		}
+		d.Explanation = append(d.Explanation, line)
+	}
 }
 
 // topDrivers returns a method's n largest cost items.

@@ -35,6 +35,7 @@ type Report struct {
 	Decision     *Decision    // the recommendation at TargetKg
 	Crossovers   []Crossover  // masses where methods change places (sweeps only)
 	IsSweep      bool         // the masses are a log-spaced curve
+	Uncertainty  *Uncertainty // Monte Carlo bands at TargetKg (nil when not sampled)
 	Waste        []WasteRow   // every stream of every feasible result, classified
 	Greenness    []SolventGreenness
 	WasteSector  string // the EU List of Waste chapter used for the codes

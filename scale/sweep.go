@@ -9,7 +9,12 @@ import (
 // crossover masses between each pair of methods by bisection on the model,
 // and decides at the scenario's target mass.
 func Sweep(p *costing.Plan, t *prices.Table, masses []float64) (*Report, error) {
-	r, err := Estimate(p, t, masses)
+	return SweepWith(p, t, masses, DefaultOptions)
+}
+
+// SweepWith is Sweep with chosen sampling options.
+func SweepWith(p *costing.Plan, t *prices.Table, masses []float64, opt Options) (*Report, error) {
+	r, err := EstimateWith(p, t, masses, opt)
 	if err != nil {
 		return nil, err
 	}

@@ -168,6 +168,9 @@ func Run(sc *scenario.Scenario, coef source.Set, crudeKg float64) usage.Usage {
 
 	// Shortcut design for the charge as a continuous feed (saturated liquid).
 	rd := get(KeyDesignRecovery)
+	if !(rd > 0 && rd < 1) {
+		return fail("setting %s = %.4g must lie above 0 and below 1", KeyDesignRecovery, rd)
+	}
 	var xD, xB float64
 	if productLight {
 		xD = xTarget
