@@ -2,6 +2,7 @@ package main
 
 import (
 	"context"
+	"fmt"
 	"io"
 
 	"github.com/spf13/cobra"
@@ -19,6 +20,8 @@ type estimateOptions struct {
 	out      string
 	format   string
 	force    bool
+	draws    int
+	seed     uint64
 }
 
 func newEstimateCommand() *cobra.Command {
@@ -41,7 +44,17 @@ the file's extension (.xlsx, .json, .csv) unless --format says otherwise.`,
 	f.StringVar(&opts.prices, "prices", "", "price table CSV (default: prices.csv beside the scenario)")
 	f.Var(&opts.masses, "mass", `crude batch masses with units, e.g. "250mg,20g,2kg" (default: the scenario's masses)`)
 	addOutputFlags(cmd, &opts.out, &opts.format, &opts.force)
+	addDrawFlags(cmd, &opts.draws, &opts.seed)
 	return cmd
+}
+
+// maxDraws caps the Monte Carlo draws: a million draws take minutes and
+// add nothing to the bands.
+const maxDraws = 1_000_000
+
+func addDrawFlags(cmd *cobra.Command, draws *int, seed *uint64) {
+	cmd.Flags().IntVar(draws, "draws", scale.DefaultOptions.Draws, "Monte Carlo draws of the uncertainty at the target mass (0 to skip)")
+	cmd.Flags().Uint64Var(seed, "seed", scale.DefaultOptions.Seed, "seed of the draws; the same seed gives the same bands")
 }
 
 func addOutputFlags(cmd *cobra.Command, out, format *string, force *bool) {
@@ -51,6 +64,9 @@ func addOutputFlags(cmd *cobra.Command, out, format *string, force *bool) {
 }
 
 func runEstimate(_ context.Context, opts *estimateOptions, stdout, stderr io.Writer) error {
+	if opts.draws < 0 || opts.draws > maxDraws {
+		return usageError{fmt.Errorf("--draws %d: write 0 to skip, or up to %d", opts.draws, maxDraws)}
+	}
 	format, err := formatFor(opts.format, opts.out)
 	if err != nil {
 		return err
@@ -67,7 +83,11 @@ func runEstimate(_ context.Context, opts *estimateOptions, stdout, stderr io.Wri
 	if opts.masses.set {
 		masses = opts.masses.kg
 	}
-	r, err := buildReport(sc, t, masses)
+	plan, err := costing.Prepare(sc)
+	if err != nil {
+		return err
+	}
+	r, err := scale.EstimateWith(plan, t, masses, scale.Options{Draws: opts.draws, Seed: opts.seed, Progress: newProgress(stderr, opts.draws)})
 	if err != nil {
 		return err
 	}

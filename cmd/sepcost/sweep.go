@@ -20,6 +20,8 @@ type sweepOptions struct {
 	out      string
 	format   string
 	force    bool
+	draws    int
+	seed     uint64
 }
 
 func newSweepCommand() *cobra.Command {
@@ -45,6 +47,7 @@ method, the margin, the largest cost drivers and the prices that would flip it.`
 	f.StringVar(&opts.to, "to", "10kg", "largest crude batch mass, with its unit")
 	f.IntVar(&opts.points, "points", 30, "number of log-spaced masses (2 to 10000)")
 	addOutputFlags(cmd, &opts.out, &opts.format, &opts.force)
+	addDrawFlags(cmd, &opts.draws, &opts.seed)
 	return cmd
 }
 
@@ -60,6 +63,9 @@ func runSweep(_ context.Context, opts *sweepOptions, stdout, stderr io.Writer) e
 	to, err := units.ParseAs(opts.to, units.Mass)
 	if err != nil {
 		return usageError{fmt.Errorf("--to %q: %v", opts.to, err)}
+	}
+	if opts.draws < 0 || opts.draws > maxDraws {
+		return usageError{fmt.Errorf("--draws %d: write 0 to skip, or up to %d", opts.draws, maxDraws)}
 	}
 	masses, err := scale.LogSpace(from, to, opts.points)
 	if err != nil {
@@ -77,7 +83,7 @@ func runSweep(_ context.Context, opts *sweepOptions, stdout, stderr io.Writer) e
 	if err != nil {
 		return err
 	}
-	r, err := scale.Sweep(plan, t, masses)
+	r, err := scale.SweepWith(plan, t, masses, scale.Options{Draws: opts.draws, Seed: opts.seed, Progress: newProgress(stderr, opts.draws)})
 	if err != nil {
 		return err
 	}
