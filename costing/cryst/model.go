@@ -338,6 +338,14 @@ func Run(sc *scenario.Scenario, coef source.Set, crudeKg float64) usage.Usage {
 			fig("jacketed_reactor", "jacketed reactor (1) or flask (0), first pass", b2f(ves.Reactor), "")
 			fig("vessel_fill", "share of the vessel filled (first pass)", ves.Fill, "%")
 			fig("batches", "batches (first pass)", n, "")
+			kind := "flask"
+			if ves.Reactor {
+				kind = "jacketed reactor"
+			}
+			u.Equipment = fmt.Sprintf("%s %s", volumeLabel(ves.Volume), kind)
+			if ves.Batches > 1 {
+				u.Equipment += fmt.Sprintf(" × %d batches", ves.Batches)
+			}
 			if ves.Batches > 1 {
 				fill := flaskFill
 				if ves.Reactor {
@@ -597,4 +605,12 @@ func mustSolvent(b *solvent.Book, id string) solvent.Solvent {
 		panic("cryst: solvent " + id + " was not checked by the scenario reader")
 	}
 	return s
+}
+
+// volumeLabel writes a vessel volume (m³) as "250 mL" or "20 L".
+func volumeLabel(v float64) string {
+	if v < 1e-3 {
+		return fmt.Sprintf("%.0f mL", v*1e6)
+	}
+	return fmt.Sprintf("%.4g L", v*1e3)
 }

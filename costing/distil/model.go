@@ -244,6 +244,10 @@ func Run(sc *scenario.Scenario, coef source.Set, crudeKg float64) usage.Usage {
 	nBatch := mBatch / mMean
 	fig("still_volume", "still volume", st.Volume, "L")
 	fig("batches", "batches", batches, "")
+	u.Equipment = fmt.Sprintf("%.4g L still, %.4g stages above the pot", st.Volume*1e3, d.ColumnStages)
+	if st.Batches > 1 {
+		u.Equipment += fmt.Sprintf(" × %d batches", st.Batches)
+	}
 	fig("charge_per_batch", "charge per batch", mBatch, "g")
 	if st.Batches > 1 {
 		note(usage.Info, "The charge (%.3g L) is more than the largest still (%.3g L at %.0f %% fill) holds: %d batches of %s.", crudeKg/rhoMix*1000, st.Volume*1000, fill*100, st.Batches, scenario.FormatMass(mBatch))

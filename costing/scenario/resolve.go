@@ -299,10 +299,11 @@ func (m Mix) String() string {
 
 // FormatMass writes a mass in kg with a convenient unit: "250 mg", "20 g", "2 kg".
 func FormatMass(kg float64) string {
+	const tol = 1 - 1e-9 // 0.000999999… kg from a log-spaced sweep is 1 g
 	switch {
-	case kg < 1e-3:
+	case kg < 1e-3*tol:
 		return strconv.FormatFloat(kg*1e6, 'g', 4, 64) + " mg"
-	case kg < 1:
+	case kg < 1*tol:
 		return strconv.FormatFloat(kg*1e3, 'g', 4, 64) + " g"
 	default:
 		return strconv.FormatFloat(kg, 'g', 4, 64) + " kg"

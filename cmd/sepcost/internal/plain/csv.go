@@ -9,12 +9,16 @@ import (
 	"sepcost/scale"
 )
 
-// CSV writes one row per ledger line: batch mass, method, group, item,
+// CSV writes one row per ledger line (for a sweep, SweepCSV's one row per
+// mass and method): batch mass, method, group, item,
 // label, quantity, unit, unit price, amount, currency. Text cells that a
 // spreadsheet would read as a formula are written with a leading
 // apostrophe (OWASP, "CSV Injection", guidance: prefix cells that begin
 // with =, +, -, @, tab or carriage return).
 func CSV(w io.Writer, r *scale.Report) error {
+	if r.IsSweep {
+		return SweepCSV(w, r)
+	}
 	cw := csv.NewWriter(w)
 	header := []string{"crude_kg", "method", "group", "item", "label", "quantity", "unit", "unit_price", "amount", "currency"}
 	if err := cw.Write(header); err != nil {

@@ -20,7 +20,16 @@ func Text(w io.Writer, r *scale.Report) error {
 	ew := &errWriter{w: w}
 	ew.printf("%s\n", r.Title)
 	ew.printf("scenario: %s   prices: %s (%s)\n", r.ScenarioFile, r.PricesFile, r.Prices.Currency)
+	if r.IsSweep {
+		ew.printf("\n")
+		if err := sweepTable(ew, r); err != nil {
+			return err
+		}
+	}
 	for i, m := range r.MassesKg {
+		if r.IsSweep {
+			break
+		}
 		for j, name := range r.Methods {
 			res := r.Results[i][j]
 			u := res.Usage
