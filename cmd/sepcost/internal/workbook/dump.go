@@ -16,11 +16,16 @@ import (
 // Dump is a stable text dump of a workbook for golden tests: document
 // properties and calculation setting, sheet names in order, then per sheet
 // its frozen panes, column widths, row heights other than the default,
-// merged ranges, and every non-empty cell with its type, value, formula,
-// number format and the bold and wrap flags. It compares content, not zip
-// bytes.
+// merged ranges, every non-empty cell with its type, value, formula,
+// number format and the bold and wrap flags, and its charts (anchor,
+// title, series references, axes and their scales). It compares content,
+// not zip bytes.
 func Dump(r io.ReaderAt, size int64) (string, error) {
 	refs, err := cellRefs(r, size)
+	if err != nil {
+		return "", err
+	}
+	charts, err := sheetCharts(r, size)
 	if err != nil {
 		return "", err
 	}
@@ -48,6 +53,9 @@ func Dump(r io.ReaderAt, size int64) (string, error) {
 		fmt.Fprintf(&b, "\nsheet %d %q\n", i+1, sheet)
 		if err := dumpSheet(&b, f, sheet, refs[sheet], styleText); err != nil {
 			return "", err
+		}
+		for _, line := range charts[sheet] {
+			fmt.Fprintln(&b, line)
 		}
 	}
 	return b.String(), nil
@@ -201,9 +209,33 @@ type cellPos struct{ row, col int }
 // but does not list the cells of a sheet; a formula cell without a cached
 // value would be missed by GetRows.
 func cellRefs(r io.ReaderAt, size int64) (map[string][]cellPos, error) {
+	files, sheets, err := packageSheets(r, size)
+	if err != nil {
+		return nil, err
+	}
+	out := map[string][]cellPos{}
+	for _, s := range sheets {
+		zf := files[s.part]
+		if zf == nil {
+			return nil, fmt.Errorf("workbook: dump: sheet %q has no part %q", s.name, s.part)
+		}
+		pos, err := sheetCells(zf)
+		if err != nil {
+			return nil, fmt.Errorf("workbook: dump: sheet %q: %w", s.name, err)
+		}
+		out[s.name] = pos
+	}
+	return out, nil
+}
+
+type sheetPart struct{ name, part string }
+
+// packageSheets opens the zip and lists the sheets in workbook order with
+// the names of their parts.
+func packageSheets(r io.ReaderAt, size int64) (map[string]*zip.File, []sheetPart, error) {
 	zr, err := zip.NewReader(r, size)
 	if err != nil {
-		return nil, fmt.Errorf("workbook: dump: not an .xlsx (zip) file: %w", err)
+		return nil, nil, fmt.Errorf("workbook: dump: not an .xlsx (zip) file: %w", err)
 	}
 	files := map[string]*zip.File{}
 	for _, zf := range zr.File {
@@ -215,42 +247,196 @@ func cellRefs(r io.ReaderAt, size int64) (map[string][]cellPos, error) {
 			RID  string `xml:"http://schemas.openxmlformats.org/officeDocument/2006/relationships id,attr"`
 		} `xml:"sheets>sheet"`
 	}
+	if err := decodeXML(files, "xl/workbook.xml", &wb); err != nil {
+		return nil, nil, err
+	}
+	target, err := relTargets(files, "xl/workbook.xml")
+	if err != nil {
+		return nil, nil, err
+	}
+	var out []sheetPart
+	for _, s := range wb.Sheets {
+		out = append(out, sheetPart{s.Name, target[s.RID].target})
+	}
+	return files, out, nil
+}
+
+type relTarget struct{ target, typ string }
+
+// relTargets reads the relationships of a part: id → target part (resolved
+// against the part's folder) and type. A part without relationships has none.
+func relTargets(files map[string]*zip.File, part string) (map[string]relTarget, error) {
+	relsPath := path.Join(path.Dir(part), "_rels", path.Base(part)+".rels")
+	out := map[string]relTarget{}
+	if files[relsPath] == nil {
+		return out, nil
+	}
 	var rels struct {
 		Rels []struct {
 			ID     string `xml:"Id,attr"`
 			Target string `xml:"Target,attr"`
+			Type   string `xml:"Type,attr"`
 		} `xml:"Relationship"`
 	}
-	if err := decodeXML(files, "xl/workbook.xml", &wb); err != nil {
+	if err := decodeXML(files, relsPath, &rels); err != nil {
 		return nil, err
 	}
-	if err := decodeXML(files, "xl/_rels/workbook.xml.rels", &rels); err != nil {
-		return nil, err
-	}
-	target := map[string]string{}
 	for _, rel := range rels.Rels {
 		t := rel.Target
 		if strings.HasPrefix(t, "/") {
 			t = strings.TrimPrefix(t, "/")
 		} else {
-			t = path.Join("xl", t)
+			t = path.Join(path.Dir(part), t)
 		}
-		target[rel.ID] = t
-	}
-	out := map[string][]cellPos{}
-	for _, s := range wb.Sheets {
-		zf := files[target[s.RID]]
-		if zf == nil {
-			return nil, fmt.Errorf("workbook: dump: sheet %q has no part %q", s.Name, target[s.RID])
-		}
-		pos, err := sheetCells(zf)
-		if err != nil {
-			return nil, fmt.Errorf("workbook: dump: sheet %q: %w", s.Name, err)
-		}
-		out[s.Name] = pos
+		out[rel.ID] = relTarget{t, rel.Type}
 	}
 	return out, nil
 }
+
+// sheetCharts describes, per sheet name, the charts drawn on the sheet:
+// anchor cells, title, chart type and style, how blanks show, each axis's
+// position, title and logarithmic base, and each series' name, X and Y
+// references and whether the X values are a number reference.
+func sheetCharts(r io.ReaderAt, size int64) (map[string][]string, error) {
+	files, sheets, err := packageSheets(r, size)
+	if err != nil {
+		return nil, err
+	}
+	out := map[string][]string{}
+	for _, s := range sheets {
+		rels, err := relTargets(files, s.part)
+		if err != nil {
+			return nil, err
+		}
+		ids := make([]string, 0, len(rels))
+		for id := range rels {
+			ids = append(ids, id)
+		}
+		sort.Strings(ids)
+		for _, id := range ids {
+			if !strings.HasSuffix(rels[id].typ, "/drawing") {
+				continue
+			}
+			lines, err := drawingCharts(files, rels[id].target)
+			if err != nil {
+				return nil, fmt.Errorf("workbook: dump: sheet %q: %w", s.name, err)
+			}
+			out[s.name] = append(out[s.name], lines...)
+		}
+	}
+	return out, nil
+}
+
+// drawingCharts describes the charts of one drawing part in anchor order.
+func drawingCharts(files map[string]*zip.File, part string) ([]string, error) {
+	type marker struct {
+		Col int `xml:"col"`
+		Row int `xml:"row"`
+	}
+	var dr struct {
+		Anchors []struct {
+			From  marker `xml:"from"`
+			To    marker `xml:"to"`
+			Chart struct {
+				ID string `xml:"http://schemas.openxmlformats.org/officeDocument/2006/relationships id,attr"`
+			} `xml:"graphicFrame>graphic>graphicData>chart"`
+		} `xml:"twoCellAnchor"`
+	}
+	if err := decodeXML(files, part, &dr); err != nil {
+		return nil, err
+	}
+	rels, err := relTargets(files, part)
+	if err != nil {
+		return nil, err
+	}
+	var out []string
+	for _, a := range dr.Anchors {
+		if a.Chart.ID == "" {
+			continue
+		}
+		var c chartDump
+		if err := decodeXML(files, rels[a.Chart.ID].target, &c); err != nil {
+			return nil, err
+		}
+		out = append(out, fmt.Sprintf("  chart %s:%s %q", cellName(a.From.Col+1, a.From.Row+1), cellName(a.To.Col+1, a.To.Row+1), c.text(c.Chart.Title)))
+		for _, sc := range c.Chart.PlotArea.Scatter {
+			out = append(out, fmt.Sprintf("    scatter, style %s, blanks as %s", sc.Style.Val, c.Chart.Blanks.Val))
+			for _, ser := range sc.Ser {
+				x := ser.XVal.NumRef.F + " (numbers)"
+				if ser.XVal.NumRef.F == "" {
+					x = ser.XVal.StrRef.F + " (text)"
+				}
+				line := "no line"
+				if ser.SpPr.Ln.NoFill == nil {
+					line = "line"
+				}
+				out = append(out, fmt.Sprintf("    series name %s x %s y %s, %s, smooth %s", ser.Tx.F, x, ser.YVal.NumRef.F, line, ser.Smooth.Val))
+			}
+		}
+		for _, ax := range c.Chart.PlotArea.ValAx {
+			scale := "linear"
+			if ax.Scaling.LogBase != nil {
+				scale = "log base " + ax.Scaling.LogBase.Val
+			}
+			out = append(out, fmt.Sprintf("    value axis %s, %s, %q", ax.AxPos.Val, scale, c.text(ax.Title)))
+		}
+	}
+	return out, nil
+}
+
+type chartVal struct {
+	Val string `xml:"val,attr"`
+}
+
+type chartTitle struct {
+	Runs []string `xml:"tx>rich>p>r>t"`
+}
+
+// chartDump is the part of a chart part that the dump shows.
+type chartDump struct {
+	Chart struct {
+		Title    chartTitle `xml:"title"`
+		Blanks   chartVal   `xml:"dispBlanksAs"`
+		PlotArea struct {
+			Scatter []struct {
+				Style chartVal `xml:"scatterStyle"`
+				Ser   []struct {
+					Tx struct {
+						F string `xml:"strRef>f"`
+					} `xml:"tx"`
+					SpPr struct {
+						Ln struct {
+							NoFill *struct{} `xml:"noFill"`
+						} `xml:"ln"`
+					} `xml:"spPr"`
+					XVal struct {
+						NumRef struct {
+							F string `xml:"f"`
+						} `xml:"numRef"`
+						StrRef struct {
+							F string `xml:"f"`
+						} `xml:"strRef"`
+					} `xml:"xVal"`
+					YVal struct {
+						NumRef struct {
+							F string `xml:"f"`
+						} `xml:"numRef"`
+					} `xml:"yVal"`
+					Smooth chartVal `xml:"smooth"`
+				} `xml:"ser"`
+			} `xml:"scatterChart"`
+			ValAx []struct {
+				AxPos   chartVal `xml:"axPos"`
+				Scaling struct {
+					LogBase *chartVal `xml:"logBase"`
+				} `xml:"scaling"`
+				Title chartTitle `xml:"title"`
+			} `xml:"valAx"`
+		} `xml:"plotArea"`
+	} `xml:"chart"`
+}
+
+func (chartDump) text(t chartTitle) string { return strings.Join(t.Runs, "") }
 
 func decodeXML(files map[string]*zip.File, name string, v any) error {
 	zf := files[name]

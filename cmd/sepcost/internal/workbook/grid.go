@@ -38,10 +38,11 @@ type grid struct {
 	freezeRows int
 	freezeCols int
 	widths     map[int]float64 // widths fixed by the sheet's builder
+	minWidths  map[int]float64 // widths the content may widen but not narrow
 }
 
 func newGrid(name string) *grid {
-	return &grid{name: name, cells: map[int]map[int]cell{}, widths: map[int]float64{}}
+	return &grid{name: name, cells: map[int]map[int]cell{}, widths: map[int]float64{}, minWidths: map[int]float64{}}
 }
 
 func (g *grid) set(row, col int, c cell) {
@@ -91,13 +92,67 @@ func finite(v float64) bool { return !math.IsNaN(v) && !math.IsInf(v, 0) }
 // keeps. excelize cuts longer numbers off instead of rounding them, so
 // 0.9199999999999999 would be written as 0.919999999999999; rounded first
 // it is written as 0.92. The change is below 5 parts in 10^16.
+//
+// With k = 14 − ⌊log10 |v|⌋ ≥ 0, the rounding is
+//
+//	r = round(|v| · 10^k) / 10^k
+//
+// in floating point where 10^k is exact (k ≤ 22) and |v| · 10^k is below
+// 2^53. The product is taken with its exact error (x + δ = |v|·10^k, δ
+// from a fused multiply-add), so the integer it rounds to is the one the
+// exact product rounds to; that integer is held exactly and the division
+// is correctly rounded, so r is the double nearest the 15-digit decimal,
+// as formatting and parsing it would give, ties going to even as strconv
+// rounds them. Elsewhere it formats and parses the decimal.
 func round15(v float64) float64 {
+	if v == 0 || !finite(v) {
+		return v
+	}
+	a := math.Abs(v)
+	// k from the binary exponent (a = f·2^b, ½ ≤ f < 1), then corrected so
+	// that 10^14 ≤ a·10^k < 10^15: the 15 digits sit left of the point.
+	_, b := math.Frexp(a)
+	k := 14 - int(math.Floor(float64(b-1)*math.Log10E*math.Ln2))
+	for range 3 {
+		if k < 0 || k > 22 {
+			break
+		}
+		p := pow10[k]
+		x := a * p
+		switch {
+		case x >= 1e15:
+			k--
+			continue
+		case x < 1e14:
+			k++
+			continue
+		}
+		d := math.FMA(a, p, -x) // a·p − x, exactly; |d| ≤ ulp(x)/2
+		fl := math.Floor(x)
+		// The exact fraction is (x − fl) + d; x − fl is exact and a
+		// multiple of ulp(x), so d decides only when x − fl is ½.
+		f := x - fl
+		if f > 0.5 || (f == 0.5 && (d > 0 || (d == 0 && math.Mod(fl, 2) == 1))) {
+			fl++ // ties to even, as strconv formats
+		}
+		return math.Copysign(fl/p, v)
+	}
 	r, err := strconv.ParseFloat(strconv.FormatFloat(v, 'g', 15, 64), 64)
 	if err != nil {
 		return v
 	}
 	return r
 }
+
+// pow10 holds the powers of ten that a double represents exactly.
+var pow10 = func() [23]float64 {
+	var p [23]float64
+	p[0] = 1
+	for i := 1; i < len(p); i++ {
+		p[i] = p[i-1] * 10
+	}
+	return p
+}()
 
 // merged reports whether (row, col) lies in a merged range, and its width in columns.
 func (g *grid) merged(row, col int) (merge, bool) {
@@ -137,7 +192,7 @@ func (g *grid) fitWidths(st *styles) map[int]float64 {
 			continue
 		}
 		w := float64(need[col] + 2)
-		out[col] = math.Min(math.Max(w, minWidth), maxWidth)
+		out[col] = math.Min(math.Max(math.Max(w, minWidth), g.minWidths[col]), maxWidth)
 	}
 	return out
 }
@@ -151,15 +206,8 @@ func (g *grid) flush(f *excelize.File, st *styles, omit bool) error {
 		return fmt.Errorf("workbook: sheet %s: %w", g.name, err)
 	}
 	widths := g.fitWidths(st)
-	cols := make([]int, 0, len(widths))
-	for c := range widths {
-		cols = append(cols, c)
-	}
-	sort.Ints(cols)
-	for _, c := range cols {
-		if err := sw.SetColWidth(c, c, widths[c]); err != nil {
-			return fmt.Errorf("workbook: sheet %s: column %s width: %w", g.name, colName(c), err)
-		}
+	if err := setWidths(sw, g.name, widths); err != nil {
+		return err
 	}
 	if g.freezeRows > 0 || g.freezeCols > 0 {
 		if err := sw.SetPanes(g.panes()); err != nil {
@@ -219,6 +267,28 @@ func (g *grid) flush(f *excelize.File, st *styles, omit bool) error {
 	}
 	if err := sw.Flush(); err != nil {
 		return fmt.Errorf("workbook: sheet %s: %w", g.name, err)
+	}
+	return nil
+}
+
+// setWidths sets the column widths, one range per run of adjacent columns
+// of equal width: excelize's StreamWriter looks a cell's column up among
+// these ranges for every cell it writes.
+func setWidths(sw *excelize.StreamWriter, sheet string, widths map[int]float64) error {
+	cols := make([]int, 0, len(widths))
+	for c := range widths {
+		cols = append(cols, c)
+	}
+	sort.Ints(cols)
+	for k := 0; k < len(cols); {
+		first, w := cols[k], widths[cols[k]]
+		last := first
+		for k++; k < len(cols) && cols[k] == last+1 && widths[cols[k]] == w; k++ {
+			last = cols[k]
+		}
+		if err := sw.SetColWidth(first, last, w); err != nil {
+			return fmt.Errorf("workbook: sheet %s: column %s width: %w", sheet, colName(first), err)
+		}
 	}
 	return nil
 }

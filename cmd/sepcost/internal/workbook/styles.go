@@ -27,6 +27,7 @@ type styles struct {
 	hours, hoursBold                   int
 	kg, kgBold, litres                 int
 	percent                            int
+	factor                             int // a ratio shown as "12.3×"
 	minPlaces, maxPlaces               int32
 	meta                               map[int]fmtMeta
 }
@@ -86,6 +87,7 @@ func newStyles(f *excelize.File, m money) (*styles, error) {
 		{&st.kgBold, excelize.Style{CustomNumFmt: str("#,##0.000"), Font: &excelize.Font{Bold: true}, Border: top}, fmtMeta{3, true, 0}},
 		{&st.litres, excelize.Style{CustomNumFmt: str("#,##0.000")}, fmtMeta{3, true, 0}},
 		{&st.percent, excelize.Style{CustomNumFmt: str("0.0%")}, fmtMeta{1, false, 1}},
+		{&st.factor, excelize.Style{CustomNumFmt: str(`#,##0.00"×"`)}, fmtMeta{2, true, 1}},
 	}
 	for _, d := range defs {
 		s := d.s

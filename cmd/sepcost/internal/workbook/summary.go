@@ -1,6 +1,7 @@
 package workbook
 
 import (
+	"fmt"
 	"strings"
 
 	"github.com/shopspring/decimal"
@@ -11,8 +12,11 @@ import (
 // buildSummary writes the title and files, a table per batch mass and
 // method whose numbers are references to the method sheets (with their
 // cached values), the cheapest method per mass where there are several,
-// then the report's notes and cautions.
-func buildSummary(g *grid, st *styles, r *scale.Report, m money, methods []methodOut, lay *layout) {
+// the decision at the target mass with its cost drivers and break-even
+// prices, the crossover masses, then the report's notes and cautions.
+// Without detail sheets (a sweep of many masses) the per-mass table gives
+// way to a pointer to the Scale-up sheet.
+func buildSummary(g *grid, st *styles, r *scale.Report, m money, methods []methodOut, details bool, lay *layout) {
 	title := r.Title
 	if title == "" {
 		title = "Purification cost estimate"
@@ -47,7 +51,6 @@ func buildSummary(g *grid, st *styles, r *scale.Report, m money, methods []metho
 		column{"Waste kg", func(c massCells) numCell { return c.wasteKg }, st.kg},
 		column{"Recovery", func(c massCells) numCell { return c.recovery }, st.percent})
 
-	g.set(6, 1, cell{value: "Cost, time and waste by batch mass and method", style: st.heading, spill: true})
 	head := []string{"Batch mass", "Method", "Total cost"}
 	for _, c := range cols {
 		head = append(head, c.head)
@@ -55,11 +58,19 @@ func buildSummary(g *grid, st *styles, r *scale.Report, m money, methods []metho
 	if cheapest {
 		head = append(head, "Cheapest")
 	}
+	lastCol := len(head)
+	if !details {
+		row := summaryOmitted(g, st, r, lastCol)
+		row = writeDecision(g, st, r, m, row, lastCol, lay)
+		row = writeCrossovers(g, st, r, row, lastCol)
+		summaryNotes(g, st, r, row, lastCol)
+		return
+	}
+	g.set(6, 1, cell{value: "Cost, time and waste by batch mass and method", style: st.heading, spill: true})
 	for c, h := range head {
 		g.text(7, c+1, h, st.header)
 	}
 	g.freeze(7, 0)
-	lastCol := len(head)
 
 	row := 8
 	for i, kg := range r.MassesKg {
@@ -113,6 +124,56 @@ func buildSummary(g *grid, st *styles, r *scale.Report, m money, methods []metho
 		}
 	}
 
+	if r.IsSweep {
+		g.set(row, 1, cell{value: "The Scale-up sheet has these figures as a table with charts against batch mass.", style: st.note, spill: true})
+		row++
+	}
+	row = writeDecision(g, st, r, m, row, lastCol, lay)
+	row = writeCrossovers(g, st, r, row, lastCol)
+	summaryNotes(g, st, r, row, lastCol)
+}
+
+// summaryOmitted writes, in place of the per-mass table of a sweep of many
+// masses, where the figures are and how to get the details; it returns the
+// next free row.
+func summaryOmitted(g *grid, st *styles, r *scale.Report, lastCol int) int {
+	n := len(r.MassesKg)
+	g.set(6, 1, cell{value: "Cost, time and waste by batch mass and method", style: st.heading, spill: true})
+	text := fmt.Sprintf("The cost, time and waste of each method at the %d batch masses from %s to %s are on the Scale-up sheet, "+
+		"one row per mass and method, with charts. Per-mass detail sheets (bill of materials, time, waste streams) are written "+
+		"for sweeps of at most %d masses; for the details at the masses you choose run "+
+		"`sepcost estimate SCENARIO --mass %s` (several masses separated by commas).",
+		n, massLabel(r.MassesKg[0]), massLabel(r.MassesKg[n-1]), MaxDetailMasses, massFlag(exampleMass(r)))
+	wrapped(g, st, 7, text, lastCol)
+	// Without the table the columns would shrink to their narrowest and
+	// the paragraphs merged across them would run to many lines.
+	for c := 2; c <= lastCol; c++ {
+		g.minWidths[c] = 12
+	}
+	return 8
+}
+
+// exampleMass is the mass named in the pointer to `sepcost estimate`: the
+// target mass, or the largest of the sweep.
+func exampleMass(r *scale.Report) float64 {
+	if r.TargetKg > 0 && finite(r.TargetKg) {
+		return r.TargetKg
+	}
+	return r.MassesKg[len(r.MassesKg)-1]
+}
+
+// wrapped writes a paragraph of text merged across columns 1 to lastCol.
+func wrapped(g *grid, st *styles, row int, text string, lastCol int) {
+	g.set(row, 1, cell{value: text, style: st.wrap, wrap: true})
+	for k := 2; k <= lastCol; k++ {
+		g.blank(row, k, st.wrap)
+	}
+	g.merge(row, 1, lastCol)
+}
+
+// summaryNotes writes the report's notes and cautions after a blank row;
+// row is the next free row.
+func summaryNotes(g *grid, st *styles, r *scale.Report, row, lastCol int) {
 	row++
 	g.set(row, 1, cell{value: "Notes", style: st.heading, spill: true})
 	row++
@@ -133,11 +194,7 @@ func buildSummary(g *grid, st *styles, r *scale.Report, m money, methods []metho
 		g.set(row, 1, cell{value: "No cautions recorded for this scenario.", style: st.note, spill: true})
 	}
 	for _, c := range r.Cautions {
-		g.set(row, 1, cell{value: c, style: st.wrap, wrap: true})
-		for k := 2; k <= lastCol; k++ {
-			g.blank(row, k, st.wrap)
-		}
-		g.merge(row, 1, lastCol)
+		wrapped(g, st, row, c, lastCol)
 		row++
 	}
 }

@@ -2,6 +2,7 @@ package workbook
 
 import (
 	"fmt"
+	"math"
 	"strings"
 
 	"github.com/shopspring/decimal"
@@ -25,14 +26,37 @@ const wasteCaution = "Caution: the waste classes here serve costing only. Waste 
 // disposal line of the ledger bills this stream: its quantity (kg) is then
 // the mass shown and its amount the cached value. Other streams show their
 // mass only.
-func buildWaste(g *grid, st *styles, r *scale.Report, m money, lay *layout) {
+//
+// With the detail sheets omitted (a sweep of many masses) the streams are
+// listed at one mass only, the mass of the sweep nearest the target mass
+// in ln m, and a note says so: the sheet is for the EHS office, which
+// plans for the batch that will be run, not for every point of a curve.
+func buildWaste(g *grid, st *styles, r *scale.Report, m money, details bool, lay *layout) {
 	head := []string{"Batch mass", "Method", "Stream", "Class", "kg", "L", "Composition", "Disposal cost"}
 	for c, h := range head {
 		g.text(1, c+1, h, st.header)
 	}
 	g.freeze(1, 2)
 	row := 2
-	for i, kg := range r.MassesKg {
+	masses := make([]int, len(r.MassesKg))
+	for i := range masses {
+		masses[i] = i
+	}
+	note := ""
+	if !details {
+		k := nearestMass(r.MassesKg, r.TargetKg)
+		masses = []int{k}
+		note = fmt.Sprintf("This sweep has %d batch masses; the waste streams are listed at %s only", len(r.MassesKg), massLabel(r.MassesKg[k]))
+		if r.TargetKg > 0 && finite(r.TargetKg) {
+			note += fmt.Sprintf(", the mass of the sweep nearest the target mass of %s. For the streams at the target mass itself, "+
+				"or at other masses, run `sepcost estimate SCENARIO --mass %s` (several masses separated by commas).", massLabel(r.TargetKg), massFlag(r.TargetKg))
+		} else {
+			note += ", the largest. For the streams at other masses run `sepcost estimate SCENARIO --mass MASS`."
+		}
+		note += " The Scale-up sheet gives the total waste at every mass."
+	}
+	for _, i := range masses {
+		kg := r.MassesKg[i]
 		for j, meth := range r.Methods {
 			res := r.Results[i][j]
 			if !res.Usage.Feasible {
@@ -68,6 +92,14 @@ func buildWaste(g *grid, st *styles, r *scale.Report, m money, lay *layout) {
 		}
 	}
 	row++
+	if note != "" {
+		g.set(row, 1, cell{value: note, style: st.wrap, wrap: true})
+		for k := 2; k <= len(head); k++ {
+			g.blank(row, k, st.wrap)
+		}
+		g.merge(row, 1, len(head))
+		row += 2
+	}
 	g.set(row, 1, cell{value: wasteCaution, style: st.wrap, wrap: true})
 	for k := 2; k <= len(head); k++ {
 		g.blank(row, k, st.wrap)
@@ -108,4 +140,26 @@ func composition(s usage.Stream) string {
 		parts[k] = c.Name + " " + massLabel(c.Kg)
 	}
 	return strings.Join(parts, "; ")
+}
+
+// nearestMass is the index of the mass nearest target in ln m, or of the
+// largest mass when target is not a positive number.
+func nearestMass(masses []float64, target float64) int {
+	best := len(masses) - 1
+	if !(target > 0) || !finite(target) {
+		return best
+	}
+	d := math.Inf(1)
+	for i, kg := range masses {
+		if e := math.Abs(math.Log(kg / target)); e < d {
+			best, d = i, e
+		}
+	}
+	return best
+}
+
+// massFlag writes a mass as the --mass flag takes it, without a space:
+// "20g", "2kg", "250mg".
+func massFlag(kg float64) string {
+	return strings.ReplaceAll(massLabel(kg), " ", "")
 }

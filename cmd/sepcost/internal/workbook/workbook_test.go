@@ -9,6 +9,7 @@ import (
 	"os/exec"
 	"path/filepath"
 	"regexp"
+	"strconv"
 	"strings"
 	"testing"
 	"time"
@@ -27,7 +28,7 @@ var goldenDir = filepath.Join("..", "..", "..", "..", "testdata", "golden")
 // render builds and writes a report, returning the file and where the money cells are.
 func render(t *testing.T, r *scale.Report, opt Options) ([]byte, *layout) {
 	t.Helper()
-	f, lay, err := build(r, opt)
+	f, lay, err := build(r, opt, true)
 	if err != nil {
 		t.Fatalf("build: %v", err)
 	}
@@ -82,16 +83,22 @@ func sameToTheCent(got string, want decimal.Decimal, places int32) bool {
 
 func TestGolden(t *testing.T) {
 	for _, tc := range []struct {
-		file string
-		r    *scale.Report
+		file   string
+		r      *scale.Report
+		sheets []string // only these sheets, and the workbook head; all when nil
 	}{
-		{"workbook-fixture.txt", fixtureReport()},
-		{"workbook-two-methods.txt", twoMethodReport()},
-		{"workbook-demo.txt", demoReport(t)},
+		{"workbook-fixture.txt", fixtureReport(), nil},
+		{"workbook-two-methods.txt", twoMethodReport(), nil},
+		{"workbook-demo.txt", demoReport(t), nil},
+		// A sweep with detail sheets: Scale-up totals refer to them.
+		{"workbook-sweep.txt", sweepReport(), nil},
+		// A sweep of more masses than get detail sheets: the Scale-up
+		// sheet carries the ledger quantities and ROUND formulas.
+		{"workbook-sweep-many.txt", syntheticSweep(MaxDetailMasses+2, 2), []string{sheetSummary, sheetScaleUp, sheetWaste}},
 	} {
 		t.Run(tc.file, func(t *testing.T) {
 			b, _ := render(t, tc.r, Options{})
-			got := dump(t, b)
+			got := onlySheets(dump(t, b), tc.sheets)
 			path := filepath.Join(goldenDir, tc.file)
 			if *update {
 				if err := os.WriteFile(path, []byte(got), 0o644); err != nil {
@@ -112,6 +119,23 @@ func TestGolden(t *testing.T) {
 			os.Remove(path + ".got")
 		})
 	}
+}
+
+// onlySheets keeps the head of a dump and the named sheets' sections.
+func onlySheets(d string, names []string) string {
+	if names == nil {
+		return d
+	}
+	parts := strings.Split(d, "\nsheet ")
+	out := []string{parts[0]}
+	for _, p := range parts[1:] {
+		for _, n := range names {
+			if strings.Contains(strings.SplitN(p, "\n", 2)[0], strconv.Quote(n)) {
+				out = append(out, p)
+			}
+		}
+	}
+	return strings.Join(out, "\nsheet ")
 }
 
 // TestFixtureIsHandComputed checks the fixture's hand computation against
@@ -181,7 +205,8 @@ func formulaCells(t *testing.T, b []byte, f *excelize.File) map[string][]string 
 // money value with the ledger, exactly, as decimal strings; and checks that
 // no money formula escapes the comparison.
 func TestCachedValuesEqualLedger(t *testing.T) {
-	for name, r := range map[string]*scale.Report{"fixture": fixtureReport(), "two methods": twoMethodReport()} {
+	for name, r := range map[string]*scale.Report{"fixture": fixtureReport(), "two methods": twoMethodReport(),
+		"sweep": sweepReport(), "sweep of many masses": syntheticSweep(MaxDetailMasses+8, 2)} {
 		t.Run(name, func(t *testing.T) {
 			b, lay := render(t, r, Options{})
 			f := open(t, b)
@@ -210,25 +235,37 @@ func TestCachedValuesEqualLedger(t *testing.T) {
 				}
 			}
 			// Every disposal line of the fixture bills exactly one stream, so
-			// the Waste sheet has one disposal formula per disposal line.
-			lines, results := 0, 0
+			// the Waste sheet has one disposal formula per disposal line
+			// (without detail sheets, per line at the one mass it lists).
+			details := detailSheets(r)
+			near := nearestMass(r.MassesKg, r.TargetKg)
+			want := map[string]int{}
 			for i := range r.Results {
 				for _, res := range r.Results[i] {
 					if !res.Usage.Feasible {
 						continue
 					}
-					results++
+					if r.IsSweep {
+						want["scale-up total"]++
+					}
 					for _, l := range res.Ledger.Lines {
-						if l.Demand.Group == "disposal" {
-							kinds["disposal lines"]++
+						if l.Demand.Group == "disposal" && (details || i == near) {
+							want["disposal"]++
 						}
-						lines++
+						if details {
+							want["line"]++
+						}
+					}
+					if details {
+						want["total"]++
+						want["summary total"]++
 					}
 				}
 			}
-			if kinds["line"] != lines || kinds["disposal"] != kinds["disposal lines"] ||
-				kinds["total"] != results || kinds["summary total"] != results {
-				t.Errorf("money cells by kind %v; want %d lines, %d totals", kinds, lines, results)
+			for _, k := range []string{"line", "total", "summary total", "disposal", "scale-up total"} {
+				if kinds[k] != want[k] {
+					t.Errorf("%d money cells of kind %q, want %d (all kinds %v)", kinds[k], k, want[k], kinds)
+				}
 			}
 		})
 	}
@@ -314,7 +351,10 @@ func TestLibreOfficeRecalculation(t *testing.T) {
 	}
 	dir := t.TempDir()
 	out := filepath.Join(dir, "out")
-	reports := map[string]*scale.Report{"fixture": fixtureReport(), "two-methods": twoMethodReport(), "demo": demoReport(t)}
+	reports := map[string]*scale.Report{"fixture": fixtureReport(), "two-methods": twoMethodReport(), "demo": demoReport(t),
+		// Sweeps: Scale-up totals that refer to the method sheets, and
+		// (many masses) totals that are sums of ROUND terms on the prices.
+		"sweep": sweepReport(), "sweep-many": syntheticSweep(40, 2)}
 	type written struct {
 		cached []byte
 		lay    *layout

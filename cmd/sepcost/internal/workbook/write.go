@@ -1,6 +1,7 @@
 // Package workbook writes a scale.Report as a spreadsheet workbook with live
-// formulas (DESIGN §4): Summary, Inputs, Prices, one sheet per method, Waste
-// and Sources. It lays out what the report holds and computes no model or
+// formulas (DESIGN §4): Summary, Inputs, Prices, one sheet per method,
+// Scale-up (sweeps only: the table and native charts against batch mass on
+// logarithmic axes), Waste and Sources. It lays out what the report holds and computes no model or
 // price; the only arithmetic it writes is spreadsheet formulas (ledger line
 // amounts, subtotals and totals, cost per gram, recovery) whose cached
 // values come from the report, so that viewers that do not recalculate
@@ -30,6 +31,7 @@ import (
 	"github.com/shopspring/decimal"
 	"github.com/xuri/excelize/v2"
 
+	"sepcost/costing/ledger"
 	"sepcost/costing/usage"
 	"sepcost/scale"
 )
@@ -48,9 +50,24 @@ const (
 	sheetSummary = "Summary"
 	sheetInputs  = "Inputs"
 	sheetPrices  = "Prices"
+	sheetScaleUp = "Scale-up"
 	sheetWaste   = "Waste"
 	sheetSources = "Sources"
 )
+
+// MaxDetailMasses is the largest number of batch masses of a sweep for
+// which the per-mass detail sheets (one sheet per method with a block per
+// mass) are written. A sweep of up to 10,000 masses would make those
+// sheets tens of thousands of columns wide; above this number the
+// Scale-up sheet carries every mass in one row each and the Summary
+// points to `sepcost estimate --mass` for chosen masses. An estimate at
+// masses a user names always gets its detail sheets.
+const MaxDetailMasses = 12
+
+// detailSheets reports whether the per-mass method sheets are written.
+func detailSheets(r *scale.Report) bool {
+	return !r.IsSweep || len(r.MassesKg) <= MaxDetailMasses
+}
 
 // Fixed document properties, so the same report gives the same content.
 const (
@@ -60,7 +77,7 @@ const (
 
 // Write writes the report as an .xlsx workbook to w.
 func Write(w io.Writer, r *scale.Report, opt Options) error {
-	f, _, err := build(r, opt)
+	f, _, err := build(r, opt, false)
 	if err != nil {
 		return err
 	}
@@ -76,7 +93,7 @@ func Write(w io.Writer, r *scale.Report, opt Options) error {
 type checkCell struct {
 	sheet, ref string
 	want       decimal.Decimal
-	kind       string // "unit price", "line", "subtotal", "total", "summary total", "disposal"
+	kind       string // "unit price", "line", "subtotal", "total", "summary total", "disposal", "scale-up total"
 }
 
 // layout records where the writer put the money cells.
@@ -84,12 +101,17 @@ type layout struct {
 	money []checkCell
 }
 
+// add records a money cell; a nil layout records nothing.
 func (l *layout) add(sheet, ref string, want decimal.Decimal, kind string) {
+	if l == nil {
+		return
+	}
 	l.money = append(l.money, checkCell{sheet, ref, want, kind})
 }
 
-// build lays out the whole workbook.
-func build(r *scale.Report, opt Options) (*excelize.File, *layout, error) {
+// build lays out the whole workbook; with record set it also returns
+// where the money cells are (for tests), else a nil layout.
+func build(r *scale.Report, opt Options, record bool) (*excelize.File, *layout, error) {
 	m, err := validate(r)
 	if err != nil {
 		return nil, nil, err
@@ -119,9 +141,20 @@ func build(r *scale.Report, opt Options) (*excelize.File, *layout, error) {
 	if err != nil {
 		return nil, nil, err
 	}
-	lay := &layout{}
+	var lay *layout
+	if record {
+		lay = &layout{}
+	}
+	details := detailSheets(r)
 
-	order := append(append([]string{sheetSummary, sheetInputs, sheetPrices}, names...), sheetWaste, sheetSources)
+	order := []string{sheetSummary, sheetInputs, sheetPrices}
+	if details {
+		order = append(order, names...)
+	}
+	if r.IsSweep {
+		order = append(order, sheetScaleUp)
+	}
+	order = append(order, sheetWaste, sheetSources)
 	if err := f.SetSheetName("Sheet1", order[0]); err != nil {
 		return nil, nil, fmt.Errorf("workbook: sheet %s: %w", order[0], err)
 	}
@@ -130,10 +163,18 @@ func build(r *scale.Report, opt Options) (*excelize.File, *layout, error) {
 			return nil, nil, fmt.Errorf("workbook: sheet %s: %w", name, err)
 		}
 	}
+	// While the sheets are empty: SetActiveSheet reads every worksheet, and
+	// after a StreamWriter's Flush that means parsing the streamed XML
+	// back into memory and marshalling it again on Write.
+	f.SetActiveSheet(0)
 
 	var grids []*grid
 	methods := make([]methodOut, len(r.Methods))
 	for j := range r.Methods {
+		methods[j].sheet = names[j]
+		if !details {
+			continue
+		}
 		g := newGrid(names[j])
 		if methods[j], err = buildMethod(g, st, r, m, j, lay); err != nil {
 			return nil, nil, err
@@ -141,13 +182,13 @@ func build(r *scale.Report, opt Options) (*excelize.File, *layout, error) {
 		grids = append(grids, g)
 	}
 	summary := newGrid(sheetSummary)
-	buildSummary(summary, st, r, m, methods, lay)
+	buildSummary(summary, st, r, m, methods, details, lay)
 	inputs := newGrid(sheetInputs)
 	buildInputs(inputs, st, r)
 	prices := newGrid(sheetPrices)
 	buildPrices(prices, st, r)
 	waste := newGrid(sheetWaste)
-	buildWaste(waste, st, r, m, lay)
+	buildWaste(waste, st, r, m, details, lay)
 	sources := newGrid(sheetSources)
 	if err := buildSources(sources, st, r); err != nil {
 		return nil, nil, err
@@ -158,7 +199,11 @@ func build(r *scale.Report, opt Options) (*excelize.File, *layout, error) {
 			return nil, nil, err
 		}
 	}
-	f.SetActiveSheet(0)
+	if r.IsSweep {
+		if err := writeScaleUp(f, st, r, m, methods, details, lay, opt.OmitCachedValues); err != nil {
+			return nil, nil, err
+		}
+	}
 	ok = true
 	return f, lay, nil
 }
@@ -196,7 +241,7 @@ func validate(r *scale.Report) (money, error) {
 		}
 	}
 	seen := map[string]bool{}
-	for _, name := range []string{sheetSummary, sheetInputs, sheetPrices, sheetWaste, sheetSources} {
+	for _, name := range []string{sheetSummary, sheetInputs, sheetPrices, sheetScaleUp, sheetWaste, sheetSources} {
 		seen[strings.ToLower(name)] = true
 	}
 	for _, meth := range r.Methods {
@@ -215,14 +260,18 @@ func validate(r *scale.Report) (money, error) {
 	// Money places come from the ledger (the currency's minor unit); every
 	// priced ledger must agree.
 	placesSet := false
+	prices := make([]small, len(r.Prices.Items))
+	for k, it := range r.Prices.Items {
+		prices[k] = smallOf(it.Price)
+	}
 	for i := range r.Results {
 		for j := range r.Results[i] {
-			res := r.Results[i][j]
+			res := &r.Results[i][j]
 			if !res.Usage.Feasible {
 				continue
 			}
-			where := fmt.Sprintf("workbook: %s at %s", r.Methods[j], massLabel(r.MassesKg[i]))
-			l := res.Ledger
+			where := resultWhere{r.Methods[j], r.MassesKg[i]}
+			l := &res.Ledger
 			if len(l.Lines) == 0 && l.Currency == "" {
 				if !l.Total.IsZero() {
 					return m, fmt.Errorf("%s: the ledger has no lines but a total of %s", where, l.Total)
@@ -239,7 +288,7 @@ func validate(r *scale.Report) (money, error) {
 				return m, fmt.Errorf("%s: the ledger rounds to %d places but another rounds to %d", where, l.Places, m.places)
 			}
 			m.places, placesSet = l.Places, true
-			if err := validateLedger(where, r, res); err != nil {
+			if err := validateLedger(where, r, prices, &res.Ledger); err != nil {
 				return m, err
 			}
 		}
@@ -263,40 +312,181 @@ func validate(r *scale.Report) (money, error) {
 
 // validateLedger checks one ledger against the price table and its own
 // rounding rule, so that the formulas written for it give its amounts.
-func validateLedger(where string, r *scale.Report, res scale.Result) error {
-	known := map[usage.Group]bool{}
-	for _, g := range usage.Groups {
-		known[g] = true
-	}
-	l := res.Ledger
-	sum := decimal.Zero
-	for k, line := range l.Lines {
-		at := fmt.Sprintf("%s, ledger line %d (%s, %q)", where, k+1, line.Demand.Item, line.Demand.Label)
-		if !known[line.Demand.Group] {
+func validateLedger(where resultWhere, r *scale.Report, prices []small, l *ledger.Ledger) error {
+	sum := ledgerSum{}
+	for k := range l.Lines {
+		line := &l.Lines[k]
+		at := lineWhere{where, k, line}
+		if !knownGroup(line.Demand.Group) {
 			return fmt.Errorf("%s: group %q is not one of %v", at, line.Demand.Group, usage.Groups)
 		}
 		if line.PriceRow < 0 || line.PriceRow >= len(r.Prices.Items) {
 			return fmt.Errorf("%s: price row %d is outside the price table's %d items", at, line.PriceRow, len(r.Prices.Items))
 		}
-		it := r.Prices.Items[line.PriceRow]
+		it := &r.Prices.Items[line.PriceRow]
 		if it.Name != line.Demand.Item {
 			return fmt.Errorf("%s: price row %d is %q, not the item demanded", at, line.PriceRow, it.Name)
 		}
-		if !line.UnitPrice.Equal(it.Price) {
+		price := smallOf(line.UnitPrice)
+		if !price.equal(prices[line.PriceRow], line.UnitPrice, it.Price) {
 			return fmt.Errorf("%s: unit price %s differs from the price table's %s", at, line.UnitPrice, it.Price)
 		}
 		if line.Unit != it.Unit {
 			return fmt.Errorf("%s: unit %q differs from the price table's %q", at, line.Unit, it.Unit)
 		}
-		if want := line.Qty.Mul(line.UnitPrice).Round(l.Places); !line.Amount.Equal(want) {
+		amount := smallOf(line.Amount)
+		if !amountFollowsRule(smallOf(line.Qty), price, amount, line.Qty, line.UnitPrice, line.Amount, l.Places) {
+			want := line.Qty.Mul(line.UnitPrice).Round(l.Places)
 			return fmt.Errorf("%s: amount %s is not %s × %s rounded to %d places (%s)", at, line.Amount, line.Qty, line.UnitPrice, l.Places, want)
 		}
-		sum = sum.Add(line.Amount)
+		sum.add(amount, line.Amount)
 	}
-	if !l.Total.Equal(sum) {
-		return fmt.Errorf("%s: the ledger total %s is not the sum of its lines, %s", where, l.Total, sum)
+	if !sum.equals(l.Total) {
+		return fmt.Errorf("%s: the ledger total %s is not the sum of its lines, %s", where, l.Total, sum.value())
 	}
 	return nil
+}
+
+// small is a decimal c × 10^e whose coefficient has at most 18 digits,
+// held in an int64 (ok false when it has more). Validation of a sweep
+// checks every line of every ledger; in int64 it allocates nothing.
+type small struct {
+	c  int64
+	e  int32
+	ok bool
+}
+
+func smallOf(d decimal.Decimal) small {
+	if d.NumDigits() > 18 {
+		return small{}
+	}
+	return small{d.CoefficientInt64(), d.Exponent(), true}
+}
+
+// equal compares two decimals, a and b, given in small form where they fit.
+func (x small) equal(y small, a, b decimal.Decimal) bool {
+	if x.ok && y.ok && x.e == y.e {
+		return x.c == y.c
+	}
+	return a.Equal(b)
+}
+
+// float is the decimal as the nearest double, as decimal's InexactFloat64
+// gives it: where the coefficient is below 2^53 and the exponent between
+// −22 and 0 both operands of c / 10^−e are exact and the division is
+// correctly rounded.
+func (x small) float(d decimal.Decimal) float64 {
+	if x.ok && x.e <= 0 && x.e >= -22 && x.c > -1<<53 && x.c < 1<<53 {
+		return float64(x.c) / pow10[-x.e]
+	}
+	return d.InexactFloat64()
+}
+
+// ledgerSum adds amounts exactly: in int64 units of the first amount's
+// exponent while every amount has that exponent and the sum stays far
+// from overflow (the common case: every line rounded to the minor unit),
+// in decimal otherwise.
+type ledgerSum struct {
+	n     int64
+	exp   int32
+	set   bool
+	big   bool
+	exact decimal.Decimal
+}
+
+func (s *ledgerSum) add(a small, d decimal.Decimal) {
+	if !s.big && a.ok && (!s.set || a.e == s.exp) && a.c > -1<<60 && a.c < 1<<60 && s.n > -1<<60 && s.n < 1<<60 {
+		s.n += a.c
+		s.exp, s.set = a.e, true
+		return
+	}
+	if !s.big {
+		s.exact, s.big = s.value(), true
+	}
+	s.exact = s.exact.Add(d)
+}
+
+// equals reports whether the sum is d.
+func (s *ledgerSum) equals(d decimal.Decimal) bool {
+	if !s.big {
+		if t := smallOf(d); t.ok && (t.e == s.exp || !s.set) {
+			return t.c == s.n
+		}
+	}
+	return d.Equal(s.value())
+}
+
+func (s *ledgerSum) value() decimal.Decimal {
+	if s.big {
+		return s.exact
+	}
+	return decimal.New(s.n, s.exp)
+}
+
+// resultWhere names a result in an error, "workbook: chromatography at
+// 20 g"; it is formatted only when an error is, as validation runs over
+// every result of a sweep.
+type resultWhere struct {
+	method string
+	kg     float64
+}
+
+func (w resultWhere) String() string { return "workbook: " + w.method + " at " + massLabel(w.kg) }
+
+// lineWhere names a ledger line of a result in an error.
+type lineWhere struct {
+	where resultWhere
+	k     int
+	line  *ledger.Line
+}
+
+func (w lineWhere) String() string {
+	return fmt.Sprintf("%s, ledger line %d (%s, %q)", w.where, w.k+1, w.line.Demand.Item, w.line.Demand.Label)
+}
+
+// knownGroup reports whether g is one of usage.Groups.
+func knownGroup(g usage.Group) bool {
+	for _, k := range usage.Groups {
+		if g == k {
+			return true
+		}
+	}
+	return false
+}
+
+// amountFollowsRule reports whether amount = qty × price rounded half away
+// from zero to places (DESIGN §5.4). Where the coefficients are small, as
+// a ledger's are, it works in int64 (q·p exact, then one rounding), which
+// is what decimal's Mul and Round do; otherwise it uses them on the
+// decimals qd, pd and ad.
+func amountFollowsRule(q, p, a small, qd, pd, ad decimal.Decimal, places int32) bool {
+	exp := q.e + p.e       // q·p = qc·pc × 10^exp
+	shift := -exp - places // decimal digits to drop
+	// Below 10^9 each: |qc·pc| < 10^18, inside int64.
+	const lim = 1_000_000_000
+	if !q.ok || !p.ok || q.c <= -lim || q.c >= lim || p.c <= -lim || p.c >= lim || shift < 0 || shift > 18 {
+		return ad.Equal(qd.Mul(pd).Round(places))
+	}
+	v := q.c * p.c
+	div := int64(1)
+	for range shift {
+		div *= 10
+	}
+	r, rem := v/div, v%div
+	if rem < 0 {
+		rem = -rem
+	}
+	if 2*rem >= div { // half away from zero
+		if v < 0 {
+			r--
+		} else {
+			r++
+		}
+	}
+	if a.ok && a.e == -places {
+		return a.c == r
+	}
+	return ad.Equal(decimal.New(r, -places))
 }
 
 // priceRef is the absolute reference to the unit price of price-table item i.

@@ -1,0 +1,178 @@
+package workbook
+
+import (
+	"bytes"
+	"fmt"
+	"io"
+	"testing"
+	"time"
+
+	"github.com/xuri/excelize/v2"
+)
+
+// benchMasses are the sweep sizes of the benchmarks.
+var benchMasses = []int{250, 1000, 4000}
+
+// BenchmarkSweepWorkbook writes the workbook of an invented sweep of one
+// method (syntheticSweep: ledger lines, usage figures, green metrics) at
+// each size: more masses than get detail sheets, so the Scale-up sheet
+// carries every mass with its ledger quantities, ROUND formulas and three
+// charts.
+func BenchmarkSweepWorkbook(b *testing.B) {
+	for _, n := range benchMasses {
+		b.Run(fmt.Sprintf("masses=%d", n), func(b *testing.B) {
+			r := syntheticSweep(n, 1)
+			b.ReportAllocs()
+			cpu := cpuTime()
+			for b.Loop() {
+				if err := Write(io.Discard, r, Options{}); err != nil {
+					b.Fatal(err)
+				}
+			}
+			reportCPU(b, cpu)
+		})
+	}
+}
+
+// reportCPU reports the processor time per operation since start (all
+// threads: the clock time of a benchmark varies with the other work on
+// the machine, the processor time much less).
+func reportCPU(b *testing.B, start time.Duration) {
+	if b.N > 0 && start > 0 {
+		b.ReportMetric(float64(cpuTime()-start)/float64(b.N), "cpu-ns/op")
+	}
+}
+
+// baselineCells is a workbook read back as the cells excelize's
+// StreamWriter would be given: per sheet, per row, the values (numbers,
+// text, formulas with cached values) and style ids.
+type baselineSheet struct {
+	name string
+	rows map[int][]any
+	last int
+}
+
+// readCells reads every cell of a written workbook, so that the baseline
+// writes exactly the same cells.
+func readCells(b testing.TB, data []byte) ([]baselineSheet, int, int) {
+	refs, err := cellRefs(bytes.NewReader(data), int64(len(data)))
+	if err != nil {
+		b.Fatal(err)
+	}
+	f, err := excelize.OpenReader(bytes.NewReader(data))
+	if err != nil {
+		b.Fatal(err)
+	}
+	defer f.Close()
+	var out []baselineSheet
+	cells, maxStyle := 0, 0
+	for _, name := range f.GetSheetList() {
+		s := baselineSheet{name: name, rows: map[int][]any{}}
+		// excelize reports a merged range's value in every cell of it;
+		// the file holds it in the top-left cell only.
+		hidden := map[string]bool{}
+		merges, _ := f.GetMergeCells(name, true)
+		for _, m := range merges {
+			c1, r1, _ := excelize.CellNameToCoordinates(m.GetStartAxis())
+			c2, r2, _ := excelize.CellNameToCoordinates(m.GetEndAxis())
+			for r := r1; r <= r2; r++ {
+				for c := c1; c <= c2; c++ {
+					if r != r1 || c != c1 {
+						hidden[cellName(c, r)] = true
+					}
+				}
+			}
+		}
+		for _, p := range refs[name] {
+			ref := cellName(p.col, p.row)
+			v, _ := f.GetCellValue(name, ref, excelize.Options{RawCellValue: true})
+			if hidden[ref] {
+				v = ""
+			}
+			fo, _ := f.GetCellFormula(name, ref)
+			typ, _ := f.GetCellType(name, ref)
+			style, _ := f.GetCellStyle(name, ref)
+			maxStyle = max(maxStyle, style)
+			c := excelize.Cell{StyleID: style, Formula: fo}
+			if typ == excelize.CellTypeNumber || typ == excelize.CellTypeUnset {
+				var x float64
+				if _, err := fmt.Sscan(v, &x); err == nil {
+					c.Value = x
+				} else if v != "" {
+					c.Value = v
+				}
+			} else if v != "" {
+				c.Value = v
+			}
+			row := s.rows[p.row]
+			for len(row) < p.col {
+				row = append(row, nil)
+			}
+			row[p.col-1] = c
+			s.rows[p.row] = row
+			s.last = max(s.last, p.row)
+			cells++
+		}
+		out = append(out, s)
+	}
+	return out, cells, maxStyle
+}
+
+// BenchmarkStreamBaseline is excelize alone writing the same cells as
+// BenchmarkSweepWorkbook at each size, read back from that workbook: the
+// same sheets, rows, values, formulas and style ids, with the
+// StreamWriter, and the file written. The sweep workbook should take at
+// most 1.3 times as long.
+func BenchmarkStreamBaseline(b *testing.B) {
+	for _, n := range benchMasses {
+		b.Run(fmt.Sprintf("masses=%d", n), func(b *testing.B) {
+			var buf bytes.Buffer
+			if err := Write(&buf, syntheticSweep(n, 1), Options{}); err != nil {
+				b.Fatal(err)
+			}
+			sheets, cells, maxStyle := readCells(b, buf.Bytes())
+			b.ReportAllocs()
+			cpu := cpuTime()
+			for b.Loop() {
+				f := excelize.NewFile()
+				for k := 0; k < maxStyle; k++ {
+					fmtCode := fmt.Sprintf("0.%0*d", k%6+1, 0)
+					if _, err := f.NewStyle(&excelize.Style{CustomNumFmt: &fmtCode}); err != nil {
+						b.Fatal(err)
+					}
+				}
+				for k, s := range sheets {
+					if k == 0 {
+						if err := f.SetSheetName("Sheet1", s.name); err != nil {
+							b.Fatal(err)
+						}
+					} else if _, err := f.NewSheet(s.name); err != nil {
+						b.Fatal(err)
+					}
+				}
+				for _, s := range sheets {
+					sw, err := f.NewStreamWriter(s.name)
+					if err != nil {
+						b.Fatal(err)
+					}
+					for row := 1; row <= s.last; row++ {
+						if vals, ok := s.rows[row]; ok {
+							if err := sw.SetRow(cellName(1, row), vals); err != nil {
+								b.Fatal(err)
+							}
+						}
+					}
+					if err := sw.Flush(); err != nil {
+						b.Fatal(err)
+					}
+				}
+				if err := f.Write(io.Discard); err != nil {
+					b.Fatal(err)
+				}
+				f.Close()
+			}
+			reportCPU(b, cpu)
+			b.ReportMetric(float64(cells), "cells") // after the loop: b.Loop's timer reset drops metrics reported before it
+		})
+	}
+}

@@ -1,0 +1,207 @@
+package workbook
+
+import (
+	"fmt"
+	"sort"
+
+	"sepcost/scale"
+)
+
+// writeDecision writes, after a blank row, the decision at the target
+// mass (scale.Decision): its explanation in words, the cheapest method and
+// the runner-up with their cost per gram of purified product, the margin
+//
+//	margin = (c_runner − c_winner) / c_runner
+//
+// (c in currency per g; scale.Decide computes it, the sheet only shows
+// it), whether that is a tie, the methods not feasible with their reasons,
+// each method's largest cost drivers with their share of its total, and
+// the break-even prices at which the decision would flip with how far each
+// is from today's price (break-even ÷ price now, a formula). The price now
+// is a reference to the Prices sheet, so it follows an edit; the other
+// figures were worked out with the prices as read, and a note says so.
+// row is the next free row; it returns the next free row.
+func writeDecision(g *grid, st *styles, r *scale.Report, m money, row, lastCol int, lay *layout) int {
+	d := r.Decision
+	if d == nil {
+		return row
+	}
+	target := d.TargetKg
+	if !(target > 0) || !finite(target) {
+		target = r.TargetKg
+	}
+	row++
+	g.set(row, 1, cell{value: "Decision at " + massLabel(target) + " of crude", style: st.heading, spill: true})
+	row++
+	for _, line := range d.Explanation {
+		wrapped(g, st, row, line, lastCol)
+		row++
+	}
+	if len(d.Explanation) == 0 {
+		g.set(row, 1, cell{value: "No explanation recorded.", style: st.note, spill: true})
+		row++
+	}
+	row++
+	perGram := func(row int, label, method string, v float64) {
+		g.text(row, 1, label, st.bold)
+		g.text(row, 2, capitalize(method), st.text)
+		g.num(row, 3, v, st.perGram)
+		g.set(row, 4, cell{value: "per gram of purified product", style: st.text, spill: true})
+	}
+	switch {
+	case d.Winner == "":
+		g.text(row, 1, "Cheapest method", st.bold)
+		g.set(row, 2, cell{value: "none: no method is feasible at this mass", style: st.text, spill: true})
+		row++
+	default:
+		perGram(row, "Cheapest method", d.Winner, d.WinnerPerG)
+		row++
+		if d.RunnerUp == "" {
+			g.text(row, 1, "Runner-up", st.bold)
+			g.set(row, 2, cell{value: "none: the only feasible method", style: st.text, spill: true})
+			row++
+			break
+		}
+		perGram(row, "Runner-up", d.RunnerUp, d.RunnerPerG)
+		row++
+		g.text(row, 1, "Margin", st.bold)
+		g.num(row, 3, d.Margin, st.percent)
+		g.set(row, 4, cell{value: "cheaper per gram than the runner-up", style: st.text, spill: true})
+		row++
+		g.text(row, 1, "Tie", st.bold)
+		tie := "no"
+		if d.Tie {
+			tie = fmt.Sprintf("yes: within %.0f %% of each other, inside the models' uncertainty; choose on other grounds", scale.TieMargin*100)
+		}
+		g.set(row, 2, cell{value: tie, style: st.text, spill: true})
+		row++
+	}
+	if d.Winner != "" && d.Confidence > 0 && finite(d.Confidence) {
+		g.text(row, 1, "Confidence", st.bold)
+		g.num(row, 3, d.Confidence, st.percent)
+		g.set(row, 4, cell{value: "of the Monte Carlo draws in which " + d.Winner + " is cheapest", style: st.text, spill: true})
+		row++
+	}
+	infeasible := make([]string, 0, len(d.Infeasible))
+	for meth := range d.Infeasible {
+		infeasible = append(infeasible, meth)
+	}
+	sort.Strings(infeasible) // a map has no order; the workbook must not change between runs
+	for _, meth := range infeasible {
+		g.text(row, 1, "Not feasible", st.bold)
+		g.text(row, 2, capitalize(meth), st.text)
+		g.set(row, 3, cell{value: d.Infeasible[meth], style: st.text, spill: true})
+		row++
+	}
+	g.set(row, 1, cell{value: "The decision, cost drivers and break-even prices were worked out with the prices as read; " +
+		"unlike the totals, they do not follow an edit on the Prices sheet.", style: st.note, spill: true})
+	row++
+
+	row++
+	g.set(row, 1, cell{value: "Largest cost drivers at " + massLabel(target), style: st.heading, spill: true})
+	row++
+	if len(d.Drivers) == 0 {
+		g.set(row, 1, cell{value: "No feasible method, so no cost drivers.", style: st.note, spill: true})
+		row++
+	} else {
+		for c, h := range []string{"Method", "Item", "Cost", "Share of total"} {
+			g.text(row, c+1, h, st.header)
+		}
+		row++
+		for _, dr := range d.Drivers {
+			g.text(row, 1, capitalize(dr.Method), st.text)
+			g.text(row, 2, dr.Item, st.text)
+			g.num(row, 3, dr.Amount.InexactFloat64(), st.money)
+			g.num(row, 4, dr.Share, st.percent)
+			row++
+		}
+	}
+
+	row++
+	g.set(row, 1, cell{value: "Break-even prices at " + massLabel(target), style: st.heading, spill: true})
+	row++
+	switch {
+	case len(d.Flips) > 0:
+		head := []string{"Item", "Unit", "Price now", "Break-even price", "Ratio to now", "The decision flips to " + d.RunnerUp + " if the price"}
+		for c, h := range head {
+			// The last column's words run over the empty cells to its right.
+			g.set(row, c+1, cell{value: h, style: st.header, spill: c == len(head)-1})
+		}
+		row++
+		for _, fl := range d.Flips {
+			g.text(row, 1, fl.Item, st.text)
+			g.text(row, 2, fl.Unit, st.text)
+			style := st.priceStyle(fl.Price)
+			if k, ok := r.Prices.Find(fl.Item); ok && r.Prices.Items[k].Price.Equal(fl.Price) {
+				g.formula(row, 3, priceRef(k), fl.Price.InexactFloat64(), style)
+				lay.add(sheetSummary, cellName(3, row), fl.Price, "unit price")
+			} else {
+				g.num(row, 3, fl.Price.InexactFloat64(), style)
+			}
+			g.num(row, 4, fl.BreakEven.InexactFloat64(), st.priceStyle(fl.BreakEven))
+			// How far the price must move, a formula so that it follows an
+			// edit of the price: break-even / price now.
+			if ratio := fl.BreakEven.InexactFloat64() / fl.Price.InexactFloat64(); fl.Price.IsPositive() && finite(ratio) {
+				g.formula(row, 5, cellName(4, row)+"/"+cellName(3, row), ratio, st.factor)
+			}
+			dir := "rises above the break-even price"
+			if !fl.Rising {
+				dir = "falls below the break-even price"
+			}
+			g.set(row, 6, cell{value: dir, style: st.text, spill: true})
+			row++
+		}
+	case d.RunnerUp == "":
+		g.set(row, 1, cell{value: "With at most one feasible method no price change makes another method cheaper.", style: st.note, spill: true})
+		row++
+	default:
+		g.set(row, 1, cell{value: "No price of the largest cost drivers, on its own and above zero, would change the decision.", style: st.note, spill: true})
+		row++
+	}
+	return row
+}
+
+// writeCrossovers writes, after a blank row, the batch masses at which two
+// methods change places in cost per gram of purified product
+// (scale.Crossover: bracketed by bisection on the models to
+// scale.CrossoverPrecision in mass), with the cheaper method on each side
+// and whether the change is a smooth crossing or happens at an equipment
+// step. A sweep without crossovers says that the cost order does not
+// change in its range; an estimate at chosen masses has no such section.
+// row is the next free row; it returns the next free row.
+func writeCrossovers(g *grid, st *styles, r *scale.Report, row, lastCol int) int {
+	if !r.IsSweep && len(r.Crossovers) == 0 {
+		return row
+	}
+	row++
+	g.set(row, 1, cell{value: "Crossover masses", style: st.heading, spill: true})
+	row++
+	if len(r.Crossovers) == 0 {
+		n := len(r.MassesKg)
+		text := fmt.Sprintf("From %s to %s the cost order of the methods per gram of purified product does not change: "+
+			"there is no crossover in this range.", massLabel(r.MassesKg[0]), massLabel(r.MassesKg[n-1]))
+		if len(r.Methods) < 2 {
+			text = "Only one method was costed, so no method overtakes another."
+		}
+		wrapped(g, st, row, text, lastCol)
+		return row + 1
+	}
+	for c, h := range []string{"Crude mass", "Cheaper below", "Cheaper above", "Change"} {
+		g.text(row, c+1, h, st.header)
+	}
+	row++
+	for _, c := range r.Crossovers {
+		g.text(row, 1, massLabel(c.MassKg), st.text)
+		g.text(row, 2, capitalize(c.CheaperBelow), st.text)
+		g.text(row, 3, capitalize(c.CheaperAbove), st.text)
+		kind := "smooth crossing"
+		if c.Step {
+			kind = "at an equipment step (a jump in cost: column size, vessel or number of runs)"
+		}
+		g.set(row, 4, cell{value: kind, style: st.text, spill: true})
+		row++
+	}
+	g.set(row, 1, cell{value: fmt.Sprintf("Cost per gram of purified product; each mass is bracketed by bisection on the models to %g %% in mass.",
+		scale.CrossoverPrecision*100), style: st.note, spill: true})
+	return row + 1
+}

@@ -1,0 +1,44 @@
+package workbook
+
+import (
+	"math"
+	"math/rand/v2"
+	"strconv"
+	"testing"
+)
+
+// TestRound15 compares round15 with the standard library's decimal
+// formatting to 15 significant digits, parsed back (strconv: correctly
+// rounded both ways, ties to even), on a spread of magnitudes and signs,
+// on exact ties and on the example in its doc comment.
+func TestRound15(t *testing.T) {
+	oracle := func(v float64) float64 {
+		r, err := strconv.ParseFloat(strconv.FormatFloat(v, 'g', 15, 64), 64)
+		if err != nil {
+			t.Fatal(err)
+		}
+		return r
+	}
+	cases := []float64{
+		0.9199999999999999,                         // Source: round15's doc comment; 0.92
+		2.584991062968125e11, 6.500387187628625e12, // exact ties at the 16th digit (seen in a random search), to even
+		1, -1, 1e-300, 1e300, 123456789012345678, 0.1 + 0.2, 1.5e308, math.SmallestNonzeroFloat64,
+	}
+	rng := rand.New(rand.NewPCG(1, 2))
+	for range 200000 {
+		cases = append(cases, math.Exp(rng.Float64()*80-40)*float64(1-2*rng.IntN(2)))
+	}
+	for _, v := range cases {
+		if got, want := round15(v), oracle(v); got != want {
+			t.Errorf("round15(%v) = %v, strconv gives %v", v, got, want)
+		}
+	}
+	if round15(0.9199999999999999) != 0.92 {
+		t.Error("round15(0.9199999999999999) is not 0.92")
+	}
+	for _, v := range []float64{math.NaN(), math.Inf(1), math.Inf(-1), 0} {
+		if got := round15(v); !(got == v || (math.IsNaN(got) && math.IsNaN(v))) {
+			t.Errorf("round15(%v) = %v", v, got)
+		}
+	}
+}

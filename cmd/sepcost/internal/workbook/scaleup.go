@@ -1,0 +1,633 @@
+package workbook
+
+import (
+	"fmt"
+	"math"
+	"strconv"
+	"strings"
+
+	"github.com/shopspring/decimal"
+	"github.com/xuri/excelize/v2"
+
+	"sepcost/costing/ledger"
+	"sepcost/costing/usage"
+	"sepcost/scale"
+)
+
+// Scale-up sheet columns. Rows run method by method and, within a method,
+// mass by mass, so that each method's curve is one contiguous range a
+// chart series can refer to.
+const (
+	suMass      = iota + 1 // crude mass, g
+	suMethod               // method name; the charts' series names refer to it
+	suFeasible             // "feasible" or "not feasible: reason"
+	suTotal                // total cost, currency
+	suPerGram              // cost per gram of purified product
+	suProduct              // purified product, g
+	suSolvent              // solvent, L
+	suWaste                // waste, kg
+	suEFactor              // waste per product, kg/kg
+	suPMI                  // process mass intensity, kg/kg
+	suElapsed              // hours elapsed
+	suAttended             // hours hands-on
+	suEquipment            // equipment in words
+	suFirstQty             // first ledger quantity column (without detail sheets)
+)
+
+// Scale-up sheet rows and chart geometry.
+const (
+	suTitleRow  = 1
+	suChartRow  = 5   // charts' top row
+	suChartW    = 480 // chart width, px
+	suChartH    = 300 // chart height, px: 15 rows of the default 20 px
+	suChartGap  = 16  // px between charts
+	suNoteRow   = 22  // above the header: what the quantity columns are
+	suHeaderRow = 23
+	suFirstRow  = suHeaderRow + 1
+	suHeaderMax = 16.0 // header cells wrap beyond this many characters
+	pxPerChar   = 8.0  // excelize's column width to pixels (convertColWidthToPixels)
+)
+
+// qtyCol is one ledger line shared by the results of the sweep, shown as
+// the quantity billed in its price's unit.
+type qtyCol struct {
+	item     string
+	label    string
+	unit     string
+	priceRow int
+	col      int
+	name     string // column letters
+	tail     string // "*Prices!$C$n,places)": the part of its ROUND term after the quantity cell
+}
+
+// writeScaleUp streams the Scale-up sheet of a sweep: a title, the charts,
+// then one row per method and batch mass with the figures of scale.Row.
+//
+// Total cost is live wherever it can be. With detail sheets it refers to
+// the method sheet's TOTAL; without them the row carries the quantity of
+// every ledger line in the price's unit and the total is the ledger's own
+// rule written as a formula,
+//
+//	total = Σ_k ROUND(q_k × Prices!$C$n_k, places)
+//
+// (q_k the quantity of line k, Prices!$C$n_k its unit price, places the
+// currency's minor unit), so an edit on the Prices sheet moves every
+// total, cost per gram and chart point. Both carry the ledger total as
+// their cached value. Cost per gram is the formula
+//
+//	c = total / m_out
+//
+// with m_out the purified product in g. A figure that is not a finite
+// number is "n/a", or an empty cell in the columns the charts plot, which
+// also stay empty where a method is not feasible so that its curve has a
+// gap there. No formula here sums a range.
+//
+// The sheet is written straight to excelize's StreamWriter in two passes
+// over the rows, the first for the column widths, so that the memory used
+// does not grow with the number of masses beyond the report itself.
+func writeScaleUp(f *excelize.File, st *styles, r *scale.Report, m money, methods []methodOut, details bool, lay *layout, omit bool) error {
+	rows := r.Rows()
+	nm := len(r.Methods)
+	if len(rows) != len(r.MassesKg)*nm {
+		return fmt.Errorf("workbook: %s: the report gives %d rows for %d masses and %d methods", sheetScaleUp, len(rows), len(r.MassesKg), nm)
+	}
+	at := func(i, j int) *scale.Row { return &rows[i*nm+j] }
+
+	var qty []*qtyCol
+	var lineCols [][]int // per result (i·nm + j), the quantity column of each ledger line
+	if !details {
+		var err error
+		if qty, lineCols, err = quantityColumns(r, m); err != nil {
+			return err
+		}
+	}
+	lastCol := suEquipment + len(qty)
+
+	// Pass 1: column widths, and whether each plotted figure is positive
+	// throughout, which a logarithmic axis needs.
+	head := scaleUpHeader(m, qty)
+	w := newWidths(st, lastCol)
+	for c, h := range head {
+		w.text(c+1, longestWord(h))
+		w.text(c+1, min(textWidth(h), int(suHeaderMax)))
+	}
+	for _, q := range qty {
+		// Quantities are written as the ledger rounds them, a few digits
+		// each; the header sets the width.
+		w.text(q.col, 10)
+	}
+	totals := make([]float64, len(rows))   // the ledger totals as numbers, converted once
+	var positive [suFirstQty]bool          // by column: every plotted value above zero
+	var points [suFirstQty]int             // by column: number of plotted values
+	plotted := make([][suFirstQty]int, nm) // by method and column: number of plotted values
+	for _, c := range []int{suPerGram, suEFactor, suElapsed} {
+		positive[c] = true
+	}
+	for j := range r.Methods {
+		w.text(suMethod, textWidth(methods[j].sheet))
+		for i := range r.MassesKg {
+			row := at(i, j)
+			w.num(suMass, row.CrudeKg*1000, st.figure)
+			if !row.Feasible {
+				continue
+			}
+			totals[i*nm+j] = smallOf(row.Total).float(row.Total)
+			w.num(suTotal, totals[i*nm+j], st.money)
+			w.num(suPerGram, row.PerGram, st.perGram)
+			w.num(suProduct, row.ProductKg*1000, st.figure)
+			w.num(suSolvent, row.SolventL, st.litres)
+			w.num(suWaste, row.WasteKg, st.kg)
+			w.num(suEFactor, row.EFactor, st.figure)
+			w.num(suPMI, row.PMI, st.figure)
+			w.num(suElapsed, row.HoursElapsed, st.hours)
+			w.num(suAttended, row.HoursAttended, st.hours)
+			w.text(suEquipment, textWidth(row.Equipment))
+			plot := func(col int, v float64) {
+				if finite(v) {
+					points[col]++
+					plotted[j][col]++
+					positive[col] = positive[col] && v > 0
+				}
+			}
+			plot(suPerGram, perGramValue(row))
+			plot(suEFactor, row.EFactor)
+			plot(suElapsed, row.HoursElapsed)
+		}
+	}
+	widths := w.fit()
+
+	// Printed landscape, one page wide: the three charts side by side.
+	// The sheet properties are written when the stream starts, so they
+	// come first.
+	fit, landscape, wide, tall := true, "landscape", 1, 0
+	if err := f.SetSheetProps(sheetScaleUp, &excelize.SheetPropsOptions{FitToPage: &fit}); err != nil {
+		return fmt.Errorf("workbook: sheet %s: %w", sheetScaleUp, err)
+	}
+	if err := f.SetPageLayout(sheetScaleUp, &excelize.PageLayoutOptions{Orientation: &landscape, FitToWidth: &wide, FitToHeight: &tall}); err != nil {
+		return fmt.Errorf("workbook: sheet %s: %w", sheetScaleUp, err)
+	}
+	sw, err := f.NewStreamWriter(sheetScaleUp)
+	if err != nil {
+		return fmt.Errorf("workbook: sheet %s: %w", sheetScaleUp, err)
+	}
+	if err := setWidths(sw, sheetScaleUp, widths); err != nil {
+		return err
+	}
+
+	// Charts before the rows and before Flush (DESIGN §9).
+	n := len(r.MassesKg)
+	block := func(j int) (first, last int) { first = suFirstRow + j*n; return first, first + n - 1 }
+	specs := []chartSpec{
+		{"Cost per gram of purified product", m.currency + " per g", suPerGram},
+		{"Waste per gram of purified product (E-factor)", "kg waste per kg product", suEFactor},
+		{"Hours elapsed", "hours", suElapsed},
+	}
+	var parts []string
+	offset := 0 // px from the sheet's left edge to the next chart
+	for _, sp := range specs {
+		// A method with no point in this chart (never feasible) gets no
+		// series, so that the legend names only what is drawn; a chart
+		// with no point at all is left out.
+		var series []int
+		for j := range r.Methods {
+			if plotted[j][sp.col] > 0 {
+				series = append(series, j)
+			}
+		}
+		if len(series) == 0 {
+			continue
+		}
+		// The anchor is the column holding the offset, in excelize's pixel
+		// measure of the widths (which also places the chart's far edge),
+		// and the offset within it.
+		col, px := 1, 0
+		for px+colPixels(widths, col) <= offset {
+			px += colPixels(widths, col)
+			col++
+		}
+		ch := sp.chart(r, block, series, points[sp.col], positive[sp.col])
+		ch.Format.OffsetX = offset - px
+		part, err := addChart(f, cellName(col, suChartRow), ch)
+		if err != nil {
+			return fmt.Errorf("workbook: sheet %s: chart %q: %w", sheetScaleUp, sp.title, err)
+		}
+		parts = append(parts, part)
+		offset += suChartW + suChartGap
+	}
+	if err := logXAxes(f, parts); err != nil {
+		return fmt.Errorf("workbook: sheet %s: %w", sheetScaleUp, err)
+	}
+
+	// Pass 2: the rows.
+	title := "Scale-up"
+	if r.Title != "" {
+		title += ": " + r.Title
+	}
+	if err := sw.SetRow(cellName(1, suTitleRow), []any{excelize.Cell{StyleID: st.title, Value: title}}); err != nil {
+		return fmt.Errorf("workbook: sheet %s: %w", sheetScaleUp, err)
+	}
+	notes := []string{
+		"Against crude batch mass on logarithmic axes: cost per gram of purified product, waste per gram of product " +
+			"(the E-factor, kg per kg) and hours elapsed. An empty cell means the method is not feasible at that mass " +
+			"(or the figure is not a number); the charts leave a gap there.",
+		"Total cost refers to the TOTAL on each method sheet; an edit on the Prices sheet moves it, the cost per gram and the charts.",
+	}
+	if !details {
+		notes[1] = fmt.Sprintf("Per-mass detail sheets are omitted for a sweep of %d masses (at most %d get them). "+
+			"Total cost is the sum of the rounded ledger lines, ROUND(quantity × unit price, %d), from the quantities "+
+			"in the columns right of Equipment and the prices on the Prices sheet, so an edit there moves it, the cost "+
+			"per gram and the charts. Run `sepcost estimate SCENARIO --mass %s` for the details at chosen masses.",
+			n, MaxDetailMasses, m.places, massFlag(exampleMass(r)))
+	}
+	for k, s := range notes {
+		if err := sw.SetRow(cellName(1, suTitleRow+1+k), []any{excelize.Cell{StyleID: st.note, Value: s}}); err != nil {
+			return fmt.Errorf("workbook: sheet %s: %w", sheetScaleUp, err)
+		}
+	}
+	if len(qty) > 0 {
+		vals := make([]any, suFirstQty)
+		vals[suFirstQty-1] = excelize.Cell{StyleID: st.bold, Value: "Quantities billed, in the unit of each price"}
+		if err := sw.SetRow(cellName(1, suNoteRow), vals); err != nil {
+			return fmt.Errorf("workbook: sheet %s: %w", sheetScaleUp, err)
+		}
+	}
+	vals := make([]any, lastCol)
+	lines := 1
+	for c, h := range head {
+		vals[c] = excelize.Cell{StyleID: st.header, Value: h}
+		lines = max(lines, wrappedLines(h, widths[c+1]))
+	}
+	if err := sw.SetRow(cellName(1, suHeaderRow), vals, excelize.RowOpts{Height: lineHeight * float64(lines)}); err != nil {
+		return fmt.Errorf("workbook: sheet %s: %w", sheetScaleUp, err)
+	}
+
+	rw := newRowWriter(st, omit, lastCol)
+	totalCol, productCol := colName(suTotal), colName(suProduct)
+	for j := range r.Methods {
+		first, _ := block(j)
+		for i := range r.MassesKg {
+			row := at(i, j)
+			k := first + i
+			rw.reset(k)
+			rw.num(suMass, row.CrudeKg*1000, st.figure, false)
+			rw.text(suMethod, methods[j].sheet, st.text)
+			if !row.Feasible {
+				rw.text(suFeasible, "not feasible: "+row.Reason, st.text)
+				if err := rw.write(sw); err != nil {
+					return err
+				}
+				continue
+			}
+			rw.text(suFeasible, "feasible", st.text)
+			total := totals[i*nm+j]
+			res := &r.Results[i][j]
+			switch {
+			case details && methods[j].mass[i].totalRef != "":
+				rw.formula(suTotal, sheetRef(methods[j].sheet, methods[j].mass[i].totalRef), total, st.money)
+				if lay != nil {
+					lay.add(sheetScaleUp, cellName(suTotal, k), row.Total, "scale-up total")
+				}
+			case !details && len(res.Ledger.Lines) > 0:
+				cols := lineCols[i*nm+j]
+				rw.formula(suTotal, roundSum(&rw.buf, k, &res.Ledger, cols, qty), total, st.money)
+				if lay != nil {
+					lay.add(sheetScaleUp, cellName(suTotal, k), row.Total, "scale-up total")
+				}
+				for n := range res.Ledger.Lines {
+					rw.dec(cols[n], res.Ledger.Lines[n].Qty, st.general)
+				}
+			default:
+				rw.num(suTotal, total, st.money, true)
+			}
+			if pg := perGramValue(row); finite(pg) {
+				rw.buf = append(rw.buf[:0], totalCol...)
+				rw.buf = strconv.AppendInt(rw.buf, int64(k), 10)
+				rw.buf = append(rw.buf, '/')
+				rw.buf = append(rw.buf, productCol...)
+				rw.buf = strconv.AppendInt(rw.buf, int64(k), 10)
+				rw.formula(suPerGram, string(rw.buf), pg, st.perGram)
+			}
+			rw.num(suProduct, row.ProductKg*1000, st.figure, true)
+			rw.num(suSolvent, row.SolventL, st.litres, true)
+			rw.num(suWaste, row.WasteKg, st.kg, true)
+			rw.num(suEFactor, row.EFactor, st.figure, false)
+			rw.num(suPMI, row.PMI, st.figure, true)
+			rw.num(suElapsed, row.HoursElapsed, st.hours, false)
+			rw.num(suAttended, row.HoursAttended, st.hours, true)
+			if row.Equipment != "" {
+				rw.text(suEquipment, row.Equipment, st.text)
+			}
+			if err := rw.write(sw); err != nil {
+				return err
+			}
+		}
+	}
+	if err := sw.Flush(); err != nil {
+		return fmt.Errorf("workbook: sheet %s: %w", sheetScaleUp, err)
+	}
+	// Print the charts and the table up to Equipment, the header row on
+	// every page; the quantity columns serve the formulas.
+	lastRow := suFirstRow + nm*n - 1
+	for _, dn := range []excelize.DefinedName{
+		{Name: "_xlnm.Print_Area", RefersTo: sheetRef(sheetScaleUp, absName(1, 1)+":"+absName(suEquipment, lastRow)), Scope: sheetScaleUp},
+		{Name: "_xlnm.Print_Titles", RefersTo: sheetRef(sheetScaleUp, fmt.Sprintf("$%d:$%d", suHeaderRow, suHeaderRow)), Scope: sheetScaleUp},
+	} {
+		if err := f.SetDefinedName(&dn); err != nil {
+			return fmt.Errorf("workbook: sheet %s: %s: %w", sheetScaleUp, dn.Name, err)
+		}
+	}
+	return nil
+}
+
+// perGramValue is the cost per gram the sheet shows: the report's value
+// where the purified product is a positive finite mass, NaN otherwise.
+func perGramValue(row *scale.Row) float64 {
+	if !(row.ProductKg > 0) || !finite(row.ProductKg*1000) {
+		return math.NaN()
+	}
+	return row.PerGram
+}
+
+// scaleUpHeader is the header row.
+func scaleUpHeader(m money, qty []*qtyCol) []string {
+	head := []string{
+		"Crude mass (g)", "Method", "Feasible", "Total cost (" + m.currency + ")",
+		"Cost per gram of purified product (" + m.currency + "/g)", "Purified product (g)", "Solvent (L)",
+		"Waste (kg)", "Waste per product, E-factor (kg/kg)", "Process mass intensity, PMI (kg/kg)",
+		"Elapsed (h)", "Hands-on (h)", "Equipment",
+	}
+	for _, q := range qty {
+		head = append(head, q.item+" ("+q.unit+"): "+q.label)
+	}
+	return head
+}
+
+// lineID identifies a ledger line across results; rep counts earlier
+// lines of the same ledger with the same group, item and label, so that a
+// ledger billing an item twice for one purpose keeps both lines.
+type lineID struct {
+	group       usage.Group
+	item, label string
+	rep         int
+}
+
+// quantityColumns gathers the ledger lines of every feasible result, in
+// usage.Groups order and first-seen order within a group, as quantity
+// columns, each with the tail of its ROUND term, and gives for each result
+// (index i·methods + j) the column of each of its ledger lines.
+func quantityColumns(r *scale.Report, m money) ([]*qtyCol, [][]int, error) {
+	nm := len(r.Methods)
+	cols := map[lineID]*qtyCol{}
+	byGroup := map[usage.Group][]*qtyCol{}
+	var order []*qtyCol // first-seen order: a column's provisional index
+	idx := make([][]int, len(r.Results)*nm)
+	prev := make([]ledger.Ledger, nm) // each method's last ledger, to share its list
+	for i := range r.Results {
+		for j := range r.Results[i] {
+			res := &r.Results[i][j]
+			if !res.Usage.Feasible {
+				continue
+			}
+			// A method's ledgers mostly bill the same lines at every mass:
+			// the same list of columns then serves them all.
+			if k := (i-1)*nm + j; i > 0 && idx[k] != nil && sameLines(&prev[j], &res.Ledger) {
+				idx[i*nm+j] = idx[k]
+				prev[j] = res.Ledger
+				continue
+			}
+			list := make([]int, len(res.Ledger.Lines))
+			for n := range res.Ledger.Lines {
+				l := &res.Ledger.Lines[n]
+				id := lineID{l.Demand.Group, l.Demand.Item, l.Demand.Label, 0}
+				for _, e := range res.Ledger.Lines[:n] {
+					if e.Demand.Group == id.group && e.Demand.Item == id.item && e.Demand.Label == id.label {
+						id.rep++
+					}
+				}
+				q := cols[id]
+				if q == nil {
+					label := l.Demand.Label
+					if id.rep > 0 {
+						label = fmt.Sprintf("%s (%d)", label, id.rep+1)
+					}
+					q = &qtyCol{item: l.Demand.Item, label: label, unit: l.Unit, priceRow: l.PriceRow, col: len(order)}
+					cols[id] = q
+					order = append(order, q)
+					byGroup[l.Demand.Group] = append(byGroup[l.Demand.Group], q)
+				}
+				if q.unit != l.Unit || q.priceRow != l.PriceRow {
+					return nil, nil, fmt.Errorf("workbook: %s at %s: ledger line %q (%s) is priced per %q from price row %d, but elsewhere per %q from row %d",
+						r.Methods[j], massLabel(r.MassesKg[i]), l.Demand.Label, l.Demand.Item, l.Unit, l.PriceRow, q.unit, q.priceRow)
+				}
+				list[n] = q.col
+			}
+			idx[i*nm+j] = list
+			prev[j] = res.Ledger
+		}
+	}
+	// Columns in usage.Groups order, then first-seen order in a group.
+	var out []*qtyCol
+	for _, g := range usage.Groups {
+		out = append(out, byGroup[g]...)
+	}
+	final := make([]int, len(order))
+	for k, q := range out {
+		final[q.col] = suFirstQty + k
+	}
+	for _, q := range out {
+		q.col = final[q.col]
+		q.name = colName(q.col)
+		q.tail = "*" + priceRef(q.priceRow) + "," + strconv.Itoa(int(m.places)) + ")"
+	}
+	done := map[*int]bool{} // lists shared by several results are renumbered once
+	for _, list := range idx {
+		if len(list) == 0 || done[&list[0]] {
+			continue
+		}
+		done[&list[0]] = true
+		for n, c := range list {
+			list[n] = final[c]
+		}
+	}
+	return out, idx, nil
+}
+
+// sameLines reports whether two ledgers bill the same lines (group, item
+// and label) in the same order. The unit and the price row follow from the
+// item, which validate has checked against the price table.
+func sameLines(a, b *ledger.Ledger) bool {
+	if len(a.Lines) != len(b.Lines) {
+		return false
+	}
+	for n := range a.Lines {
+		x, y := &a.Lines[n].Demand, &b.Lines[n].Demand
+		if x.Item != y.Item || x.Label != y.Label || x.Group != y.Group {
+			return false
+		}
+	}
+	return true
+}
+
+// maxFormula is the longest formula a spreadsheet cell holds (Excel's
+// limit, 8,192 characters; Microsoft, "Excel specifications and limits";
+// from memory).
+const maxFormula = 8192
+
+// roundSum builds the total of row k from its ledger's lines, whose
+// quantities sit in columns cols:
+// ROUND(N23*Prices!$C$2,2)+ROUND(O23*Prices!$C$5,2)+...
+func roundSum(buf *[]byte, k int, l *ledger.Ledger, cols []int, qty []*qtyCol) string {
+	b := (*buf)[:0]
+	for n := range l.Lines {
+		q := qty[cols[n]-suFirstQty]
+		if n > 0 {
+			b = append(b, '+')
+		}
+		b = append(b, "ROUND("...)
+		b = append(b, q.name...)
+		b = strconv.AppendInt(b, int64(k), 10)
+		b = append(b, q.tail...)
+	}
+	*buf = b
+	return string(b)
+}
+
+// rowWriter assembles one streamed row in reused slices: vals holds
+// pointers into cells, so that no cell is allocated per row.
+type rowWriter struct {
+	st    *styles
+	omit  bool
+	cells []excelize.Cell
+	vals  []any
+	buf   []byte
+	row   int
+	err   error
+}
+
+func newRowWriter(st *styles, omit bool, cols int) *rowWriter {
+	return &rowWriter{st: st, omit: omit, cells: make([]excelize.Cell, cols), vals: make([]any, cols)}
+}
+
+func (rw *rowWriter) reset(row int) {
+	rw.row = row
+	clear(rw.vals)
+}
+
+func (rw *rowWriter) put(col int, c excelize.Cell) {
+	rw.cells[col-1] = c
+	rw.vals[col-1] = &rw.cells[col-1]
+}
+
+func (rw *rowWriter) text(col int, s string, style int) {
+	rw.put(col, excelize.Cell{StyleID: style, Value: s})
+}
+
+// num writes v, or, where v is not a finite number, "n/a" when na is set
+// and nothing otherwise (a column a chart plots: an empty cell is a gap).
+func (rw *rowWriter) num(col int, v float64, style int, na bool) {
+	switch {
+	case finite(v):
+		rw.put(col, excelize.Cell{StyleID: style, Value: round15(v)})
+	case na:
+		rw.put(col, excelize.Cell{StyleID: rw.st.text, Value: "n/a"})
+	}
+}
+
+// dec writes a ledger decimal that fits in 15 significant digits, as
+// quantities and amounts do: its nearest double already shows those
+// digits, so round15 is skipped.
+func (rw *rowWriter) dec(col int, d decimal.Decimal, style int) {
+	x := smallOf(d)
+	if !x.ok || x.c <= -1e15 || x.c >= 1e15 {
+		rw.num(col, d.InexactFloat64(), style, true)
+		return
+	}
+	rw.put(col, excelize.Cell{StyleID: style, Value: x.float(d)})
+}
+
+func (rw *rowWriter) formula(col int, f string, cached float64, style int) {
+	if len(f) > maxFormula {
+		rw.err = fmt.Errorf("workbook: sheet %s: the formula of %s has %d characters; a cell holds at most %d",
+			sheetScaleUp, cellName(col, rw.row), len(f), maxFormula)
+		return
+	}
+	c := excelize.Cell{StyleID: style, Formula: f, Value: round15(cached)}
+	if rw.omit {
+		c.Value = nil
+	}
+	rw.put(col, c)
+}
+
+func (rw *rowWriter) write(sw *excelize.StreamWriter) error {
+	if rw.err != nil {
+		return rw.err
+	}
+	if err := sw.SetRow(cellName(1, rw.row), rw.vals); err != nil {
+		return fmt.Errorf("workbook: sheet %s: row %d: %w", sheetScaleUp, rw.row, err)
+	}
+	return nil
+}
+
+// widths fits column widths from the content, in character widths.
+type widths struct {
+	st     *styles
+	need   []int
+	maxAbs []float64
+	neg    []bool
+	style  []int
+}
+
+func newWidths(st *styles, cols int) *widths {
+	return &widths{st: st, need: make([]int, cols+1), maxAbs: make([]float64, cols+1), neg: make([]bool, cols+1), style: make([]int, cols+1)}
+}
+
+func (w *widths) text(col, n int) { w.need[col] = max(w.need[col], n) }
+
+// num records a number. Its shown width grows with its magnitude, so the
+// width of a column is worked out once, from its largest magnitude.
+func (w *widths) num(col int, v float64, style int) {
+	if !finite(v) {
+		w.text(col, 3) // "n/a"
+		return
+	}
+	w.style[col] = style
+	w.maxAbs[col] = math.Max(w.maxAbs[col], math.Abs(v))
+	w.neg[col] = w.neg[col] || v < 0
+}
+
+// fit gives each column its widest content plus two characters, between
+// minWidth and maxWidth.
+func (w *widths) fit() map[int]float64 {
+	out := map[int]float64{}
+	for col := 1; col < len(w.need); col++ {
+		n := w.need[col]
+		if w.style[col] != 0 {
+			d := w.st.displayWidth(cell{value: w.maxAbs[col], style: w.style[col]})
+			if w.neg[col] {
+				d++
+			}
+			n = max(n, d)
+		}
+		out[col] = math.Min(math.Max(float64(n+2), minWidth), maxWidth)
+	}
+	return out
+}
+
+// colPixels is column col's width in excelize's pixel measure (width × 8
+// px, truncated; its convertColWidthToPixels), which places the charts.
+func colPixels(widths map[int]float64, col int) int {
+	w, ok := widths[col]
+	if !ok {
+		return 64 // excelize's default column width in pixels (defaultColWidthPixels)
+	}
+	return int(w*pxPerChar + 0.5)
+}
+
+// longestWord is the length of the longest word of s.
+func longestWord(s string) int {
+	n := 0
+	for _, w := range strings.Fields(s) {
+		n = max(n, textWidth(w))
+	}
+	return n
+}
