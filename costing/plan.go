@@ -7,7 +7,9 @@ package costing
 import (
 	"fmt"
 	"math"
+	"runtime"
 	"sort"
+	"sync"
 
 	"sepcost/costing/chrom"
 	"sepcost/costing/cryst"
@@ -126,29 +128,52 @@ func (p *Plan) MethodNames() []string {
 // Run runs every method at every mass and prices the results. Missing
 // prices from all runs come back together in one error.
 func (p *Plan) Run(massesKg []float64, t *prices.Table) ([][]Result, error) {
-	var us []usage.Usage
 	for _, m := range massesKg {
 		if !(m > 0) {
 			return nil, fmt.Errorf("batch mass %g kg: %w", m, units.ErrUnit)
 		}
-		for _, meth := range p.Methods {
-			us = append(us, meth.Run(m))
-		}
 	}
-	ls, err := ledger.PriceAll(us, t)
-	if err != nil {
-		return nil, err
+	// The models, the ledger and the metrics are pure functions of the
+	// plan, the prices and the mass: run them on all cores, each result in
+	// its own slot, so the order is kept.
+	n := len(p.Methods)
+	us := make([]usage.Usage, len(massesKg)*n)
+	rs := make([]Result, len(us))
+	errs := make([]error, len(us))
+	jobs := make(chan int)
+	var wg sync.WaitGroup
+	for w := 0; w < runtime.GOMAXPROCS(0); w++ {
+		wg.Add(1)
+		go func() {
+			defer wg.Done()
+			for k := range jobs {
+				us[k] = p.Methods[k%n].Run(massesKg[k/n])
+				l, err := ledger.Price(us[k], t)
+				if err == nil {
+					rs[k], err = p.result(us[k], l)
+				}
+				errs[k] = err
+			}
+		}()
+	}
+	for k := range us {
+		jobs <- k
+	}
+	close(jobs)
+	wg.Wait()
+	for _, err := range errs {
+		if err != nil {
+			// Price everything together so that every missing price
+			// comes back in one error.
+			if _, perr := ledger.PriceAll(us, t); perr != nil {
+				return nil, perr
+			}
+			return nil, err
+		}
 	}
 	out := make([][]Result, len(massesKg))
-	k := 0
 	for i := range massesKg {
-		out[i] = make([]Result, len(p.Methods))
-		for j := range p.Methods {
-			if out[i][j], err = p.result(us[k], ls[k]); err != nil {
-				return nil, err
-			}
-			k++
-		}
+		out[i] = rs[i*n : (i+1)*n : (i+1)*n]
 	}
 	return out, nil
 }

@@ -14,7 +14,7 @@ import (
 	"sepcost/templates"
 )
 
-func plan(t *testing.T, yaml []byte) (*costing.Plan, *prices.Table) {
+func plan(t testing.TB, yaml []byte) (*costing.Plan, *prices.Table) {
 	t.Helper()
 	sc, err := scenario.Load(bytes.NewReader(yaml), "test.yaml")
 	if err != nil {

@@ -84,7 +84,7 @@ func TestPortfolioReconciles(t *testing.T) {
 	}
 }
 
-func plan2(t *testing.T) (*costing.Plan, *prices.Table) {
+func plan2(t testing.TB) (*costing.Plan, *prices.Table) {
 	return plan(t, templates.Scenario)
 }
 

@@ -112,7 +112,7 @@ func BatchRun(b Batch) BatchResult {
 		return CutComposition(x1, x, f), f
 	}
 	lo, hi := math.Log(1e-300), math.Log(x1)
-	for i := 0; i < 200; i++ {
+	for i := 0; i < 100 && hi-lo > bisectTol; i++ {
 		mid := (lo + hi) / 2
 		if v, _ := avg(math.Exp(mid)); v > b.Target {
 			hi = mid

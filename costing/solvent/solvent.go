@@ -14,6 +14,7 @@ import (
 	"fmt"
 	"math"
 	"strings"
+	"sync"
 
 	"sepcost/costing/source"
 	"sepcost/costing/units"
@@ -67,12 +68,20 @@ const IgnitabilityLimit = 333.15
 // Composition.MolarMass). It is NaN when the formula does not parse;
 // Validate reports why, and a Book never holds such a solvent.
 func (s Solvent) MolarMass() float64 {
+	if v, ok := molarMasses.Load(s.Formula); ok {
+		return v.(float64)
+	}
 	c, err := ParseFormula(s.Formula)
 	if err != nil {
 		return math.NaN()
 	}
-	return c.MolarMass()
+	m := c.MolarMass()
+	molarMasses.Store(s.Formula, m)
+	return m
 }
+
+// molarMasses caches MolarMass by formula: models ask for it in inner loops.
+var molarMasses sync.Map
 
 // CarbonFraction is the mass fraction of carbon,
 //

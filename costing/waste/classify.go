@@ -366,15 +366,29 @@ func (k constituent) matches(s solvent.Solvent) bool {
 			}
 		}
 	}
-	for _, n := range s.Names() {
-		n = strings.ToLower(strings.Join(strings.Fields(n), " "))
-		if n == k.name {
+	if k.matchesName(s.ID) {
+		return true
+	}
+	for _, a := range s.Aliases {
+		if k.matchesName(a) {
 			return true
 		}
-		for _, m := range k.names {
-			if n == m {
-				return true
-			}
+	}
+	return false
+}
+
+// matchesName compares a name with the constituent's, ignoring case and
+// runs of white space (k.name and k.names are already in that form).
+func (k constituent) matchesName(n string) bool {
+	if strings.Contains(n, "  ") || strings.TrimSpace(n) != n || strings.ContainsAny(n, "\t\n") {
+		n = strings.Join(strings.Fields(n), " ")
+	}
+	if strings.EqualFold(n, k.name) {
+		return true
+	}
+	for _, m := range k.names {
+		if strings.EqualFold(n, m) {
+			return true
 		}
 	}
 	return false
