@@ -70,6 +70,11 @@ func dumpSheet(b *strings.Builder, f *excelize.File, sheet string, refs []cellPo
 	if p.Freeze {
 		fmt.Fprintf(b, "  frozen: %d rows, %d columns, top left %s\n", p.YSplit, p.XSplit, p.TopLeftCell)
 	}
+	if line, err := pageLine(f, sheet); err != nil {
+		return wrap(err)
+	} else if line != "" {
+		fmt.Fprintln(b, line)
+	}
 	maxCol, maxRow := 0, 0
 	for _, c := range refs {
 		maxCol, maxRow = max(maxCol, c.col), max(maxRow, c.row)
@@ -178,6 +183,39 @@ func dumpSheet(b *strings.Builder, f *excelize.File, sheet string, refs []cellPo
 		fmt.Fprintln(b, line+s)
 	}
 	return nil
+}
+
+// pageLine describes a page setup other than the default (portrait, at
+// 100 %): the orientation and the pages it is fitted to.
+func pageLine(f *excelize.File, sheet string) (string, error) {
+	pl, err := f.GetPageLayout(sheet)
+	if err != nil {
+		return "", err
+	}
+	pr, err := f.GetSheetProps(sheet)
+	if err != nil {
+		return "", err
+	}
+	orient := "portrait"
+	if pl.Orientation != nil {
+		orient = *pl.Orientation
+	}
+	fit := pr.FitToPage != nil && *pr.FitToPage
+	if orient == "portrait" && !fit {
+		return "", nil
+	}
+	line := "  page: " + orient
+	if fit {
+		w, h := 1, 1
+		if pl.FitToWidth != nil {
+			w = *pl.FitToWidth
+		}
+		if pl.FitToHeight != nil {
+			h = *pl.FitToHeight
+		}
+		line += fmt.Sprintf(", fitted to a width of %d page(s) and a height of %d (0: as many pages as needed)", w, h)
+	}
+	return line, nil
 }
 
 // describeStyle is the part of a cell style the dump shows.

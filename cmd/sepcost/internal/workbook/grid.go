@@ -39,10 +39,12 @@ type grid struct {
 	freezeCols int
 	widths     map[int]float64 // widths fixed by the sheet's builder
 	minWidths  map[int]float64 // widths the content may widen but not narrow
+	maxWidths  map[int]float64 // widths the content may narrow but not widen (wrapped text)
+	printWide  bool            // print in landscape, scaled to one page wide
 }
 
 func newGrid(name string) *grid {
-	return &grid{name: name, cells: map[int]map[int]cell{}, widths: map[int]float64{}, minWidths: map[int]float64{}}
+	return &grid{name: name, cells: map[int]map[int]cell{}, widths: map[int]float64{}, minWidths: map[int]float64{}, maxWidths: map[int]float64{}}
 }
 
 func (g *grid) set(row, col int, c cell) {
@@ -192,6 +194,9 @@ func (g *grid) fitWidths(st *styles) map[int]float64 {
 			continue
 		}
 		w := float64(need[col] + 2)
+		if m, ok := g.maxWidths[col]; ok {
+			w = math.Min(w, m)
+		}
 		out[col] = math.Min(math.Max(math.Max(w, minWidth), g.minWidths[col]), maxWidth)
 	}
 	return out
@@ -201,6 +206,13 @@ func (g *grid) fitWidths(st *styles) map[int]float64 {
 // first, rows in ascending order, merges, then one Flush (DESIGN §9).
 // With omit set, formulas are written without their cached values.
 func (g *grid) flush(f *excelize.File, st *styles, omit bool) error {
+	if g.printWide {
+		// Before the StreamWriter: it copies the sheet's page setup and
+		// properties as they stand when it is made.
+		if err := printWide(f, g.name); err != nil {
+			return err
+		}
+	}
 	sw, err := f.NewStreamWriter(g.name)
 	if err != nil {
 		return fmt.Errorf("workbook: sheet %s: %w", g.name, err)
@@ -254,7 +266,9 @@ func (g *grid) flush(f *excelize.File, st *styles, omit bool) error {
 		}
 		var opts []excelize.RowOpts
 		if lines > 1 {
-			opts = append(opts, excelize.RowOpts{Height: lineHeight * float64(lines)})
+			// A spreadsheet row is at most 409 points high (excelize's
+			// MaxRowHeight, Excel's limit); a longer text is cut there.
+			opts = append(opts, excelize.RowOpts{Height: math.Min(lineHeight*float64(lines), excelize.MaxRowHeight)})
 		}
 		if err := sw.SetRow(cellName(1, row), vals, opts...); err != nil {
 			return fmt.Errorf("workbook: sheet %s: row %d: %w", g.name, row, err)
@@ -267,6 +281,20 @@ func (g *grid) flush(f *excelize.File, st *styles, omit bool) error {
 	}
 	if err := sw.Flush(); err != nil {
 		return fmt.Errorf("workbook: sheet %s: %w", g.name, err)
+	}
+	return nil
+}
+
+// printWide sets a sheet to print in landscape, scaled to fit one page
+// wide and as many pages down as it needs, so that a wide table prints
+// whole rather than split into column strips on separate pages.
+func printWide(f *excelize.File, sheet string) error {
+	landscape, one, down, fit := "landscape", 1, 0, true
+	if err := f.SetPageLayout(sheet, &excelize.PageLayoutOptions{Orientation: &landscape, FitToWidth: &one, FitToHeight: &down}); err != nil {
+		return fmt.Errorf("workbook: sheet %s: page layout: %w", sheet, err)
+	}
+	if err := f.SetSheetProps(sheet, &excelize.SheetPropsOptions{FitToPage: &fit}); err != nil {
+		return fmt.Errorf("workbook: sheet %s: page layout: %w", sheet, err)
 	}
 	return nil
 }

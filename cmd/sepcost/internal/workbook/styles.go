@@ -28,6 +28,11 @@ type styles struct {
 	kg, kgBold, litres                 int
 	percent                            int
 	factor                             int // a ratio shown as "12.3×"
+	ratio                              int // a mass ratio (E-factor, PMI), two decimals
+	ruleNumber                         int // a number heading a paragraph: left and top aligned
+	headerRight                        int // the header of a column of numbers, aligned with them
+	headerIndent, wrapIndent           int // header and wrapped text set off from numbers on their left
+	kgFine                             int // kg with up to six decimals, for batches of milligrams
 	minPlaces, maxPlaces               int32
 	meta                               map[int]fmtMeta
 }
@@ -73,21 +78,29 @@ func newStyles(f *excelize.File, m money) (*styles, error) {
 		{&st.bold, excelize.Style{Font: &excelize.Font{Bold: true}}, fmtMeta{places: -1}},
 		{&st.wrap, excelize.Style{Alignment: &excelize.Alignment{WrapText: true, Vertical: "top"}}, fmtMeta{places: -1}},
 		{&st.note, excelize.Style{Font: &excelize.Font{Italic: true}}, fmtMeta{places: -1}},
-		{&st.general, excelize.Style{}, fmtMeta{places: -1}},
-		{&st.figure, excelize.Style{CustomNumFmt: str("#,##0.###")}, fmtMeta{3, true, 0}},
+		{&st.general, excelize.Style{Alignment: &excelize.Alignment{Vertical: "top"}}, fmtMeta{places: -1}},
+		{&st.figure, excelize.Style{CustomNumFmt: str("#,##0.###"), Alignment: &excelize.Alignment{Vertical: "top"}}, fmtMeta{3, true, 0}},
 		{&st.generalBold, excelize.Style{Font: &excelize.Font{Bold: true}, Border: top}, fmtMeta{places: -1}},
-		{&st.money, excelize.Style{CustomNumFmt: str(moneyFmt)}, fmtMeta{int(m.places), true, suffix}},
+		{&st.money, excelize.Style{CustomNumFmt: str(moneyFmt), Alignment: &excelize.Alignment{Vertical: "top"}}, fmtMeta{int(m.places), true, suffix}},
 		{&st.moneyBold, excelize.Style{CustomNumFmt: str(moneyFmt), Font: &excelize.Font{Bold: true}, Border: top},
 			fmtMeta{int(m.places), true, suffix}},
-		{&st.perGram, excelize.Style{CustomNumFmt: str(perGramFmt)},
+		{&st.perGram, excelize.Style{CustomNumFmt: str(perGramFmt), Alignment: &excelize.Alignment{Vertical: "top"}},
 			fmtMeta{int(m.places) + 2, true, suffix + 2}},
-		{&st.hours, excelize.Style{CustomNumFmt: str("0.00")}, fmtMeta{places: 2}},
+		{&st.hours, excelize.Style{CustomNumFmt: str("0.00"), Alignment: &excelize.Alignment{Vertical: "top"}}, fmtMeta{places: 2}},
 		{&st.hoursBold, excelize.Style{CustomNumFmt: str("0.00"), Font: &excelize.Font{Bold: true}, Border: top}, fmtMeta{places: 2}},
-		{&st.kg, excelize.Style{CustomNumFmt: str("#,##0.000")}, fmtMeta{3, true, 0}},
+		{&st.kg, excelize.Style{CustomNumFmt: str("#,##0.000"), Alignment: &excelize.Alignment{Vertical: "top"}}, fmtMeta{3, true, 0}},
 		{&st.kgBold, excelize.Style{CustomNumFmt: str("#,##0.000"), Font: &excelize.Font{Bold: true}, Border: top}, fmtMeta{3, true, 0}},
-		{&st.litres, excelize.Style{CustomNumFmt: str("#,##0.000")}, fmtMeta{3, true, 0}},
-		{&st.percent, excelize.Style{CustomNumFmt: str("0.0%")}, fmtMeta{1, false, 1}},
-		{&st.factor, excelize.Style{CustomNumFmt: str(`#,##0.00"×"`)}, fmtMeta{2, true, 1}},
+		{&st.litres, excelize.Style{CustomNumFmt: str("#,##0.000"), Alignment: &excelize.Alignment{Vertical: "top"}}, fmtMeta{3, true, 0}},
+		{&st.percent, excelize.Style{CustomNumFmt: str("0.0%"), Alignment: &excelize.Alignment{Vertical: "top"}}, fmtMeta{1, false, 1}},
+		{&st.factor, excelize.Style{CustomNumFmt: str(`#,##0.00"×"`), Alignment: &excelize.Alignment{Vertical: "top"}}, fmtMeta{2, true, 1}},
+		{&st.ratio, excelize.Style{CustomNumFmt: str("#,##0.00"), Alignment: &excelize.Alignment{Vertical: "top"}}, fmtMeta{2, true, 0}},
+		{&st.headerRight, excelize.Style{Font: &excelize.Font{Bold: true}, Border: bottom,
+			Alignment: &excelize.Alignment{WrapText: true, Vertical: "bottom", Horizontal: "right"}}, fmtMeta{places: -1}},
+		{&st.headerIndent, excelize.Style{Font: &excelize.Font{Bold: true}, Border: bottom,
+			Alignment: &excelize.Alignment{WrapText: true, Vertical: "bottom", Horizontal: "left", Indent: 1}}, fmtMeta{places: -1}},
+		{&st.wrapIndent, excelize.Style{Alignment: &excelize.Alignment{WrapText: true, Vertical: "top", Horizontal: "left", Indent: 1}}, fmtMeta{places: -1}},
+		{&st.kgFine, excelize.Style{CustomNumFmt: str("[<1]0.000###;#,##0.000"), Alignment: &excelize.Alignment{Vertical: "top"}}, fmtMeta{6, true, 0}},
+		{&st.ruleNumber, excelize.Style{Alignment: &excelize.Alignment{Horizontal: "left", Vertical: "top"}}, fmtMeta{places: -1}},
 	}
 	for _, d := range defs {
 		s := d.s

@@ -152,11 +152,22 @@ func syntheticSweep(n, methods int) *scale.Report {
 //	PMI = (m_crude + Σ m_material) / m_product
 //
 // In the fixtures every material (silica, sand, solvents) ends up in a
-// waste stream, so Σ m_material = m_waste.
+// waste stream, so Σ m_material = m_waste, and the solvent used is the
+// solvent in the waste; they hold no water, so the metrics without water
+// are the same, and no halogenated solvent.
 func fixtureMetrics(u usage.Usage) *green.Metrics {
 	w := u.WasteKg()
-	return &green.Metrics{EFactor: w / u.ProductOutKg, PMI: (u.CrudeKg + w) / u.ProductOutKg,
-		WasteKg: w, InputKg: u.CrudeKg + w, ProductKg: u.ProductOutKg}
+	solventKg := 0.0
+	for _, s := range u.Waste {
+		for _, c := range s.Components {
+			if c.Solvent {
+				solventKg += c.Kg
+			}
+		}
+	}
+	p := u.ProductOutKg
+	return &green.Metrics{EFactor: w / p, EFactorNoWater: w / p, PMI: (u.CrudeKg + w) / p, PMINoWater: (u.CrudeKg + w) / p,
+		SolventIntensity: solventKg / p, WasteKg: w, InputKg: u.CrudeKg + w, ProductKg: p, SolventKg: solventKg}
 }
 
 // priced turns quantities into a ledger by the ledger's rule.

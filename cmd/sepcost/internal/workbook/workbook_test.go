@@ -585,6 +585,7 @@ func TestBadReports(t *testing.T) {
 		{"method count", func(r *scale.Report) *scale.Report { r.Methods = append(r.Methods, "distillation"); return r }, "1 results for 2 methods"},
 		{"sheet name", func(r *scale.Report) *scale.Report { r.Methods[0] = "flash/column"; return r }, "cannot name a sheet"},
 		{"sheet clash", func(r *scale.Report) *scale.Report { r.Methods[0] = "prices"; return r }, "already used"},
+		{"sheet clash with Uncertainty", func(r *scale.Report) *scale.Report { r.Methods[0] = "uncertainty"; return r }, `gives the sheet name "Uncertainty", which is already used`},
 		{"unit price", func(r *scale.Report) *scale.Report {
 			r.Results[0][0].Ledger.Lines[0].UnitPrice = decimal.RequireFromString("90")
 			return r

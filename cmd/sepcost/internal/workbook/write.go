@@ -1,7 +1,9 @@
 // Package workbook writes a scale.Report as a spreadsheet workbook with live
 // formulas (DESIGN §4): Summary, Inputs, Prices, one sheet per method,
 // Scale-up (sweeps only: the table and native charts against batch mass on
-// logarithmic axes), Waste and Sources. It lays out what the report holds and computes no model or
+// logarithmic axes), Waste (streams with their suggested codes, green
+// metrics, solvents), Uncertainty (when the report was sampled) and
+// Sources. It lays out what the report holds and computes no model or
 // price; the only arithmetic it writes is spreadsheet formulas (ledger line
 // amounts, subtotals and totals, cost per gram, recovery) whose cached
 // values come from the report, so that viewers that do not recalculate
@@ -154,7 +156,11 @@ func build(r *scale.Report, opt Options, record bool) (*excelize.File, *layout, 
 	if r.IsSweep {
 		order = append(order, sheetScaleUp)
 	}
-	order = append(order, sheetWaste, sheetSources)
+	order = append(order, sheetWaste)
+	if r.Uncertainty != nil {
+		order = append(order, sheetUncertainty)
+	}
+	order = append(order, sheetSources)
 	if err := f.SetSheetName("Sheet1", order[0]); err != nil {
 		return nil, nil, fmt.Errorf("workbook: sheet %s: %w", order[0], err)
 	}
@@ -189,11 +195,17 @@ func build(r *scale.Report, opt Options, record bool) (*excelize.File, *layout, 
 	buildPrices(prices, st, r)
 	waste := newGrid(sheetWaste)
 	buildWaste(waste, st, r, m, details, lay)
+	grids = append(grids, summary, inputs, prices, waste)
+	if r.Uncertainty != nil {
+		unc := newGrid(sheetUncertainty)
+		buildUncertainty(unc, st, r)
+		grids = append(grids, unc)
+	}
 	sources := newGrid(sheetSources)
 	if err := buildSources(sources, st, r); err != nil {
 		return nil, nil, err
 	}
-	grids = append(grids, summary, inputs, prices, waste, sources)
+	grids = append(grids, sources)
 	for _, g := range grids {
 		if err := g.flush(f, st, opt.OmitCachedValues); err != nil {
 			return nil, nil, err
@@ -241,7 +253,7 @@ func validate(r *scale.Report) (money, error) {
 		}
 	}
 	seen := map[string]bool{}
-	for _, name := range []string{sheetSummary, sheetInputs, sheetPrices, sheetScaleUp, sheetWaste, sheetSources} {
+	for _, name := range []string{sheetSummary, sheetInputs, sheetPrices, sheetScaleUp, sheetWaste, sheetUncertainty, sheetSources} {
 		seen[strings.ToLower(name)] = true
 	}
 	for _, meth := range r.Methods {

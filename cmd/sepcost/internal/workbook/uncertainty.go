@@ -1,0 +1,186 @@
+package workbook
+
+import (
+	"fmt"
+	"math"
+	"sort"
+	"strconv"
+
+	"sepcost/costing/source"
+	"sepcost/scale"
+)
+
+// sheetUncertainty follows Waste: DESIGN §4 lists Scale-up, Waste,
+// Uncertainty, Sources.
+const sheetUncertainty = "Uncertainty"
+
+// markMeanings are the marks of costing/source in words, in the order the
+// Uncertainty sheet lists their spreads (most to least sure).
+var markMeanings = []struct {
+	mark    source.Mark
+	meaning string
+}{
+	{source.Confirmed, "seen in a published table or regulation"},
+	{source.Derived, "computed here from published equations or data"},
+	{source.Calibrated, "fitted here so that one model reproduces a published table"},
+	{source.FromMemory, "widely quoted, not re-checked against the original"},
+	{source.Override, "set by the user in the scenario file"},
+	{source.CommonPractice, "a habit of the trade, no published source"},
+	{source.Example, "invented for the demo"},
+}
+
+// Uncertainty sheet columns: a label, then numbers.
+const (
+	uLabel = iota + 1
+	uP10
+	uP50
+	uP90
+	uFeasible
+	uCheapest
+	uLast = uCheapest
+)
+
+// buildUncertainty writes the Monte Carlo result at the target mass
+// (scale.Uncertainty, from scale.Sample): the target mass, the number of
+// draws and the seed; per method the P10, P50 and P90 of the cost per gram
+// of purified product and the shares of draws in which it was feasible and
+// cheapest; how to read them, with the rule that a win in fewer than
+// scale.ConfidentShare of the draws is a tie; and the spreads drawn
+// (scale.Spread by mark, scale.PriceSpread), which are this project's
+// choices. The only arithmetic is the factors that show what a spread
+// means, those at one standard deviation either side:
+//
+//	f(−1σ) = exp(−σ),  f(+1σ) = exp(+σ)
+//
+// with σ the standard deviation of the natural log of the factor
+// (dimensionless, σ ≥ 0); about two draws in three fall between them.
+func buildUncertainty(g *grid, st *styles, r *scale.Report) {
+	u := r.Uncertainty
+	g.printWide = true
+	g.widths[uLabel] = 46
+	for c := uP10; c <= uLast; c++ {
+		g.minWidths[c] = 13
+	}
+	g.set(1, 1, cell{value: "Uncertainty at the target mass", style: st.title, spill: true})
+	g.text(3, 1, "Target mass", st.bold)
+	g.set(3, 2, cell{value: massLabel(u.TargetKg) + " of crude", style: st.text, spill: true})
+	g.text(4, 1, "Draws", st.bold)
+	g.num(4, 2, float64(u.Draws), st.ruleNumber)
+	g.text(5, 1, "Seed", st.bold)
+	g.text(5, 2, strconv.FormatUint(u.Seed, 10), st.text)
+	g.set(6, 1, cell{value: "The same seed and number of draws give the same bands (--draws and --seed of sepcost estimate and sweep).",
+		style: st.note, spill: true})
+
+	row := 8
+	g.set(row, 1, cell{value: "Cost per gram of purified product across the draws", style: st.heading, spill: true})
+	row++
+	for c, h := range []string{"Method", "P10", "P50\n(median)", "P90", "Feasible in\n(share of draws)", "Cheapest in\n(share of draws)"} {
+		style := st.headerRight
+		if c == 0 {
+			style = st.header
+		}
+		g.set(row, c+1, cell{value: h, style: style, wrap: true})
+	}
+	row++
+	best := -1
+	for k, b := range u.Bands {
+		g.text(row, uLabel, capitalize(b.Method), st.text)
+		if b.Feasible > 0 {
+			// g.num writes "n/a" for a quantile that is not a number.
+			g.num(row, uP10, b.P10, st.perGram)
+			g.num(row, uP50, b.P50, st.perGram)
+			g.num(row, uP90, b.P90, st.perGram)
+		} else {
+			// No cost in any draw: words in place of the three quantiles,
+			// with the reason where the decision records one.
+			text := "not feasible in any draw"
+			if d := r.Decision; d != nil && d.Infeasible[b.Method] != "" {
+				text = "not feasible at this mass: " + d.Infeasible[b.Method]
+			}
+			mergedCell(g, row, uP10, uP90, cell{value: text, style: st.wrap, wrap: true})
+		}
+		g.num(row, uFeasible, b.Feasible, st.percent)
+		g.num(row, uCheapest, b.Cheapest, st.percent)
+		if finite(b.Cheapest) && (best < 0 || b.Cheapest > u.Bands[best].Cheapest) {
+			best = k
+		}
+		row++
+	}
+	row++
+	confident := scale.ConfidentShare * 100
+	for _, text := range []string{
+		"P10, P50 and P90: the cost per gram of purified product below which 10 %, 50 % and 90 % of the draws fall, among the draws " +
+			"in which the method was feasible (linear-interpolation sample quantiles: Hyndman and Fan 1996, definition 7, the " +
+			"spreadsheet PERCENTILE rule). Feasible in: the share of draws in which the method was feasible at this mass. Cheapest in: " +
+			"the share of draws in which it was the cheapest feasible method.",
+		fmt.Sprintf("How to read it: a method that is cheapest in fewer than %s %% of the draws has not won clearly; treat the methods as "+
+			"tied within the models' uncertainty and choose on other grounds (time, waste, equipment at hand). The %s %% threshold "+
+			"is this project's choice (common practice, no source).", sigFigs(confident, 3), sigFigs(confident, 3)),
+		verdict(u, best),
+	} {
+		wrapped(g, st, row, text, uLast)
+		row++
+	}
+
+	row++
+	g.set(row, 1, cell{value: "The spreads drawn", style: st.heading, spill: true})
+	row++
+	wrapped(g, st, row, "Each draw multiplies every model coefficient (but temperatures, which are not scale quantities) and every price "+
+		"by a log-normal factor exp(σ·z), z a standard normal number, and runs every method at the target mass. Shares and "+
+		"fractions below 1 are drawn on their odds, so that they stay between 0 and 1. Each draw has its own generator, seeded "+
+		"from the seed and the draw's number.", uLast)
+	row++
+	for c, h := range []string{"Values drawn", "σ of ln(factor)", "Factor at −1σ", "Factor at +1σ"} {
+		style := st.headerRight
+		if c == 0 {
+			style = st.header
+		}
+		g.set(row, c+1, cell{value: h, style: style, wrap: true})
+	}
+	row++
+	spread := func(label string, sigma float64) {
+		g.set(row, uLabel, cell{value: label, style: st.wrap, wrap: true})
+		g.num(row, 2, sigma, st.ratio)
+		g.num(row, 3, math.Exp(-sigma), st.figure)
+		g.num(row, 4, math.Exp(sigma), st.figure)
+		row++
+	}
+	listed := map[source.Mark]bool{}
+	for _, mm := range markMeanings {
+		if sigma, ok := scale.Spread[mm.mark]; ok {
+			spread(fmt.Sprintf("Coefficients marked %s (%s)", mm.mark, mm.meaning), sigma)
+			listed[mm.mark] = true
+		}
+	}
+	var others []string
+	for mk := range scale.Spread {
+		if !listed[mk] {
+			others = append(others, string(mk))
+		}
+	}
+	sort.Strings(others) // a map has no order; the workbook must not change between runs
+	for _, mk := range others {
+		spread("Coefficients marked "+mk, scale.Spread[source.Mark(mk)])
+	}
+	spread("Every price in the price table", scale.PriceSpread)
+	row++
+	wrapped(g, st, row, "These spreads are this project's choices (common practice, no source): a value seen in a published table is "+
+		"known to a few per cent, one from memory to some 15 %, a habit of the trade to a quarter; quotes and catalogue prices "+
+		"drift by about a tenth within a budget year. About two draws in three fall between the factors at −1σ and +1σ.", uLast)
+}
+
+// verdict says what the shares mean at this mass: a clear win when the
+// method cheapest most often is cheapest in at least scale.ConfidentShare
+// of the draws, else a tie.
+func verdict(u *scale.Uncertainty, best int) string {
+	if best < 0 || !(u.Bands[best].Cheapest > 0) {
+		return "Here no method was feasible in any draw, so none is cheapest."
+	}
+	b := u.Bands[best]
+	pct := func(v float64) string { return sigFigs(v*100, 3) + " %" }
+	if b.Cheapest >= scale.ConfidentShare {
+		return fmt.Sprintf("Here %s is cheapest in %s of the draws: a clear win at %s.", b.Method, pct(b.Cheapest), massLabel(u.TargetKg))
+	}
+	return fmt.Sprintf("Here no method is cheapest in %s of the draws (%s comes closest, with %s): at %s the methods are tied within the models' uncertainty.",
+		pct(scale.ConfidentShare), b.Method, pct(b.Cheapest), massLabel(u.TargetKg))
+}
