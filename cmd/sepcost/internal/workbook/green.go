@@ -97,7 +97,7 @@ func writeGreenMetrics(g *grid, st *styles, r *scale.Report, masses []int, row i
 			g.text(row, 2, capitalize(meth), st.text)
 			switch {
 			case !res.Usage.Feasible:
-				g.set(row, 3, cell{value: "not feasible: " + res.Usage.Reason, style: st.text, spill: true})
+				g.set(row, 3, cell{value: notFeasible(res.Usage.Reason), style: st.text, spill: true})
 			case res.Metrics == nil:
 				g.set(row, 3, cell{value: "n/a: no green metrics for this result (no product recovered)", style: st.text, spill: true})
 			default:

@@ -144,7 +144,7 @@ func (ms *methodSheet) head() {
 		g.merge(2, c, c+1)
 		status := "feasible"
 		if !ms.feasible(i) {
-			status = "not feasible: " + ms.res[i].Usage.Reason
+			status = notFeasible(ms.res[i].Usage.Reason)
 		}
 		g.set(3, c, cell{value: status, style: st.wrap, wrap: true})
 		g.merge(3, c, c+1)

@@ -272,7 +272,7 @@ func writeScaleUp(f *excelize.File, st *styles, r *scale.Report, m money, method
 			rw.num(suMass, row.CrudeKg*1000, st.figure, false)
 			rw.text(suMethod, methods[j].sheet, st.text)
 			if !row.Feasible {
-				rw.text(suFeasible, "not feasible: "+row.Reason, st.text)
+				rw.text(suFeasible, notFeasible(row.Reason), st.text)
 				if err := rw.write(sw); err != nil {
 					return err
 				}

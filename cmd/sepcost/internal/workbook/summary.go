@@ -82,7 +82,7 @@ func buildSummary(g *grid, st *styles, r *scale.Report, m money, methods []metho
 			g.text(row, 1, massLabel(kg), st.text)
 			g.text(row, 2, methods[j].sheet, st.text)
 			if !mc.feasible {
-				g.set(row, 3, cell{value: "not feasible: " + mc.reason, style: st.text, spill: true})
+				g.set(row, 3, cell{value: notFeasible(mc.reason), style: st.text, spill: true})
 				row++
 				continue
 			}

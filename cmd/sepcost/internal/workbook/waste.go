@@ -138,7 +138,7 @@ func buildWaste(g *grid, st *styles, r *scale.Report, m money, details bool, lay
 			if !res.Usage.Feasible {
 				g.text(row, wMass, massLabel(kg), st.text)
 				g.text(row, wMethod, capitalize(meth), st.text)
-				g.set(row, wStream, cell{value: "not feasible: " + res.Usage.Reason, style: st.text, spill: true})
+				g.set(row, wStream, cell{value: notFeasible(res.Usage.Reason), style: st.text, spill: true})
 				row++
 				continue
 			}

@@ -33,6 +33,7 @@ import (
 	"github.com/shopspring/decimal"
 	"github.com/xuri/excelize/v2"
 
+	"sepcost/costing"
 	"sepcost/costing/ledger"
 	"sepcost/costing/usage"
 	"sepcost/scale"
@@ -503,3 +504,12 @@ func amountFollowsRule(q, p, a small, qd, pd, ad decimal.Decimal, places int32) 
 
 // priceRef is the absolute reference to the unit price of price-table item i.
 func priceRef(i int) string { return sheetRef(sheetPrices, absName(priceCol, i+2)) }
+
+// notFeasible words a method's reason for having no numbers: "not
+// assessed: ..." stands as it is, any other reason reads "not feasible: ...".
+func notFeasible(reason string) string {
+	if strings.HasPrefix(reason, costing.NotAssessed) {
+		return reason
+	}
+	return "not feasible: " + reason
+}
