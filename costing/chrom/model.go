@@ -3,7 +3,6 @@ package chrom
 import (
 	"fmt"
 	"math"
-	"sort"
 
 	"sepcost/costing/scenario"
 	"sepcost/costing/solvent"
@@ -17,36 +16,10 @@ const (
 	ItemSilica      = "silica gel"
 	ItemSand        = "sea sand"
 	ItemTLCPlate    = "tlc plate"
-	ItemLabour      = "chemist time"
-	ItemElectricity = "electricity"
-	ItemProduct     = "product"
+	ItemLabour      = usage.ItemLabour
+	ItemElectricity = usage.ItemElectricity
+	ItemProduct     = usage.ItemProduct
 )
-
-// volumes accumulates solvent volumes (m³) by solvent id.
-type volumes map[string]float64
-
-func (v volumes) add(m scenario.Mix, vol float64) {
-	for _, p := range m {
-		v[p.Solvent] += p.Fraction * vol
-	}
-}
-
-func (v volumes) ids() []string {
-	ids := make([]string, 0, len(v))
-	for id := range v {
-		ids = append(ids, id)
-	}
-	sort.Strings(ids)
-	return ids
-}
-
-func (v volumes) total() float64 {
-	t := 0.0
-	for _, x := range v {
-		t += x
-	}
-	return t
-}
 
 // Run models one flash-chromatography purification of crudeKg of crude.
 // coef must hold Defaults() plus the calibrated saturation capacity and
@@ -70,7 +43,7 @@ func Run(sc *scenario.Scenario, coef source.Set, crudeKg float64) usage.Usage {
 	dRf := math.Abs(ch.ProductRf - ch.ImpurityRf)
 	alpha := sep.Alpha()
 	fig("k_product", "retention factor k of the product", RetentionFactor(ch.ProductRf), "")
-	fig("cv_product", "product elutes at (column volumes)", ElutionCV(ch.ProductRf), "")
+	fig("cv_product", "product elutes at (column scenario.Volumes)", ElutionCV(ch.ProductRf), "")
 	fig("delta_cv", "separation ΔCV from the nearest impurity", DeltaCV(ch.ProductRf, ch.ImpurityRf), "")
 	fig("alpha", "separation factor α", alpha, "")
 	if sep.FirstIsProduct() {
@@ -150,39 +123,39 @@ func Run(sc *scenario.Scenario, coef source.Set, crudeKg float64) usage.Usage {
 	}
 
 	// Eluent per run, by segment, in column volumes.
-	used := volumes{}
+	used := scenario.Volumes{}
 	first := ch.TLCEluent
 	if len(ch.Gradient) > 0 {
 		first = ch.Gradient[0].Eluent
 	}
-	used.add(first, get(KeyEquilibrationCV)*v0)
+	used.Add(first, get(KeyEquilibrationCV)*v0)
 	collectedCV := 0.0
 	for _, st := range ch.Gradient {
-		used.add(st.Eluent, st.ColumnVolumes*v0)
+		used.Add(st.Eluent, st.ColumnVolumes*v0)
 		collectedCV += st.ColumnVolumes
 	}
 	lfProduct := crudeRun * sc.Purity / (qs * col.Silica)
 	band := BandCV(ch.ProductRf, lfProduct, plates)
 	elute := ElutionCV(ch.ProductRf) + band/2 + get(KeyTailCV) + get(KeyFlushCV)
-	used.add(ch.TLCEluent, elute*v0)
+	used.Add(ch.TLCEluent, elute*v0)
 	collectedCV += elute
-	eluentRun := used.total()
-	fig("eluent_cv", "eluent per run (column volumes)", eluentRun/v0, "")
-	fig("band_cv", "product band width (column volumes)", band, "")
+	eluentRun := used.Total()
+	fig("eluent_cv", "eluent per run (column scenario.Volumes)", eluentRun/v0, "")
+	fig("band_cv", "product band width (column scenario.Volumes)", band, "")
 
 	loadMix := ch.TLCEluent
 	if ch.LoadingSolvent != "" {
 		loadMix = scenario.Mix{{Solvent: ch.LoadingSolvent, Fraction: 1}}
 	}
-	evaporated := volumes{}
+	evaporated := scenario.Volumes{}
 	drySilica := 0.0
 	if ch.Loading == scenario.DryLoading {
 		drySilica = crudeRun * get(KeyDrySorbent)
 		v := crudeRun * get(KeyDrySolventPerKg)
-		used.add(loadMix, v)
-		evaporated.add(loadMix, v)
+		used.Add(loadMix, v)
+		evaporated.Add(loadMix, v)
 	} else {
-		used.add(loadMix, crudeRun*get(KeyLoadSolventPerKg))
+		used.Add(loadMix, crudeRun*get(KeyLoadSolventPerKg))
 	}
 
 	// Fractions and TLC.
@@ -191,7 +164,7 @@ func Run(sc *scenario.Scenario, coef source.Set, crudeKg float64) usage.Usage {
 	analysed := math.Ceil(fractions / get(KeyTLCEvery))
 	plateCount := math.Ceil(analysed / get(KeyLanes))
 	productFractions := math.Max(1, math.Ceil(band*v0/fracSize))
-	used.add(ch.TLCEluent, plateCount*get(KeyTLCSolvent))
+	used.Add(ch.TLCEluent, plateCount*get(KeyTLCSolvent))
 	fig("fraction_size", "fraction size", fracSize, "mL")
 	fig("fractions", "fractions per run", fractions, "")
 	fig("tlc_plates", "TLC plates per run", plateCount, "")
@@ -199,7 +172,7 @@ func Run(sc *scenario.Scenario, coef source.Set, crudeKg float64) usage.Usage {
 
 	// Product fractions are evaporated; their volume is the product band.
 	productVol := math.Min(productFractions*fracSize, eluentRun)
-	evaporated.add(ch.TLCEluent, productVol)
+	evaporated.Add(ch.TLCEluent, productVol)
 
 	// Flow and time per run.
 	flow := get(KeyFrontVelocity) * area
@@ -222,7 +195,7 @@ func Run(sc *scenario.Scenario, coef source.Set, crudeKg float64) usage.Usage {
 	// Energy to evaporate: heat to warm and vaporise, over the bath's
 	// efficiency, plus the chiller's electricity to remove the same heat.
 	heat := 0.0
-	for _, id := range evaporated.ids() {
+	for _, id := range evaporated.IDs() {
 		s := mustSolvent(sc.Solvents, id)
 		m := evaporated[id] * s.Density.V
 		heat += m * (s.SpecificCp()*get(KeyBathDelta) + s.SpecificHVap())
@@ -238,8 +211,8 @@ func Run(sc *scenario.Scenario, coef source.Set, crudeKg float64) usage.Usage {
 	silicaTotal := (col.Silica + drySilica) * runs
 	sand := get(KeySandHeight) * area * get(KeySandDensity) * runs
 	tlcPlates := plateCount * runs
-	fig("solvent_total_l", "solvent used", used.total(), "L")
-	for _, id := range used.ids() {
+	fig("solvent_total_l", "solvent used", used.Total(), "L")
+	for _, id := range used.IDs() {
 		fig("solvent:"+id, "solvent: "+id, used[id], "L")
 	}
 
@@ -252,12 +225,12 @@ func Run(sc *scenario.Scenario, coef source.Set, crudeKg float64) usage.Usage {
 	// solids; the rest of the eluent, with the impurities and mixed
 	// fractions, is liquid waste; a recovered share leaves as reusable solvent.
 	retainedVol := silicaTotal * get(KeyPoreVolume)
-	liquid := volumes{}
+	liquid := scenario.Volumes{}
 	for id, v := range used {
 		liquid[id] = v
 	}
-	wetSolvent := volumes{}
-	wetSolvent.add(ch.TLCEluent, retainedVol)
+	wetSolvent := scenario.Volumes{}
+	wetSolvent.Add(ch.TLCEluent, retainedVol)
 	for id, v := range wetSolvent {
 		liquid[id] -= v
 		if liquid[id] < 0 {
@@ -265,15 +238,15 @@ func Run(sc *scenario.Scenario, coef source.Set, crudeKg float64) usage.Usage {
 			liquid[id] = 0
 		}
 	}
-	recovered := volumes{}
+	recovered := scenario.Volumes{}
 	if ch.RecoverSolvent > 0 {
 		for id, v := range liquid {
 			recovered[id] = v * ch.RecoverSolvent
 			liquid[id] -= recovered[id]
 		}
 	}
-	spent := usage.Stream{Name: "spent eluent and mixed fractions", Class: usage.NonHalogenated, VolumeM3: liquid.total()}
-	for _, id := range liquid.ids() {
+	spent := usage.Stream{Name: "spent eluent and mixed fractions", Class: usage.NonHalogenated, VolumeM3: liquid.Total()}
+	for _, id := range liquid.IDs() {
 		s := mustSolvent(sc.Solvents, id)
 		if s.Halogenated && liquid[id] > 0 {
 			spent.Class = usage.Halogenated
@@ -285,7 +258,7 @@ func Run(sc *scenario.Scenario, coef source.Set, crudeKg float64) usage.Usage {
 		usage.Component{Name: "product in mixed fractions", Kg: lostMixed})
 	wet := usage.Stream{Name: "solvent-wet silica, sand and TLC plates", Class: usage.WetSolids}
 	wet.Components = append(wet.Components, usage.Component{Name: "silica gel", Kg: silicaTotal}, usage.Component{Name: "sea sand", Kg: sand}, usage.Component{Name: "TLC plates", Kg: tlcPlates * get(KeyPlateMass)})
-	for _, id := range wetSolvent.ids() {
+	for _, id := range wetSolvent.IDs() {
 		wet.Components = append(wet.Components, usage.Component{Name: id, Kg: wetSolvent[id] * mustSolvent(sc.Solvents, id).Density.V, Solvent: true})
 	}
 	wet.Components = append(wet.Components, usage.Component{Name: "product retained on silica", Kg: lostSilica})
@@ -298,7 +271,7 @@ func Run(sc *scenario.Scenario, coef source.Set, crudeKg float64) usage.Usage {
 	}
 	d(ItemSilica, "silica gel 40–63 µm (columns and dry load)", usage.Materials, silicaTotal, units.Mass)
 	d(ItemSand, "sand layers", usage.Materials, sand, units.Mass)
-	for _, id := range used.ids() {
+	for _, id := range used.IDs() {
 		d(id, "solvent: "+id, usage.Materials, used[id], units.Volume)
 	}
 	d(ItemTLCPlate, "TLC plates for fractions", usage.Materials, tlcPlates, units.Count)
@@ -310,7 +283,7 @@ func Run(sc *scenario.Scenario, coef source.Set, crudeKg float64) usage.Usage {
 	d(ItemProduct, "product lost (mixed fractions, retained on silica)", usage.ProductLoss, lostMixed+lostSilica, units.Mass)
 	if ch.RecoverSolvent > 0 {
 		recHeat := 0.0
-		for _, id := range recovered.ids() {
+		for _, id := range recovered.IDs() {
 			s := mustSolvent(sc.Solvents, id)
 			m := recovered[id] * s.Density.V
 			recHeat += m * (s.SpecificCp()*get(KeyBathDelta) + s.SpecificHVap())

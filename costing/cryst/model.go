@@ -24,9 +24,9 @@ import (
 // Price-table items the model asks for (besides one item per solvent id and
 // the disposal items of the waste classes).
 const (
-	ItemLabour      = "chemist time"
-	ItemElectricity = "electricity"
-	ItemProduct     = "product"
+	ItemLabour      = usage.ItemLabour
+	ItemElectricity = usage.ItemElectricity
+	ItemProduct     = usage.ItemProduct
 )
 
 // Activity names, in the order they are reported.
@@ -43,32 +43,6 @@ const (
 )
 
 var activityOrder = []string{ActCharge, ActHeat, ActCool, ActFilter, ActCheck, ActClean, ActCropEvap, ActCrop, ActDry}
-
-// volumes accumulates liquid volumes (m³) by solvent id.
-type volumes map[string]float64
-
-func (v volumes) add(m scenario.Mix, vol float64) {
-	for _, p := range m {
-		v[p.Solvent] += p.Fraction * vol
-	}
-}
-
-func (v volumes) ids() []string {
-	ids := make([]string, 0, len(v))
-	for id := range v {
-		ids = append(ids, id)
-	}
-	sort.Strings(ids)
-	return ids
-}
-
-func (v volumes) total() float64 {
-	t := 0.0
-	for _, x := range v {
-		t += x
-	}
-	return t
-}
 
 // liquid is the crystallization liquid with the solvent data the model needs.
 type liquid struct {
@@ -314,7 +288,7 @@ func Run(sc *scenario.Scenario, coef source.Set, crudeKg float64) usage.Usage {
 		a.Elapsed += elapsed
 		a.Attended += elapsed * share
 	}
-	used := volumes{}
+	used := scenario.Volumes{}
 	var mlVol, washVol, heatIn, heatOut, chillHeat, coolS, heatS, filtS float64
 	var ml, wash Feed
 	batchesTotal, lastBatches, lastUA := 0, 0.0, 0.0
@@ -357,7 +331,7 @@ func Run(sc *scenario.Scenario, coef source.Set, crudeKg float64) usage.Usage {
 		// Solvent bought: the charge plus the wash, less what the wet cake of
 		// the previous pass brings along.
 		buy := math.Max(0, r.Solvent-carried) + r.Wash
-		used.add(cr.Mix, buy)
+		used.Add(cr.Mix, buy)
 		carried = r.Retained
 		mlVol += r.LiquorVolume
 		washVol += r.Wash
@@ -482,8 +456,8 @@ func Run(sc *scenario.Scenario, coef source.Set, crudeKg float64) usage.Usage {
 	fig("electricity", "electricity", electric, "kWh")
 
 	// Solvent.
-	fig("solvent_total_l", "solvent used", used.total(), "L")
-	for _, id := range used.ids() {
+	fig("solvent_total_l", "solvent used", used.Total(), "L")
+	for _, id := range used.IDs() {
 		fig("solvent:"+id, "solvent: "+id, used[id], "L")
 	}
 	fig("wash_total_l", "wash liquid used", washVol, "L")
@@ -521,7 +495,7 @@ func Run(sc *scenario.Scenario, coef source.Set, crudeKg float64) usage.Usage {
 		}
 		u.Demands = append(u.Demands, usage.Demand{Item: item, Label: label, Group: g, Qty: qty, Dim: dim})
 	}
-	for _, id := range used.ids() {
+	for _, id := range used.IDs() {
 		d(id, "solvent: "+id, usage.Materials, used[id], units.Volume)
 	}
 	d(ItemLabour, "hands-on time", usage.Labour, attended*3600, units.Time)

@@ -14,9 +14,9 @@ import (
 // Price-table items the model asks for (besides the rinse solvent by its id
 // and disposal by waste class).
 const (
-	ItemLabour      = "chemist time"
-	ItemElectricity = "electricity"
-	ItemProduct     = "product"
+	ItemLabour      = usage.ItemLabour
+	ItemElectricity = usage.ItemElectricity
+	ItemProduct     = usage.ItemProduct
 )
 
 // maxAlphaEq caps the equivalent relative volatility α^N_eq: beyond 10¹²

@@ -30,6 +30,14 @@ const (
 // Groups lists the sections in print order.
 var Groups = []Group{Materials, Labour, Energy, Disposal, ProductLoss, Credit, OneTime}
 
+// Price-table items every method asks for (solvents are priced by their id,
+// disposal by WasteClass.DisposalItem).
+const (
+	ItemLabour      = "chemist time"
+	ItemElectricity = "electricity"
+	ItemProduct     = "product" // value of the purified compound, per mass
+)
+
 // Demand is one quantity to be priced by a price-table item.
 type Demand struct {
 	Item  string    // price-table item name, e.g. "silica gel", "ethyl acetate"
