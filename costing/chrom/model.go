@@ -43,7 +43,7 @@ func Run(sc *scenario.Scenario, coef source.Set, crudeKg float64) usage.Usage {
 	dRf := math.Abs(ch.ProductRf - ch.ImpurityRf)
 	alpha := sep.Alpha()
 	fig("k_product", "retention factor k of the product", RetentionFactor(ch.ProductRf), "")
-	fig("cv_product", "product elutes at (column scenario.Volumes)", ElutionCV(ch.ProductRf), "")
+	fig("cv_product", "product elutes at (column volumes)", ElutionCV(ch.ProductRf), "")
 	fig("delta_cv", "separation ΔCV from the nearest impurity", DeltaCV(ch.ProductRf, ch.ImpurityRf), "")
 	fig("alpha", "separation factor α", alpha, "")
 	if sep.FirstIsProduct() {
@@ -140,8 +140,8 @@ func Run(sc *scenario.Scenario, coef source.Set, crudeKg float64) usage.Usage {
 	used.Add(ch.TLCEluent, elute*v0)
 	collectedCV += elute
 	eluentRun := used.Total()
-	fig("eluent_cv", "eluent per run (column scenario.Volumes)", eluentRun/v0, "")
-	fig("band_cv", "product band width (column scenario.Volumes)", band, "")
+	fig("eluent_cv", "eluent per run (column volumes)", eluentRun/v0, "")
+	fig("band_cv", "product band width (column volumes)", band, "")
 
 	loadMix := ch.TLCEluent
 	if ch.LoadingSolvent != "" {
