@@ -8,8 +8,10 @@ import (
 
 	"github.com/spf13/cobra"
 
+	"sepcost/costing"
 	"sepcost/costing/prices"
 	"sepcost/costing/scenario"
+	"sepcost/scale"
 	"sepcost/templates"
 )
 
@@ -87,4 +89,13 @@ func runDemo(_ context.Context, opts *demoOptions, stdout, stderr io.Writer) err
 		fmt.Fprintf(stderr, "\nwrote %s (open it in a spreadsheet program; every cost cell is a live formula on the Prices sheet)\n", opts.out)
 	}
 	return nil
+}
+
+// buildReport prepares the plan and runs it at the masses.
+func buildReport(sc *scenario.Scenario, t *prices.Table, masses []float64) (*scale.Report, error) {
+	plan, err := costing.Prepare(sc)
+	if err != nil {
+		return nil, err
+	}
+	return scale.Estimate(plan, t, masses)
 }

@@ -7,9 +7,6 @@ import (
 
 	"github.com/spf13/cobra"
 
-	"sepcost/costing"
-	"sepcost/costing/prices"
-	"sepcost/costing/scenario"
 	"sepcost/scale"
 )
 
@@ -71,22 +68,11 @@ func runEstimate(_ context.Context, opts *estimateOptions, stdout, stderr io.Wri
 	if err != nil {
 		return err
 	}
-	sc, err := loadScenario(opts.scenario)
+	plan, t, err := loadPlan(opts.scenario, opts.prices)
 	if err != nil {
 		return err
 	}
-	t, err := loadPrices(opts.prices, opts.scenario)
-	if err != nil {
-		return err
-	}
-	masses := sc.MassesKg
-	if opts.masses.set {
-		masses = opts.masses.kg
-	}
-	plan, err := costing.Prepare(sc)
-	if err != nil {
-		return err
-	}
+	masses := massesOr(opts.masses, plan.Scenario)
 	r, err := scale.EstimateWith(plan, t, masses, scale.Options{Draws: opts.draws, Seed: opts.seed, Progress: newProgress(stderr, opts.draws)})
 	if err != nil {
 		return err
@@ -94,11 +80,3 @@ func runEstimate(_ context.Context, opts *estimateOptions, stdout, stderr io.Wri
 	return deliver(r, format, opts.out, opts.force, stdout, stderr)
 }
 
-// buildReport prepares the plan and runs it at the masses.
-func buildReport(sc *scenario.Scenario, t *prices.Table, masses []float64) (*scale.Report, error) {
-	plan, err := costing.Prepare(sc)
-	if err != nil {
-		return nil, err
-	}
-	return scale.Estimate(plan, t, masses)
-}

@@ -11,6 +11,7 @@ import (
 
 	"sepcost/cmd/sepcost/internal/plain"
 	"sepcost/cmd/sepcost/internal/workbook"
+	"sepcost/costing"
 	"sepcost/costing/prices"
 	"sepcost/costing/scenario"
 	"sepcost/scale"
@@ -77,6 +78,37 @@ func deliver(r *scale.Report, format, out string, force bool, stdout, stderr io.
 	if err != nil {
 		return err
 	}
+	return writeOut(buf, out, force, stdout, stderr)
+}
+
+// loadPlan reads a scenario and its price table and prepares the plan.
+func loadPlan(scenarioPath, pricesPath string) (*costing.Plan, *prices.Table, error) {
+	sc, err := loadScenario(scenarioPath)
+	if err != nil {
+		return nil, nil, err
+	}
+	t, err := loadPrices(pricesPath, scenarioPath)
+	if err != nil {
+		return nil, nil, err
+	}
+	plan, err := costing.Prepare(sc)
+	if err != nil {
+		return nil, nil, err
+	}
+	return plan, t, nil
+}
+
+// massesOr is the --mass list when given, else the scenario's masses.
+func massesOr(m massList, sc *scenario.Scenario) []float64 {
+	if m.set {
+		return m.kg
+	}
+	return sc.MassesKg
+}
+
+// writeOut writes rendered output to the -o file (saying so on stderr) or
+// to stdout.
+func writeOut(buf *bytes.Buffer, out string, force bool, stdout, stderr io.Writer) error {
 	if err := emit(buf, out, force, stdout); err != nil {
 		return err
 	}

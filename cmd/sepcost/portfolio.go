@@ -3,7 +3,6 @@ package main
 import (
 	"bytes"
 	"context"
-	"fmt"
 	"io"
 	"path/filepath"
 
@@ -92,11 +91,5 @@ func runPortfolio(_ context.Context, opts *portfolioOptions, stdout, stderr io.W
 	if err != nil {
 		return err
 	}
-	if err := emit(&buf, opts.out, opts.force, stdout); err != nil {
-		return err
-	}
-	if opts.out != "" && opts.out != "-" {
-		fmt.Fprintf(stderr, "wrote %s\n", opts.out)
-	}
-	return nil
+	return writeOut(&buf, opts.out, opts.force, stdout, stderr)
 }

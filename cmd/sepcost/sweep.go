@@ -7,7 +7,6 @@ import (
 
 	"github.com/spf13/cobra"
 
-	"sepcost/costing"
 	"sepcost/costing/units"
 	"sepcost/scale"
 )
@@ -71,15 +70,7 @@ func runSweep(_ context.Context, opts *sweepOptions, stdout, stderr io.Writer) e
 	if err != nil {
 		return usageError{err}
 	}
-	sc, err := loadScenario(opts.scenario)
-	if err != nil {
-		return err
-	}
-	t, err := loadPrices(opts.prices, opts.scenario)
-	if err != nil {
-		return err
-	}
-	plan, err := costing.Prepare(sc)
+	plan, t, err := loadPlan(opts.scenario, opts.prices)
 	if err != nil {
 		return err
 	}

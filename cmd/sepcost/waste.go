@@ -3,14 +3,12 @@ package main
 import (
 	"bytes"
 	"context"
-	"fmt"
 	"io"
 
 	"github.com/spf13/cobra"
 
 	"sepcost/cmd/sepcost/internal/plain"
 	"sepcost/cmd/sepcost/internal/workbook"
-	"sepcost/costing"
 	"sepcost/scale"
 )
 
@@ -52,22 +50,11 @@ func runWaste(_ context.Context, opts *wasteOptions, stdout, stderr io.Writer) e
 	if err != nil {
 		return err
 	}
-	sc, err := loadScenario(opts.scenario)
+	plan, t, err := loadPlan(opts.scenario, opts.prices)
 	if err != nil {
 		return err
 	}
-	t, err := loadPrices(opts.prices, opts.scenario)
-	if err != nil {
-		return err
-	}
-	masses := sc.MassesKg
-	if opts.masses.set {
-		masses = opts.masses.kg
-	}
-	plan, err := costing.Prepare(sc)
-	if err != nil {
-		return err
-	}
+	masses := massesOr(opts.masses, plan.Scenario)
 	r, err := scale.Estimate(plan, t, masses)
 	if err != nil {
 		return err
@@ -86,11 +73,5 @@ func runWaste(_ context.Context, opts *wasteOptions, stdout, stderr io.Writer) e
 	if err != nil {
 		return err
 	}
-	if err := emit(&buf, opts.out, opts.force, stdout); err != nil {
-		return err
-	}
-	if opts.out != "" && opts.out != "-" {
-		fmt.Fprintf(stderr, "wrote %s\n", opts.out)
-	}
-	return nil
+	return writeOut(&buf, opts.out, opts.force, stdout, stderr)
 }
