@@ -95,7 +95,7 @@ func buildUncertainty(g *grid, st *styles, r *scale.Report) {
 			// with the reason where the decision records one.
 			text := "not feasible in any draw"
 			if d := r.Decision; d != nil && d.Infeasible[b.Method] != "" {
-				text = "not feasible at this mass: " + d.Infeasible[b.Method]
+				text = notFeasible(d.Infeasible[b.Method])
 			}
 			mergedCell(g, row, uP10, uP90, cell{value: text, style: st.wrap, wrap: true})
 		}
