@@ -129,7 +129,8 @@ func (l liquid) components(V float64) []usage.Component {
 // few hundred milligrams and wins at kilograms.
 func Run(sc *scenario.Scenario, coef source.Set, crudeKg float64) usage.Usage {
 	cr := sc.Crystallization
-	u := usage.Usage{Method: Method, CrudeKg: crudeKg, ProductInKg: crudeKg * sc.Purity, Feasible: true}
+	u := usage.Usage{Method: Method, CrudeKg: crudeKg, ProductInKg: crudeKg * sc.Purity, Feasible: true,
+		Figures: make([]usage.Figure, 0, 64), Demands: make([]usage.Demand, 0, 16)}
 	note := func(l usage.Level, format string, a ...any) {
 		u.Notes = append(u.Notes, usage.Note{Level: l, Text: fmt.Sprintf(format, a...)})
 	}

@@ -29,7 +29,8 @@ const maxAlphaEq = 1e12
 // distillation section gives an infeasible usage saying so.
 func Run(sc *scenario.Scenario, coef source.Set, crudeKg float64) usage.Usage {
 	d := sc.Distillation
-	u := usage.Usage{Method: Method, CrudeKg: crudeKg, Feasible: true}
+	u := usage.Usage{Method: Method, CrudeKg: crudeKg, Feasible: true,
+		Figures: make([]usage.Figure, 0, 64), Demands: make([]usage.Demand, 0, 16)}
 	if d == nil {
 		u.Feasible = false
 		u.Reason = "the scenario has no distillation section"

@@ -104,7 +104,7 @@ func PriceAll(us []usage.Usage, t *prices.Table) ([]Ledger, error) {
 // returning the other problems.
 func price(u usage.Usage, t *prices.Table, miss *missingSet) (Ledger, []error) {
 	places := prices.MinorUnits(t.Currency)
-	l := Ledger{Currency: t.Currency, Places: places, Total: decimal.Zero}
+	l := Ledger{Currency: t.Currency, Places: places, Total: decimal.Zero, Lines: make([]Line, 0, len(u.Demands))}
 	var errs []error
 	for _, d := range u.Demands {
 		if strings.TrimSpace(d.Item) == "" {
