@@ -298,7 +298,7 @@ func Run(sc *scenario.Scenario, coef source.Set, crudeKg float64) usage.Usage {
 
 // mustSolvent returns a solvent the scenario has already checked exists.
 func mustSolvent(b *solvent.Book, id string) solvent.Solvent {
-	s, ok := b.Find(id)
+	s, ok := b.View(id)
 	if !ok {
 		panic("chrom: solvent " + id + " was not checked by the scenario reader")
 	}

@@ -575,7 +575,7 @@ func b2f(b bool) float64 {
 
 // mustSolvent returns a solvent the scenario has already checked exists.
 func mustSolvent(b *solvent.Book, id string) solvent.Solvent {
-	s, ok := b.Find(id)
+	s, ok := b.View(id)
 	if !ok {
 		panic("cryst: solvent " + id + " was not checked by the scenario reader")
 	}

@@ -113,7 +113,7 @@ func Compute(u usage.Usage, book *solvent.Book) (Metrics, error) {
 			_, err = fail(field, "quantity %g; want a finite number", d.Qty)
 			return
 		}
-		s, isSolvent = book.Find(d.Item)
+		s, isSolvent = book.View(d.Item)
 		switch d.Dim {
 		case units.Mass:
 			return d.Qty, s, isSolvent, true, nil
@@ -183,7 +183,7 @@ func Compute(u usage.Usage, book *solvent.Book) (Metrics, error) {
 				return fail(fmt.Sprintf("waste stream %q, component %q", st.Name, c.Name), "%g kg; want a finite mass of 0 kg or more", c.Kg)
 			}
 			m.WasteKg += c.Kg
-			if s, ok := book.Find(c.Name); ok && isWater(s) {
+			if s, ok := book.View(c.Name); ok && isWater(s) {
 				m.WaterWasteKg += c.Kg
 			}
 		}

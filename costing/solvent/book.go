@@ -30,7 +30,28 @@ func Builtin() *Book {
 // normName is the form in which names are compared: trimmed, inner runs of
 // white space collapsed to one space, lower case.
 func normName(name string) string {
+	if plainName(name) {
+		return name // already in normal form: no allocation in hot lookups
+	}
 	return strings.ToLower(strings.Join(strings.Fields(name), " "))
+}
+
+// plainName reports whether a name is already lower case ASCII with single
+// inner spaces and none at the ends.
+func plainName(name string) bool {
+	if name == "" || name[0] == ' ' || name[len(name)-1] == ' ' {
+		return false
+	}
+	for i := 0; i < len(name); i++ {
+		c := name[i]
+		switch {
+		case c >= 'A' && c <= 'Z', c >= 0x80, c == '\t', c == '\n', c == '\r', c == '\v', c == '\f':
+			return false
+		case c == ' ' && name[i-1] == ' ':
+			return false
+		}
+	}
+	return true
 }
 
 // Find looks a solvent up by ID or alias, ignoring case and outer spaces
@@ -45,6 +66,20 @@ func (b *Book) Find(name string) (Solvent, bool) {
 		return Solvent{}, false
 	}
 	return b.byID[id].clone(), true
+}
+
+// View is Find without the copy, for models that look solvents up in
+// inner loops: the returned solvent shares its Aliases and Antoine slices
+// with the Book, and callers must treat them as read-only.
+func (b *Book) View(name string) (Solvent, bool) {
+	if b == nil || b.byName == nil {
+		return Solvent{}, false
+	}
+	id, ok := b.byName[normName(name)]
+	if !ok {
+		return Solvent{}, false
+	}
+	return b.byID[id], true
 }
 
 // Add adds a solvent, or replaces the one with the same ID. It runs

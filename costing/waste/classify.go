@@ -203,7 +203,7 @@ func analyse(s usage.Stream, book *solvent.Book, c *Classification) analysis {
 		if !comp.Solvent || comp.Kg == 0 {
 			continue
 		}
-		sv, ok := book.Find(comp.Name)
+		sv, ok := book.View(comp.Name)
 		if !ok {
 			c.Problems = append(c.Problems, fmt.Sprintf("stream %q, component %q is marked as a solvent but is not in the solvent book; its halogen content, flash point and listings are unknown, so codes may be missing (add the solvent to the scenario)", s.Name, comp.Name))
 			continue
@@ -328,7 +328,7 @@ func (a analysis) blends(s usage.Stream, book *solvent.Book, given []Blend, c *C
 				c.Problems = append(c.Problems, fmt.Sprintf("stream %q, blend %q, part %q: %g; want a finite volume or volume fraction of 0 or more (part left out)", s.Name, name, k, v))
 				continue
 			}
-			sv, ok := book.Find(k)
+			sv, ok := book.View(k)
 			if !ok {
 				c.Problems = append(c.Problems, fmt.Sprintf("stream %q, blend %q, part %q is not in the solvent book; its listing is unknown (part left out)", s.Name, name, k))
 				continue
