@@ -79,4 +79,3 @@ func runEstimate(_ context.Context, opts *estimateOptions, stdout, stderr io.Wri
 	}
 	return deliver(r, format, opts.out, opts.force, stdout, stderr)
 }
-
