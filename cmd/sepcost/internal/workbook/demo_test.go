@@ -14,8 +14,17 @@ import (
 // demoReport runs the built-in demo scenario with the example prices
 // through the real models and ledger, as `sepcost demo` does.
 func demoReport(t *testing.T) *scale.Report {
+	return demoReportOf(t, templates.Scenario, "built-in demo scenario")
+}
+
+// liquidDemoReport runs the second demo, a liquid product with a distillation.
+func liquidDemoReport(t *testing.T) *scale.Report {
+	return demoReportOf(t, templates.Liquid, "built-in liquid demo scenario")
+}
+
+func demoReportOf(t *testing.T, yaml []byte, name string) *scale.Report {
 	t.Helper()
-	sc, err := scenario.Load(bytes.NewReader(templates.Scenario), "built-in demo scenario")
+	sc, err := scenario.Load(bytes.NewReader(yaml), name)
 	if err != nil {
 		t.Fatal(err)
 	}

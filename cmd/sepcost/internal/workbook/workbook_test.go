@@ -90,6 +90,7 @@ func TestGolden(t *testing.T) {
 		{"workbook-fixture.txt", fixtureReport(), nil},
 		{"workbook-two-methods.txt", twoMethodReport(), nil},
 		{"workbook-demo.txt", demoReport(t), nil},
+		{"workbook-demo-liquid.txt", liquidDemoReport(t), nil},
 		// A sweep with detail sheets: Scale-up totals refer to them.
 		{"workbook-sweep.txt", sweepReport(), nil},
 		// A sweep of more masses than get detail sheets: the Scale-up
@@ -351,7 +352,7 @@ func TestLibreOfficeRecalculation(t *testing.T) {
 	}
 	dir := t.TempDir()
 	out := filepath.Join(dir, "out")
-	reports := map[string]*scale.Report{"fixture": fixtureReport(), "two-methods": twoMethodReport(), "demo": demoReport(t),
+	reports := map[string]*scale.Report{"fixture": fixtureReport(), "two-methods": twoMethodReport(), "demo": demoReport(t), "demo-liquid": liquidDemoReport(t),
 		// Sweeps: Scale-up totals that refer to the method sheets, and
 		// (many masses) totals that are sums of ROUND terms on the prices.
 		"sweep": sweepReport(), "sweep-many": syntheticSweep(40, 2)}
