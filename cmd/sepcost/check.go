@@ -5,6 +5,7 @@ import (
 	"errors"
 	"fmt"
 	"io"
+	"strings"
 
 	"github.com/spf13/cobra"
 
@@ -83,7 +84,10 @@ func runCheck(_ context.Context, opts *checkOptions, stdout io.Writer) error {
 	for i, m := range sc.MassesKg {
 		for j, name := range plan.MethodNames() {
 			u := results[i][j].Usage
-			if !u.Feasible {
+			switch {
+			case !u.Feasible && strings.HasPrefix(u.Reason, costing.NotAssessed):
+				fmt.Fprintf(stdout, "%s, %s: %s\n", scenario.FormatMass(m), name, u.Reason)
+			case !u.Feasible:
 				fmt.Fprintf(stdout, "%s, %s: not feasible: %s\n", scenario.FormatMass(m), name, u.Reason)
 				warned++
 			}

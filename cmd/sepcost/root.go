@@ -33,9 +33,13 @@ func newRootCommand() *cobra.Command {
 	root := &cobra.Command{
 		Use:   "sepcost",
 		Short: "Cost the purification of a compound from milligrams to kilograms",
-		Long: `sepcost reads a scenario (TLC Rf values and eluent, crude purity, batch masses)
-and a price table, models flash chromatography on silica at each batch mass,
-and writes the plan: silica, columns, solvent, time, waste, cost and cautions.`,
+		Long: `sepcost reads a scenario (TLC Rf values and eluent, solubility data, boiling
+points, crude purity, batch masses) and a price table, models flash
+chromatography, recrystallization and distillation at each batch mass, finds
+where the cheapest method changes, and writes the plan: materials, time,
+waste with suggested codes, cost, the decision, uncertainty and cautions.
+
+Start with ` + "`sepcost demo`" + `, then ` + "`sepcost init mycase`" + ` to get files to edit.`,
 		SilenceUsage:  true,
 		SilenceErrors: true,
 	}

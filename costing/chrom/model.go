@@ -41,7 +41,9 @@ func Run(sc *scenario.Scenario, coef source.Set, crudeKg float64) usage.Usage {
 
 	// TLC to column.
 	sep := Separation{ProductRf: ch.ProductRf, ImpurityRf: ch.ImpurityRf, Product: sc.Purity, Impurity: sc.NearestImpurity}
-	dRf := math.Abs(ch.ProductRf - ch.ImpurityRf)
+	// Rounded to 1e-9 so that Rf values written to two places (0.35 − 0.25)
+	// compare as the chemist wrote them, not as 0.0999999….
+	dRf := math.Round(math.Abs(ch.ProductRf-ch.ImpurityRf)*1e9) / 1e9
 	alpha := sep.Alpha()
 	fig("k_product", "retention factor k of the product", RetentionFactor(ch.ProductRf), "")
 	fig("cv_product", "product elutes at (column volumes)", ElutionCV(ch.ProductRf), "")
