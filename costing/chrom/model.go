@@ -26,17 +26,9 @@ const (
 // plate number (AddCalibration).
 func Run(sc *scenario.Scenario, coef source.Set, crudeKg float64) usage.Usage {
 	ch := sc.Chromatography
-	u := usage.Usage{Method: Method, CrudeKg: crudeKg, ProductInKg: crudeKg * sc.Purity, Feasible: true,
-		Figures: make([]usage.Figure, 0, 64), Demands: make([]usage.Demand, 0, 16)}
-	note := func(l usage.Level, format string, a ...any) {
-		u.Notes = append(u.Notes, usage.Note{Level: l, Text: fmt.Sprintf(format, a...)})
-	}
-	fig := func(key, label string, si float64, unit string) {
-		if math.IsNaN(si) || math.IsInf(si, 0) {
-			return
-		}
-		u.Figures = append(u.Figures, usage.Figure{Key: key, Label: label, SI: si, Unit: unit})
-	}
+	u := usage.New(Method, crudeKg, crudeKg*sc.Purity)
+	note := u.Notef
+	fig := u.AddFigure
 	get := coef.Get
 
 	// TLC to column.
@@ -269,9 +261,7 @@ func Run(sc *scenario.Scenario, coef source.Set, crudeKg float64) usage.Usage {
 
 	// Demands for the ledger.
 	_, attended := u.Hours()
-	d := func(item, label string, g usage.Group, qty float64, dim units.Dim) {
-		u.Demands = append(u.Demands, usage.Demand{Item: item, Label: label, Group: g, Qty: qty, Dim: dim})
-	}
+	d := u.AddDemand
 	d(ItemSilica, "silica gel 40–63 µm (columns and dry load)", usage.Materials, silicaTotal, units.Mass)
 	d(ItemSand, "sand layers", usage.Materials, sand, units.Mass)
 	for _, id := range used.IDs() {

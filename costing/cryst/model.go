@@ -129,17 +129,9 @@ func (l liquid) components(V float64) []usage.Component {
 // few hundred milligrams and wins at kilograms.
 func Run(sc *scenario.Scenario, coef source.Set, crudeKg float64) usage.Usage {
 	cr := sc.Crystallization
-	u := usage.Usage{Method: Method, CrudeKg: crudeKg, ProductInKg: crudeKg * sc.Purity, Feasible: true,
-		Figures: make([]usage.Figure, 0, 64), Demands: make([]usage.Demand, 0, 16)}
-	note := func(l usage.Level, format string, a ...any) {
-		u.Notes = append(u.Notes, usage.Note{Level: l, Text: fmt.Sprintf(format, a...)})
-	}
-	fig := func(key, label string, si float64, unit string) {
-		if math.IsNaN(si) || math.IsInf(si, 0) {
-			return
-		}
-		u.Figures = append(u.Figures, usage.Figure{Key: key, Label: label, SI: si, Unit: unit})
-	}
+	u := usage.New(Method, crudeKg, crudeKg*sc.Purity)
+	note := u.Notef
+	fig := u.AddFigure
 	get := coef.Get
 	or := func(p *float64, key string) float64 {
 		if p != nil {
@@ -490,12 +482,7 @@ func Run(sc *scenario.Scenario, coef source.Set, crudeKg float64) usage.Usage {
 	}
 
 	// Demands for the ledger.
-	d := func(item, label string, g usage.Group, qty float64, dim units.Dim) {
-		if math.IsNaN(qty) || math.IsInf(qty, 0) {
-			return
-		}
-		u.Demands = append(u.Demands, usage.Demand{Item: item, Label: label, Group: g, Qty: qty, Dim: dim})
-	}
+	d := u.AddDemand
 	for _, id := range used.IDs() {
 		d(id, "solvent: "+id, usage.Materials, used[id], units.Volume)
 	}

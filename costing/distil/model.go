@@ -29,23 +29,15 @@ const maxAlphaEq = 1e12
 // distillation section gives an infeasible usage saying so.
 func Run(sc *scenario.Scenario, coef source.Set, crudeKg float64) usage.Usage {
 	d := sc.Distillation
-	u := usage.Usage{Method: Method, CrudeKg: crudeKg, Feasible: true,
-		Figures: make([]usage.Figure, 0, 64), Demands: make([]usage.Demand, 0, 16)}
+	u := usage.New(Method, crudeKg, 0)
 	if d == nil {
 		u.Feasible = false
 		u.Reason = "the scenario has no distillation section"
 		return u
 	}
 	u.ProductInKg = crudeKg * d.FeedPurity
-	note := func(l usage.Level, format string, a ...any) {
-		u.Notes = append(u.Notes, usage.Note{Level: l, Text: fmt.Sprintf(format, a...)})
-	}
-	fig := func(key, label string, si float64, unit string) {
-		if math.IsNaN(si) || math.IsInf(si, 0) {
-			return
-		}
-		u.Figures = append(u.Figures, usage.Figure{Key: key, Label: label, SI: si, Unit: unit})
-	}
+	note := u.Notef
+	fig := u.AddFigure
 	fail := func(format string, a ...any) usage.Usage {
 		u.Feasible = false
 		u.Reason = fmt.Sprintf(format, a...)
@@ -445,9 +437,7 @@ func Run(sc *scenario.Scenario, coef source.Set, crudeKg float64) usage.Usage {
 
 	// Demands for the ledger.
 	_, attended := u.Hours()
-	dm := func(item, label string, g usage.Group, qty float64, dim units.Dim) {
-		u.Demands = append(u.Demands, usage.Demand{Item: item, Label: label, Group: g, Qty: qty, Dim: dim})
-	}
+	dm := u.AddDemand
 	if rinse > 0 {
 		dm(d.RinseSolvent, "rinse solvent: "+d.RinseSolvent, usage.Materials, rinse, units.Volume)
 	}

@@ -7,6 +7,7 @@ package usage
 
 import (
 	"fmt"
+	"math"
 	"sort"
 	"strings"
 
@@ -152,6 +153,32 @@ type Usage struct {
 	Waste        []Stream
 	Activities   []Activity
 	Notes        []Note
+}
+
+// New starts the usage of a method at a crude mass, feasible until a model
+// says otherwise.
+func New(method string, crudeKg, productInKg float64) Usage {
+	return Usage{Method: method, CrudeKg: crudeKg, ProductInKg: productInKg, Feasible: true,
+		Figures: make([]Figure, 0, 64), Demands: make([]Demand, 0, 16)}
+}
+
+// Notef adds a note.
+func (u *Usage) Notef(l Level, format string, a ...any) {
+	u.Notes = append(u.Notes, Note{Level: l, Text: fmt.Sprintf(format, a...)})
+}
+
+// AddFigure adds a figure; a NaN or infinite value is left out (never shown).
+func (u *Usage) AddFigure(key, label string, si float64, unit string) {
+	if math.IsNaN(si) || math.IsInf(si, 0) {
+		return
+	}
+	u.Figures = append(u.Figures, Figure{Key: key, Label: label, SI: si, Unit: unit})
+}
+
+// AddDemand adds a quantity to be priced. A NaN or infinite quantity is
+// kept, so that the ledger refuses it loudly rather than a cost going missing.
+func (u *Usage) AddDemand(item, label string, g Group, qty float64, dim units.Dim) {
+	u.Demands = append(u.Demands, Demand{Item: item, Label: label, Group: g, Qty: qty, Dim: dim})
 }
 
 // Hours returns total elapsed and attended hours.
