@@ -10,6 +10,8 @@ import (
 	"sepcost/costing"
 	"sepcost/costing/prices"
 	"sepcost/costing/scenario"
+	"sepcost/costing/source"
+	"sepcost/costing/units"
 	"sepcost/costing/usage"
 )
 
@@ -132,6 +134,20 @@ func Decide(p *costing.Plan, t *prices.Table, targetKg float64) (*Decision, erro
 		d.Explanation = append(d.Explanation, fmt.Sprintf("No price of the largest cost items within a factor of %g of today's would change the answer.", FlipRange))
 	}
 	return d, nil
+}
+
+// DecisionCoefficients lists the decision's own thresholds for the Sources
+// sheet.
+func DecisionCoefficients() []source.Coefficient {
+	c := func(key, label string, v float64, src string) source.Coefficient {
+		return source.Coefficient{Key: key, Method: "decision", Label: label, SI: v, Dim: units.None, Source: src, Mark: source.CommonPractice}
+	}
+	return []source.Coefficient{
+		c("decision.tie_margin", "relative difference in cost per gram below which methods tie", TieMargin, "inputs such as Rf values, solubilities and prices are rarely known better than about ±15 %"),
+		c("decision.flip_range", "largest price change (factor) reported as a plausible flip", FlipRange, "a tenfold move is beyond what a budget plans for"),
+		c("decision.confident_share", "share of Monte Carlo draws the winner must be cheapest in", ConfidentShare, "four draws in five"),
+		c("uncertainty.price_spread", "σ of ln(price) in the Monte Carlo draws", PriceSpread, "quotes and catalogue prices drift by about a tenth within a budget year"),
+	}
 }
 
 // FlipRange bounds the break-even prices worth reporting: a price would have

@@ -51,6 +51,7 @@ func EstimateWith(p *costing.Plan, t *prices.Table, massesKg []float64, opt Opti
 	r.WasteSector = sc.WasteSector.String()
 	r.Coefficients = append(r.Coefficients, waste.Sources()...)
 	r.Coefficients = append(r.Coefficients, green.Sources()...)
+	r.Coefficients = append(r.Coefficients, DecisionCoefficients()...)
 	if r.Decision, err = Decide(p, t, sc.TargetKg); err != nil {
 		return nil, err
 	}
