@@ -6,6 +6,7 @@ package source
 import (
 	"fmt"
 	"sort"
+	"strings"
 
 	"sepcost/costing/units"
 )
@@ -84,13 +85,13 @@ func (s Set) Put(c Coefficient) { s[c.Key] = c }
 func (s Set) Override(key string, q units.Quantity, raw string) error {
 	c, ok := s[key]
 	if !ok {
-		return fmt.Errorf("unknown model setting %q; valid settings: %v", key, s.Keys())
+		return fmt.Errorf("unknown model setting %q; valid settings: %s", key, strings.Join(s.Keys(), ", "))
 	}
 	if q.Dim != c.Dim {
 		return fmt.Errorf("%q is %s but %s needs %s", raw, q.Dim.Name(), key, units.Accepted(c.Dim))
 	}
-	c.SI = q.SI
 	c.Source = "set in the scenario (default was " + c.String() + "; " + c.Source + ")"
+	c.SI = q.SI
 	c.Mark = Override
 	s[key] = c
 	return nil

@@ -1,0 +1,37 @@
+package usage
+
+import (
+	"math"
+	"testing"
+
+	"sepcost/costing/units"
+)
+
+// Totals are sums (identities); NaN figures are never kept; composition
+// lists the largest component first, as shares of the stream's mass.
+func TestUsageHelpers(t *testing.T) {
+	u := New("m", 1, 0.8)
+	u.AddFigure("ok", "ok", 2, "")
+	u.AddFigure("nan", "nan", math.NaN(), "")
+	u.AddFigure("inf", "inf", math.Inf(1), "")
+	if len(u.Figures) != 1 {
+		t.Errorf("figures %v", u.Figures)
+	}
+	u.AddDemand("silica gel", "silica", Materials, 0.5, units.Mass)
+	u.Activities = []Activity{{"a", 3600, 1800}, {"b", 7200, 0}}
+	el, at := u.Hours()
+	if el != 3 || at != 0.5 {
+		t.Errorf("hours %g %g", el, at)
+	}
+	s := Stream{Name: "spent eluent", Class: NonHalogenated, Components: []Component{{"ethyl acetate", 1, true}, {"n-heptane", 3, true}}}
+	u.Waste = []Stream{s, {Name: "silica", Class: WetSolids, Components: []Component{{"silica gel", 2, false}}}}
+	if u.WasteKg() != 6 || s.Kg() != 4 {
+		t.Errorf("waste %g", u.WasteKg())
+	}
+	if got := s.Composition(); got != "n-heptane 75 %; ethyl acetate 25 %" {
+		t.Errorf("composition %q", got)
+	}
+	if s.DisposalLabel() != "disposal: spent eluent" || NonHalogenated.DisposalItem() != "disposal: non-halogenated solvent" {
+		t.Errorf("labels")
+	}
+}
