@@ -99,18 +99,7 @@ func TestLoadBad(t *testing.T) {
 	}
 	for _, c := range cases {
 		t.Run(c.name, func(t *testing.T) {
-			_, err := Load(strings.NewReader(c.yaml), "bad.yaml")
-			if err == nil {
-				t.Fatal("accepted")
-			}
-			if !errors.Is(err, ErrInvalid) {
-				t.Errorf("error does not unwrap to ErrInvalid: %v", err)
-			}
-			for _, w := range c.want {
-				if !strings.Contains(err.Error(), w) {
-					t.Errorf("error %q lacks %q", err, w)
-				}
-			}
+			expectProblems(t, c.yaml, "bad.yaml", c.want)
 		})
 	}
 }
@@ -134,4 +123,22 @@ func FuzzLoad(f *testing.F) {
 			t.Fatal("nil scenario without error")
 		}
 	})
+}
+
+// expectProblems loads a bad scenario and checks that the error unwraps to
+// ErrInvalid and names everything in want (file, line, field, what is valid).
+func expectProblems(t *testing.T, yaml, file string, want []string) {
+	t.Helper()
+	_, err := Load(strings.NewReader(yaml), file)
+	if err == nil {
+		t.Fatal("accepted")
+	}
+	if !errors.Is(err, ErrInvalid) {
+		t.Errorf("error does not unwrap to ErrInvalid: %v", err)
+	}
+	for _, w := range want {
+		if !strings.Contains(err.Error(), w) {
+			t.Errorf("error %q lacks %q", err, w)
+		}
+	}
 }

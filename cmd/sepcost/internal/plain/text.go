@@ -59,8 +59,7 @@ func Text(w io.Writer, r *scale.Report) error {
 			}
 			fmt.Fprintf(tw, "  TOTAL\t%s %s\n", res.Ledger.Total.StringFixed(res.Ledger.Places), res.Ledger.Currency)
 			if u.ProductOutKg > 0 {
-				perG := res.Ledger.Total.InexactFloat64() / (u.ProductOutKg * 1000)
-				fmt.Fprintf(tw, "  per gram of purified product\t%.2f %s/g\n", perG, res.Ledger.Currency)
+				fmt.Fprintf(tw, "  per gram of purified product\t%.2f %s/g\n", res.PerGram(), res.Ledger.Currency)
 			}
 			if err := tw.Flush(); err != nil {
 				return err
