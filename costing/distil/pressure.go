@@ -1,8 +1,6 @@
 package distil
 
 import (
-	"math"
-
 	"sepcost/costing/solvent"
 )
 
@@ -40,27 +38,8 @@ func OperatingPressures(psatHeavyAtMax, stages, dpStage float64) Pressures {
 //
 //	x P_L^sat(T) + (1 − x) P_H^sat(T) = p
 //
-// found by bisection between the two pure boiling points at p. NaN when
-// either boiling point is undefined.
+// (solvent.BubblePoint for the pair). NaN when either boiling point is
+// undefined.
 func BubblePoint(x float64, light, heavy solvent.Solvent, p float64) float64 {
-	tl, _ := light.BoilingPointAt(p)
-	th, _ := heavy.BoilingPointAt(p)
-	if math.IsNaN(tl) || math.IsNaN(th) {
-		return math.NaN()
-	}
-	lo, hi := math.Min(tl, th), math.Max(tl, th)
-	f := func(T float64) float64 {
-		pl, _ := light.VaporPressure(T)
-		ph, _ := heavy.VaporPressure(T)
-		return x*pl + (1-x)*ph - p
-	}
-	for i := 0; i < 100; i++ {
-		mid := (lo + hi) / 2
-		if f(mid) > 0 {
-			hi = mid
-		} else {
-			lo = mid
-		}
-	}
-	return (lo + hi) / 2
+	return solvent.BubblePoint([]solvent.Solvent{light, heavy}, []float64{x, 1 - x}, p)
 }

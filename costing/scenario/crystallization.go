@@ -611,8 +611,8 @@ func (c *collector) crystSolute(r *rawCrystSolute, field string, line int, nSolv
 //
 //	Σ x_i · p_i(T) = 101 325 Pa,  x_i = (φ_i ρ_i / M_i) / Σ_j (φ_j ρ_j / M_j)
 //
-// with p_i from solvent.VaporPressure (Antoine, or Clausius–Clapeyron),
-// solved by bisection between the components' boiling points. Real pairs
+// solved by solvent.BubblePoint; where that finds no root, the lower
+// boiling point is taken (the cautious choice). Real pairs
 // deviate (ethanol–water forms an azeotrope boiling at 78.2 °C, from
 // memory); the check it serves allows for that by refusing only
 // temperatures above the bubble point.
@@ -621,33 +621,13 @@ func bubblePoint(ss []solvent.Solvent, fr []float64) float64 {
 		return ss[0].BoilingPoint.V
 	}
 	x := make([]float64, len(ss))
-	sum := 0.0
-	lo, hi := math.Inf(1), math.Inf(-1)
+	lowest := math.Inf(1)
 	for i, s := range ss {
 		x[i] = fr[i] * s.Density.V / s.MolarMass()
-		sum += x[i]
-		lo = math.Min(lo, s.BoilingPoint.V)
-		hi = math.Max(hi, s.BoilingPoint.V)
+		lowest = math.Min(lowest, s.BoilingPoint.V)
 	}
-	f := func(T float64) float64 {
-		p := 0.0
-		for i, s := range ss {
-			pi, _ := s.VaporPressure(T)
-			p += x[i] / sum * pi
-		}
-		return p - solvent.StandardPressure
+	if t := solvent.BubblePoint(ss, x, solvent.StandardPressure); !math.IsNaN(t) {
+		return t
 	}
-	lo, hi = lo-1, hi+1
-	if math.IsNaN(f(lo)) || math.IsNaN(f(hi)) || f(lo) > 0 || f(hi) < 0 {
-		return lo + 1 // cautious: the lower boiling point
-	}
-	for i := 0; i < 60; i++ {
-		mid := (lo + hi) / 2
-		if f(mid) > 0 {
-			hi = mid
-		} else {
-			lo = mid
-		}
-	}
-	return (lo + hi) / 2
+	return lowest // cautious: the lower boiling point
 }

@@ -216,3 +216,51 @@ func (s Solvent) BoilingPointAt(p float64) (T float64, inRange bool) {
 	}
 	return best, false
 }
+
+// BubblePoint is the temperature (K) at which an ideal-solution liquid of
+// the solvents ss with mole fractions x (normalised here) boils at
+// pressure p (Pa), by Raoult's law:
+//
+//	Σ x_i · P_i^sat(T) = p
+//
+// with P_i^sat from VaporPressure (Antoine, or Clausius–Clapeyron), found
+// by bisection between the components' boiling points at p (widened by
+// 1 K). NaN when a boiling point is undefined or the root is not bracketed.
+// Real mixtures deviate (ethanol–water has an azeotrope boiling at 78.2 °C,
+// from memory); callers say so where it matters.
+func BubblePoint(ss []Solvent, x []float64, p float64) float64 {
+	if len(ss) == 0 || len(ss) != len(x) {
+		return math.NaN()
+	}
+	sum := 0.0
+	lo, hi := math.Inf(1), math.Inf(-1)
+	for i, s := range ss {
+		sum += x[i]
+		t, _ := s.BoilingPointAt(p)
+		lo, hi = math.Min(lo, t), math.Max(hi, t)
+	}
+	if !(sum > 0) || math.IsNaN(lo) || math.IsNaN(hi) {
+		return math.NaN()
+	}
+	f := func(T float64) float64 {
+		total := 0.0
+		for i, s := range ss {
+			pi, _ := s.VaporPressure(T)
+			total += x[i] / sum * pi
+		}
+		return total - p
+	}
+	lo, hi = lo-1, hi+1
+	if !(f(lo) <= 0 && f(hi) >= 0) {
+		return math.NaN()
+	}
+	for i := 0; i < 100; i++ {
+		mid := (lo + hi) / 2
+		if f(mid) > 0 {
+			hi = mid
+		} else {
+			lo = mid
+		}
+	}
+	return (lo + hi) / 2
+}
