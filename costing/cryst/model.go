@@ -427,15 +427,11 @@ func Run(sc *scenario.Scenario, coef source.Set, crudeKg float64) usage.Usage {
 			u.Activities = append(u.Activities, *a)
 		}
 	}
-	elapsed, attended := u.Hours()
+	// Hours by activity, elapsed and hands-on, are in u.Activities (every
+	// report shows them); these are the physical step times.
 	fig("hours_heating", "heating (all batches)", heatS, "h")
 	fig("hours_cooling", "cooling (all batches)", coolS, "h")
 	fig("hours_filtration", "filtration and washing (all batches)", filtS, "h")
-	for _, a := range u.Activities {
-		fig("hours:"+a.Name, "hours: "+a.Name, a.Elapsed, "h")
-	}
-	fig("hours_elapsed", "elapsed time", elapsed*3600, "h")
-	fig("hours_attended", "hands-on time", attended*3600, "h")
 
 	// Energy: heaters at their efficiency; heat removed above room
 	// temperature goes to cooling water, below it to a chiller at its COP;
@@ -486,6 +482,7 @@ func Run(sc *scenario.Scenario, coef source.Set, crudeKg float64) usage.Usage {
 	for _, id := range used.IDs() {
 		d(id, "solvent: "+id, usage.Materials, used[id], units.Volume)
 	}
+	_, attended := u.Hours()
 	d(ItemLabour, "hands-on time", usage.Labour, attended*3600, units.Time)
 	d(ItemElectricity, "heating, chiller and drying", usage.Energy, electric, units.Energy)
 	for _, s := range u.Waste {
