@@ -35,6 +35,22 @@ type Coefficient struct {
 	Unit   string    // display unit, e.g. "cm", "g/mL"; "" for plain numbers
 	Source string    // authors, title, year, table or page; or a plain explanation
 	Mark   Mark
+	// Lo and Hi bound the values a scenario may set, in SI (inclusive): the
+	// physically meaningful range, not the plausible one. Both zero means the
+	// coefficient has not been given a range yet.
+	Lo, Hi float64
+}
+
+// Bounded reports whether the coefficient has a range.
+func (c Coefficient) Bounded() bool { return c.Lo != 0 || c.Hi != 0 }
+
+// InRange reports whether v lies in the coefficient's range (always true for
+// an unbounded coefficient; never for NaN).
+func (c Coefficient) InRange(v float64) bool {
+	if v != v {
+		return false
+	}
+	return !c.Bounded() || (v >= c.Lo && v <= c.Hi)
 }
 
 // Display is the value converted to the display unit.
@@ -90,6 +106,10 @@ func (s Set) Override(key string, q units.Quantity, raw string) error {
 	if q.Dim != c.Dim {
 		return fmt.Errorf("%q is %s but %s needs %s", raw, q.Dim.Name(), key, units.Accepted(c.Dim))
 	}
+	if !c.InRange(q.SI) {
+		return fmt.Errorf("%q is outside the range %s accepts: %s to %s %s", raw, key,
+			fmtDisplay(c, c.Lo), fmtDisplay(c, c.Hi), c.Unit)
+	}
 	c.Source = "set in the scenario (default was " + c.String() + "; " + c.Source + ")"
 	c.SI = q.SI
 	c.Mark = Override
@@ -124,4 +144,10 @@ func (s Set) Sorted() []Coefficient {
 	}
 	sort.SliceStable(out, func(i, j int) bool { return out[i].Method < out[j].Method })
 	return out
+}
+
+// fmtDisplay prints an SI value of c in c's display unit.
+func fmtDisplay(c Coefficient, si float64) string {
+	c.SI = si
+	return fmt.Sprintf("%.4g", c.Display())
 }
