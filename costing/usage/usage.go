@@ -19,17 +19,20 @@ type Group string
 
 // Ledger sections, in the order they are printed.
 const (
-	Materials   Group = "materials"
-	Labour      Group = "labour"
-	Energy      Group = "energy"
-	Disposal    Group = "disposal"
-	ProductLoss Group = "product lost"
-	Credit      Group = "credit"
-	OneTime     Group = "one-time"
+	Materials Group = "materials"
+	Labour    Group = "labour"
+	Energy    Group = "energy"
+	// EquipmentUse is the site's charge for the hours (and uses) of its
+	// equipment, from the equipment table's rates.
+	EquipmentUse Group = "equipment"
+	Disposal     Group = "disposal"
+	ProductLoss  Group = "product lost"
+	Credit       Group = "credit"
+	OneTime      Group = "one-time"
 )
 
 // Groups lists the sections in print order.
-var Groups = []Group{Materials, Labour, Energy, Disposal, ProductLoss, Credit, OneTime}
+var Groups = []Group{Materials, Labour, Energy, EquipmentUse, Disposal, ProductLoss, Credit, OneTime}
 
 // Price-table items every method asks for (solvents are priced by their id,
 // disposal by WasteClass.DisposalItem).
@@ -153,6 +156,15 @@ type Usage struct {
 	Waste        []Stream
 	Activities   []Activity
 	Notes        []Note
+	Tables       []Table // small tables a model shows beside its figures (e.g. a trade-off)
+}
+
+// Table is a small table of numbers a model shows on its method sheet.
+type Table struct {
+	Key     string
+	Title   string
+	Columns []string
+	Rows    [][]float64
 }
 
 // New starts the usage of a method at a crude mass, feasible until a model
