@@ -109,7 +109,8 @@ func usable(c Cut, coef source.Set) bool {
 
 // deltaRfNeeded is the ΔRf (the impurity moved away from the product) at
 // which the pure cut reaches the target purity with the least recovery at
-// the largest silica : crude allowed, by bisection; NaN if even 0.5 fails.
+// the largest silica : crude allowed, by bisection; NaN if even the widest
+// ΔRf the product's Rf leaves room for (at most 0.5) fails.
 func (a analysis) deltaRfNeeded(coef source.Set) float64 {
 	ok := func(d float64) bool {
 		b := a
@@ -124,6 +125,11 @@ func (a analysis) deltaRfNeeded(coef source.Set) float64 {
 		return usable(b.cutAt(1/coef.Get(KeyMaxRatio), a.plates), coef)
 	}
 	lo, hi := a.dRf, 0.5
+	if a.first {
+		hi = math.Min(hi, a.sep.ProductRf-0.02)
+	} else {
+		hi = math.Min(hi, 0.98-a.sep.ProductRf)
+	}
 	if !ok(hi) {
 		return math.NaN()
 	}

@@ -113,7 +113,7 @@ func (a analysis) infeasible(coef source.Set) string {
 	why := fmt.Sprintf("no loading up to %.0f : 1 silica : crude gives a cut of %.4g %% purity holding at least %.0f %% of the product: ΔRf %.3f on a bed of about %.0f theoretical plates",
 		coef.Get(KeyMaxRatio), a.target*100, coef.Get(KeyMinRecovery)*100, a.dRf, a.plates)
 	if math.IsNaN(need) {
-		return why + "; no ΔRf up to 0.5 would do at this purity"
+		return why + "; no eluent that keeps the product's Rf would do at this purity"
 	}
 	return why + fmt.Sprintf("; an eluent giving ΔRf ≥ %.3f would", need)
 }
