@@ -157,7 +157,6 @@ func (p *runPlan) times(u *usage.Usage, sc *scenario.Scenario, coef source.Set, 
 		p.flow = p.e.cartridge.Flow
 	}
 	evapRun := p.productVol + p.dryLoad.Total()
-	p.ev = site.Evaporators[ChooseEvaporator(evapRun, get(KeyWorkingDay), site.Evaporators)]
 	act := func(name string, elapsed, attended float64) {
 		u.Activities = append(u.Activities, usage.Activity{Name: name, Elapsed: elapsed * p.runs, Attended: elapsed * attended * p.runs})
 	}
@@ -167,21 +166,27 @@ func (p *runPlan) times(u *usage.Usage, sc *scenario.Scenario, coef source.Set, 
 	}
 	elution := (p.used.Total() - loadVol - p.dryLoad.Total() - p.plates2*get(KeyTLCSolvent)) / p.flow
 	if p.e.packedByMe {
-		act("pack the column", get(KeyPackBase)+get(KeyPackPerKg)*p.e.silicaRun, 1)
+		act("pack the column", math.Min(get(KeyPackBase)+get(KeyPackPerKg)*p.e.silicaRun, get(KeyPackMax)), 1)
 	} else {
 		act("mount the cartridge", get(KeyLoadTime), 1)
-	}
-	if ch.Loading == scenario.DryLoading {
-		act("adsorb the crude on silica (dry load)", p.dryLoad.Total()/p.ev.Rate, get(KeyEvapAttended))
 	}
 	act("load the sample", get(KeyLoadTime), 1)
 	act("equilibrate and elute", elution, 1)
 	act("TLC of fractions", p.plates2*get(KeyTLCTime), 1)
 	act("combine product fractions", p.prodFrac*get(KeyCombinePerFrac), 1)
-	act("evaporate product fractions", p.productVol/p.ev.Rate, get(KeyEvapAttended))
 	if p.e.packedByMe {
 		act("empty and clean the column", get(KeyCleanTime), 1)
 	}
+	// The evaporator: the smallest that takes a run's product fractions
+	// (and dry-load solvent) within what the working day leaves after the
+	// column work (at least a quarter of the day).
+	other, _ := u.Hours()
+	left := math.Max(get(KeyWorkingDay)-other*3600/p.runs, get(KeyWorkingDay)/4)
+	p.ev = site.Evaporators[ChooseEvaporator(evapRun, left, site.Evaporators)]
+	if ch.Loading == scenario.DryLoading {
+		act("adsorb the crude on silica (dry load)", p.dryLoad.Total()/p.ev.Rate, get(KeyEvapAttended))
+	}
+	act("evaporate product fractions", p.productVol/p.ev.Rate, get(KeyEvapAttended))
 	p.evapHours = evapRun / p.ev.Rate * p.runs / 3600
 	elapsed, attended := u.Hours()
 	p.colHours = elapsed - p.evapHours

@@ -21,6 +21,7 @@ const (
 	KeyWorkingWeek   = "chromatography.working_week"
 	KeyRecoveryYield = "chromatography.eluent_distillation_yield"
 	KeyReuseShare    = "chromatography.recovered_eluent_max_share"
+	KeyPackMax       = "chromatography.packing_time_max"
 )
 
 // DiffusivityDim is m²/s.
@@ -44,6 +45,7 @@ func scaleDefaults(c coefFn) []source.Coefficient {
 		r(c(KeyMinRecovery, "least share of the product the pure cut must hold", 0.5, units.None, "", "a cut keeping less than half the product is not a purification one would run; another eluent is needed", source.CommonPractice), 0.01, 1),
 		r(c(KeyWorkingDay, "working day", 8*3600, units.Time, "h", "one shift", source.CommonPractice), 3600, 24*3600),
 		r(c(KeyWorkingWeek, "hands-on hours in one chemist's working week", 40*3600, units.Time, "h", "five days of eight hours", source.CommonPractice), 3600, 168*3600),
+		r(c(KeyPackMax, "longest time to pack one column (large columns are slurry-packed with a pump)", 4*3600, units.Time, "h", "a process column of tens of kilograms of silica is packed in a few hours", source.CommonPractice), 600, 48*3600),
 		r(c(KeyRecoveryYield, "share of the spent eluent a distillation for reuse recovers", 0.85, units.None, "", "losses to hold-up, the forerun and the residue", source.CommonPractice), 0.1, 1),
 		r(c(KeyReuseShare, "largest share of recovered eluent in the eluent of a later run", 0.8, units.None, "", "recovered eluent drifts in composition and carries traces; it is topped up with fresh solvent and checked by TLC", source.CommonPractice), 0, 1),
 	}

@@ -90,7 +90,7 @@ func ChooseCartridge(silicaNeeded, crudeKg float64, carts []SiteCartridge) (idx,
 }
 
 // ChooseEvaporator picks the smallest evaporator that distils one run's
-// product fractions within the working day, or else the fastest.
+// product fractions within the time given (s), or else the fastest.
 func ChooseEvaporator(volumeRun, workingDay float64, evs []SiteEvaporator) int {
 	best := 0
 	for i, e := range evs {

@@ -68,7 +68,8 @@ type Table struct {
 	Items []Item
 }
 
-// OfKind lists the items of one kind, smallest first (by size, then throughput).
+// OfKind lists the items of one kind, smallest first: by size, then
+// throughput; evaporators by throughput (their size is optional).
 func (t *Table) OfKind(k Kind) []Item {
 	if t == nil {
 		return nil
@@ -80,6 +81,9 @@ func (t *Table) OfKind(k Kind) []Item {
 		}
 	}
 	sort.SliceStable(out, func(i, j int) bool {
+		if k == Evaporator {
+			return out[i].Throughput < out[j].Throughput
+		}
 		if out[i].Size != out[j].Size {
 			return out[i].Size < out[j].Size
 		}
