@@ -31,9 +31,11 @@ type tradeRow struct {
 	cut   Cut
 }
 
-// tradeSteps multiply the rule's silica : crude to give the loadings tried:
-// the plan keeps the one with the lowest cost per gram.
-var tradeSteps = []float64{1, 1.5, 2.25, 3.5, 5, 8}
+// tradeSteps multiply the rule's silica : crude to give the loadings tried,
+// from twice the touching load (overlapping bands, a smaller pure cut) to
+// an eighth of it: the plan keeps the one with the lowest cost per gram.
+// Loadings above the ceiling are not tried.
+var tradeSteps = []float64{0.5, 0.7, 1, 1.5, 2.25, 3.5, 5, 8}
 
 // analyse runs the TLC relations, both loading rules, the ceiling and the
 // band model over the loadings tried.
@@ -69,10 +71,13 @@ func analyse(sc *scenario.Scenario, coef source.Set) analysis {
 	a.plates = platesFor(coef, get(KeyRefBed))
 	steps := tradeSteps
 	if ch.LoadingRule == scenario.RuleTable {
-		steps = steps[:1]
+		steps = []float64{1}
 	}
 	for _, f := range steps {
 		ratio := a.ratioRule * f
+		if ratio < a.ratioCeil*(1-1e-9) {
+			continue
+		}
 		if ratio > get(KeyMaxRatio) || math.IsInf(ratio, 0) {
 			break
 		}
@@ -91,12 +96,32 @@ func platesFor(coef source.Set, h float64) float64 {
 	return PlateNumber(h, KnoxPlateHeight(nu, get(KeyKnoxA), get(KeyKnoxB), get(KeyKnoxC)), get(KeyParticle))
 }
 
-// cutAt is the cut at a crude load per silica on a bed of N plates: each
-// component's loading factor is its own share of the load over q_s.
+// cutAt is the cut at a crude load per silica on a bed of N plates.
+//
+// The first-eluting component's band is its own overloaded triangle
+// (loading factor: its share of the load over q_s). The second-eluting
+// component's shock front is placed as in the competitive ideal model, so
+// that the two bands just touch at the touching load L_t = q_s·Lf(α, r)
+// (TouchingLoad): its effective loading factor is
+//
+//	Lf2 = (1 − 1/√α)² · L / L_t
+//
+// since a single-component front at 1 + k2·(1 − √Lf2)² meets the first
+// band's rear at 1 + k1 exactly when (1 − √Lf2)² = k1/k2 = 1/α. Below the
+// touching load the ideal bands leave a gap; above it they overlap; the
+// kinetic blur of the plate count adds overlap at every load.
 func (a analysis) cutAt(loadPerSilica, plates float64) Cut {
 	s := a.sep
-	lfP := loadPerSilica * s.Product / a.qs
-	lfI := loadPerSilica * s.Impurity / a.qs
+	alpha := s.Alpha()
+	lt := a.qs * TouchingLoad(alpha, s.AmountRatio())
+	second := math.Pow(1-1/math.Sqrt(alpha), 2) * loadPerSilica / lt
+	lfP, lfI := loadPerSilica*s.Product/a.qs, second
+	if !a.first {
+		lfP, lfI = second, loadPerSilica*s.Impurity/a.qs
+	}
+	if lt <= 0 {
+		return Cut{}
+	}
 	p := ComponentBand(s.ProductRf, lfP, plates, s.Product)
 	i := ComponentBand(s.ImpurityRf, lfI, plates, s.Impurity)
 	return CutFor(p, i, a.first, a.target)

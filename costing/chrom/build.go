@@ -108,12 +108,12 @@ func (p *runPlan) eluent(u *usage.Usage, sc *scenario.Scenario, coef source.Set)
 		collected += st.ColumnVolumes
 	}
 	b := ComponentBand(ch.ProductRf, p.crudeRun*sc.Purity/(get(KeyQs)*p.e.silicaRun), p.plates, 1)
-	p.bandCV = 4 * b.Sigma
-	elute := b.Mean + 2*b.Sigma + get(KeyTailCV) + get(KeyFlushCV)
+	p.bandCV = b.End - b.Front + 4*b.Kinetic
+	elute := b.End + 2*b.Kinetic + get(KeyTailCV) + get(KeyFlushCV)
 	p.used.Add(ch.TLCEluent, elute*p.v0)
 	collected += elute
 	u.AddFigure("eluent_cv", "eluent per run (column volumes)", p.used.Total()/p.v0, "")
-	u.AddFigure("band_cv", "product band width, ±2σ (column volumes)", p.bandCV, "")
+	u.AddFigure("band_cv", "product band width, front to rear ±2σ (column volumes)", p.bandCV, "")
 	loadMix := ch.TLCEluent
 	if ch.LoadingSolvent != "" {
 		loadMix = scenario.Mix{{Solvent: ch.LoadingSolvent, Fraction: 1}}

@@ -22,12 +22,20 @@ const (
 	ItemProduct     = usage.ItemProduct
 )
 
-// Run models one flash-chromatography purification of crudeKg of crude on
-// the first of the Candidates (the rule's loading on a column packed by
-// hand). coef must hold Defaults() plus the calibrated saturation capacity
+// Run models one flash-chromatography purification of crudeKg of crude at
+// the rule's loading (bounded by the ceiling) on a column packed by hand,
+// or, if that cut is not usable, the first usable of the Candidates. coef must hold Defaults() plus the calibrated saturation capacity
 // (AddCalibration).
 func Run(sc *scenario.Scenario, coef source.Set, site Site, crudeKg float64) usage.Usage {
-	return Candidates(sc, coef, site, crudeKg)[0]
+	cs := Candidates(sc, coef, site, crudeKg)
+	for _, u := range cs {
+		if r, ok := u.Figure("ratio_used"); ok && u.Feasible {
+			if rule, _ := u.Figure("ratio_rule"); r.SI >= rule.SI*(1-1e-9) {
+				return u
+			}
+		}
+	}
+	return cs[0]
 }
 
 // Candidates models the purification on every loading of the trade-off

@@ -81,7 +81,7 @@ func TestStillTableReproduced(t *testing.T) {
 		v0 := silica * ColumnVolumePerMass(testBedDensity, coef.Get(KeySkeletalDensity))
 		lf := row.LoadEasyKg * 0.5 / (cal.Qs * silica)
 		b := ComponentBand(StillTargetRf, lf, platesFor(coef, testBedHeight), 1)
-		cv := coef.Get(KeyEquilibrationCV) + b.Mean + 2*b.Sigma + coef.Get(KeyTailCV)
+		cv := coef.Get(KeyEquilibrationCV) + b.End + 2*b.Kinetic + coef.Get(KeyTailCV)
 		vol := cv * v0
 		if row.DiameterM < 0.015 {
 			if !(vol < row.EluentM3 && vol > row.EluentM3/3) {
