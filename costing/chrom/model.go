@@ -48,11 +48,17 @@ func Run(sc *scenario.Scenario, coef source.Set, site Site, crudeKg float64) usa
 func Candidates(sc *scenario.Scenario, coef source.Set, site Site, crudeKg float64) []usage.Usage {
 	a := analyse(sc, coef)
 	var out []usage.Usage
+	seen := map[string]bool{} // a cartridge holds what it holds: several loadings may give the same plan
 	for _, row := range a.trade {
 		if !usable(row.cut, coef) {
 			continue
 		}
 		for _, e := range equipmentFor(a, coef, site, crudeKg*row.ratio, crudeKg) {
+			key := fmt.Sprintf("%s|%d|%.9g", e.name, e.runs, e.silicaRun)
+			if seen[key] {
+				continue
+			}
+			seen[key] = true
 			u := a.header(sc, coef, crudeKg)
 			build(&u, a, sc, coef, site, e, row.ratio)
 			out = append(out, u)
@@ -169,7 +175,8 @@ func heatToEvaporate(b *solvent.Book, v scenario.Volumes, warmup float64) float6
 func addDemandsOfEquipment(u *usage.Usage, e equip, ev SiteEvaporator, colHours, evapHours float64) {
 	d := u.AddDemand
 	if e.cartridge != nil {
-		d(e.cartridge.UseItem, "prepacked cartridges: "+e.cartridge.Name, usage.Materials, float64(e.runs), units.Count)
+		// Counted by the silica inside (the housing is not weighed here).
+		u.AddCountedDemand(e.cartridge.UseItem, "prepacked cartridges: "+e.cartridge.Name, usage.Materials, float64(e.runs), e.silicaRun*float64(e.runs))
 		if e.cartridge.HourItem != "" {
 			d(e.cartridge.HourItem, "cartridge station time", usage.EquipmentUse, colHours, units.Time)
 		}

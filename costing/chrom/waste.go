@@ -129,7 +129,7 @@ func (p *runPlan) demands(u *usage.Usage, sc *scenario.Scenario, coef source.Set
 	for _, id := range used.IDs() {
 		d(id, "solvent: "+id, usage.Materials, used[id], units.Volume)
 	}
-	d(ItemTLCPlate, "TLC plates for fractions", usage.Materials, tlcPlates, units.Count)
+	u.AddCountedDemand(ItemTLCPlate, "TLC plates for fractions", usage.Materials, tlcPlates, tlcPlates*get(KeyPlateMass))
 	d(ItemLabour, "hands-on time", usage.Labour, attended*3600, units.Time)
 	d(ItemElectricity, "evaporator bath and chiller", usage.Energy, evaporationElectricity(coef, heat), units.Energy)
 	addDemandsOfEquipment(u, p.e, p.ev, p.colHours*3600, p.evapHours*3600)

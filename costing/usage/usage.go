@@ -49,6 +49,10 @@ type Demand struct {
 	Group Group     // ledger section
 	Qty   float64   // SI units of Dim; negative for a credit
 	Dim   units.Dim // mass, volume, count, time or energy
+	// Kg is the mass of a material bought by count (TLC plates,
+	// prepacked cartridges), so that it enters the mass balance; 0 if
+	// unknown or not material.
+	Kg float64
 }
 
 // WasteClass is a disposal class, priced per kilogram.
@@ -185,6 +189,12 @@ func (u *Usage) AddFigure(key, label string, si float64, unit string) {
 		return
 	}
 	u.Figures = append(u.Figures, Figure{Key: key, Label: label, SI: si, Unit: unit})
+}
+
+// AddCountedDemand adds a material priced by count whose mass is known
+// (kg in all), so that the mass balance counts it.
+func (u *Usage) AddCountedDemand(item, label string, g Group, count, kg float64) {
+	u.Demands = append(u.Demands, Demand{Item: item, Label: label, Group: g, Qty: count, Dim: units.Count, Kg: kg})
 }
 
 // AddDemand adds a quantity to be priced. A NaN or infinite quantity is
