@@ -131,9 +131,10 @@ func PrepareWith(sc *scenario.Scenario, opt Options) (*Plan, error) {
 func newPlan(sc *scenario.Scenario, coef source.Set, eq *equipment.Table) *Plan {
 	p := &Plan{Scenario: sc, Coef: coef, Equipment: eq}
 	site := chromSite(sc, eq)
-	p.add(chrom.Method, sc.Chromatography != nil, func(m float64) usage.Usage { return chrom.Run(sc, coef, site, m) })
+	p.add(chrom.Method, sc.Chromatography != nil, nil)
 	if sc.Chromatography != nil {
-		choices := func(m float64) []usage.Usage { return chrom.Candidates(sc, coef, site, m) }
+		model := chrom.NewModel(sc, coef, site)
+		choices := model.Candidates
 		if why := siteProblem(site, eq); why != "" {
 			choices = func(m float64) []usage.Usage {
 				return []usage.Usage{{Method: chrom.Method, CrudeKg: m, ProductInKg: m * sc.Purity, Reason: why}}

@@ -91,7 +91,7 @@ type Cut struct {
 // fractions reach the target purity (product over product plus the nearest
 // impurity). first says whether the product elutes first (then the pure
 // cut runs from the start of the product band to the cut point; otherwise
-// from the cut point to its end). The cut point is found on a grid of 400
+// from the cut point to its end). The cut point is found on a grid of 48
 // points from 6σ before the band's front to 6σ after its end, refined by
 // bisection.
 func CutFor(p, imp Band, first bool, target float64) Cut {
@@ -107,7 +107,7 @@ func CutFor(p, imp Band, first bool, target float64) Cut {
 		return pr / (pr + im), p.share(x)
 	}
 	lo, hi := p.Front-6*p.Kinetic, p.End+6*p.Kinetic
-	const n = 400
+	const n = 48
 	best := math.NaN()
 	for i := n; i >= 0; i-- {
 		x := lo + (hi-lo)*float64(i)/n
@@ -121,7 +121,7 @@ func CutFor(p, imp Band, first bool, target float64) Cut {
 	}
 	if best < hi {
 		a, b := best, best+(hi-lo)/n
-		for i := 0; i < 40; i++ {
+		for i := 0; i < 30; i++ {
 			m := (a + b) / 2
 			if pu, _ := purity(m); pu >= target {
 				a = m

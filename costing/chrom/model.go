@@ -27,7 +27,27 @@ const (
 // or, if that cut is not usable, the first usable of the Candidates. coef must hold Defaults() plus the calibrated saturation capacity
 // (AddCalibration).
 func Run(sc *scenario.Scenario, coef source.Set, site Site, crudeKg float64) usage.Usage {
-	cs := Candidates(sc, coef, site, crudeKg)
+	return NewModel(sc, coef, site).Run(crudeKg)
+}
+
+// Model is the chromatography of one scenario with its coefficients and
+// site, with the analysis that does not depend on the batch mass (the
+// loading rules and the trade-off table) done once.
+type Model struct {
+	sc   *scenario.Scenario
+	coef source.Set
+	site Site
+	a    analysis
+}
+
+// NewModel analyses the separation once; coef must hold the calibration.
+func NewModel(sc *scenario.Scenario, coef source.Set, site Site) *Model {
+	return &Model{sc: sc, coef: coef, site: site, a: analyse(sc, coef)}
+}
+
+// Run is the package-level Run on a prepared model.
+func (md *Model) Run(crudeKg float64) usage.Usage {
+	cs := md.Candidates(crudeKg)
 	for _, u := range cs {
 		if r, ok := u.Figure("ratio_used"); ok && u.Feasible {
 			if rule, _ := u.Figure("ratio_rule"); r.SI >= rule.SI*(1-1e-9) {
@@ -46,12 +66,22 @@ func Run(sc *scenario.Scenario, coef source.Set, site Site, crudeKg float64) usa
 // purity, the one candidate is not feasible, with the reason and the ΔRf
 // that would be needed.
 func Candidates(sc *scenario.Scenario, coef source.Set, site Site, crudeKg float64) []usage.Usage {
-	a := analyse(sc, coef)
+	return NewModel(sc, coef, site).Candidates(crudeKg)
+}
+
+// Candidates is the package-level Candidates on a prepared model.
+func (md *Model) Candidates(crudeKg float64) []usage.Usage {
+	a, sc, coef, site := md.a, md.sc, md.coef, md.site
 	var out []usage.Usage
 	seen := map[string]bool{} // a cartridge holds what it holds: several loadings may give the same plan
-	for _, row := range a.trade {
+	for k, row := range a.trade {
 		if !usable(row.cut, coef) {
 			continue
+		}
+		// Past the first loading that keeps all but 0.1 % of the eluted
+		// product, more silica buys nothing: stop.
+		if k > 0 && a.trade[k-1].cut.Recovery >= 0.999 && usable(a.trade[k-1].cut, coef) {
+			break
 		}
 		for _, e := range equipmentFor(a, coef, site, crudeKg*row.ratio, crudeKg) {
 			key := fmt.Sprintf("%s|%d|%.9g", e.name, e.runs, e.silicaRun)
