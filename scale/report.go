@@ -33,7 +33,8 @@ type Report struct {
 	Notes        []usage.Note // scenario-wide notes and warnings
 	TargetKg     float64      // the batch mass the decision is made at
 	Decision     *Decision    // the recommendation at TargetKg
-	Crossovers   []Crossover  // masses where methods change places (sweeps only)
+	Crossovers   []Crossover  // masses where the cheapest feasible method changes (sweeps only)
+	Pairwise     []Crossover  // masses where two methods change places, cheapest or not (sweeps only; secondary)
 	IsSweep      bool         // the masses are a log-spaced curve
 	Uncertainty  *Uncertainty // Monte Carlo bands at TargetKg (nil when not sampled)
 	Waste        []WasteRow   // every stream of every feasible result, classified

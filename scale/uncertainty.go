@@ -107,16 +107,10 @@ func Sample(p *costing.Plan, t *prices.Table, targetKg float64, draws int, seed 
 		}
 	}
 	u := &Uncertainty{TargetKg: targetKg, Draws: draws, Seed: seed}
-	cheapest := make([]int, len(names))
+	wins := make([]int, len(names))
 	for _, row := range perG {
-		best := -1
-		for j, v := range row {
-			if !math.IsNaN(v) && (best < 0 || v < row[best]) {
-				best = j
-			}
-		}
-		if best >= 0 {
-			cheapest[best]++
+		if best := cheapest(row); best >= 0 {
+			wins[best]++
 		}
 	}
 	for j, name := range names {
@@ -126,7 +120,7 @@ func Sample(p *costing.Plan, t *prices.Table, targetKg float64, draws int, seed 
 				vals = append(vals, row[j])
 			}
 		}
-		b := Band{Method: name, P10: math.NaN(), P50: math.NaN(), P90: math.NaN(), Feasible: float64(len(vals)) / float64(draws), Cheapest: float64(cheapest[j]) / float64(draws)}
+		b := Band{Method: name, P10: math.NaN(), P50: math.NaN(), P90: math.NaN(), Feasible: float64(len(vals)) / float64(draws), Cheapest: float64(wins[j]) / float64(draws)}
 		if len(vals) > 0 {
 			sort.Float64s(vals)
 			b.P10, b.P50, b.P90 = quantile(vals, 0.1), quantile(vals, 0.5), quantile(vals, 0.9)

@@ -20,6 +20,7 @@ type jsonReport struct {
 	Batches    []jsonBatch     `json:"batches"`
 	Decision   *jsonDecision   `json:"decision,omitempty"`
 	Crossovers []jsonCrossover `json:"crossovers,omitempty"`
+	Pairwise   []jsonCrossover `json:"pairwise_crossings,omitempty"`
 	Cautions   []string        `json:"cautions"`
 }
 
@@ -49,11 +50,16 @@ type jsonCrossover struct {
 	CheaperBelow string  `json:"cheaper_below"`
 	CheaperAbove string  `json:"cheaper_above"`
 	Step         bool    `json:"at_equipment_step"`
+	Kind         string  `json:"kind"`
+	Detail       string  `json:"detail,omitempty"`
+	LoKg         float64 `json:"bracket_lo_kg"`
+	HiKg         float64 `json:"bracket_hi_kg"`
 }
 
 type jsonBatch struct {
-	CrudeKg float64      `json:"crude_kg"`
-	Methods []jsonMethod `json:"methods"`
+	CrudeKg  float64      `json:"crude_kg"`
+	Cheapest string       `json:"cheapest,omitempty"` // per gram of purified product, among the feasible methods
+	Methods  []jsonMethod `json:"methods"`
 }
 
 type jsonMethod struct {
@@ -68,6 +74,7 @@ type jsonMethod struct {
 	Figures       []jsonFigure   `json:"figures"`
 	Lines         []jsonLine     `json:"ledger"`
 	Total         string         `json:"total"`
+	PerGram       *float64       `json:"cost_per_g,omitempty"` // absent when not feasible
 	Activities    []jsonActivity `json:"activities"`
 	Waste         []jsonStream   `json:"waste"`
 	Notes         []usage.Note   `json:"notes"`
@@ -109,12 +116,18 @@ func JSON(w io.Writer, r *scale.Report) error {
 	out := jsonReport{Title: r.Title, Scenario: r.ScenarioFile, Prices: r.PricesFile, Currency: r.Prices.Currency, Cautions: r.Cautions}
 	for i, m := range r.MassesKg {
 		b := jsonBatch{CrudeKg: m}
+		if k := r.CheapestAt(i); k >= 0 {
+			b.Cheapest = r.Methods[k]
+		}
 		for j, name := range r.Methods {
 			res := r.Results[i][j]
 			u := res.Usage
 			el, at := u.Hours()
 			jm := jsonMethod{Method: name, Feasible: u.Feasible, Reason: u.Reason, ProductInKg: u.ProductInKg, ProductOutKg: u.ProductOutKg,
 				HoursElapsed: el, HoursAttended: at, WasteKg: u.WasteKg(), Total: res.Ledger.Total.StringFixed(res.Ledger.Places), Notes: u.Notes}
+			if pg := res.PerGram(); !math.IsNaN(pg) {
+				jm.PerGram = &pg
+			}
 			for _, f := range u.Figures {
 				if v := f.Display(); !math.IsNaN(v) && !math.IsInf(v, 0) {
 					jm.Figures = append(jm.Figures, jsonFigure{f.Key, f.Label, v, f.Unit})
@@ -151,7 +164,10 @@ func JSON(w io.Writer, r *scale.Report) error {
 		out.Decision = jd
 	}
 	for _, c := range r.Crossovers {
-		out.Crossovers = append(out.Crossovers, jsonCrossover{c.MassKg, c.CheaperBelow, c.CheaperAbove, c.Step})
+		out.Crossovers = append(out.Crossovers, jsonCrossover{c.MassKg, c.CheaperBelow, c.CheaperAbove, c.Step, c.Kind, c.Detail, c.LoKg, c.HiKg})
+	}
+	for _, c := range r.Pairwise {
+		out.Pairwise = append(out.Pairwise, jsonCrossover{c.MassKg, c.CheaperBelow, c.CheaperAbove, c.Step, c.Kind, c.Detail, c.LoKg, c.HiKg})
 	}
 	enc := json.NewEncoder(w)
 	enc.SetIndent("", "  ")

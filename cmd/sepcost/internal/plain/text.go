@@ -81,17 +81,7 @@ func Text(w io.Writer, r *scale.Report) error {
 		}
 	}
 	if r.IsSweep {
-		ew.printf("\nCrossovers (cost per gram of purified product):\n")
-		if len(r.Crossovers) == 0 {
-			ew.printf("  none in %s to %s: the cost order of the methods does not change\n", scenario.FormatMass(r.MassesKg[0]), scenario.FormatMass(r.MassesKg[len(r.MassesKg)-1]))
-		}
-		for _, c := range r.Crossovers {
-			kind := "smooth crossing"
-			if c.Step {
-				kind = "at an equipment step"
-			}
-			ew.printf("  %s: %s cheaper below, %s cheaper above (%s)\n", scenario.FormatMass(c.MassKg), c.CheaperBelow, c.CheaperAbove, kind)
-		}
+		crossovers(ew, r)
 	}
 	if len(r.Cautions) > 0 {
 		ew.printf("\nCautions:\n")
@@ -100,6 +90,36 @@ func Text(w io.Writer, r *scale.Report) error {
 		}
 	}
 	return ew.err
+}
+
+// crossovers prints where the decision changes, then, as a secondary
+// list, where any two methods change places.
+func crossovers(ew *errWriter, r *scale.Report) {
+	from, to := scenario.FormatMass(r.MassesKg[0]), scenario.FormatMass(r.MassesKg[len(r.MassesKg)-1])
+	ew.printf("\nWhere the cheapest method changes (cost per gram of purified product):\n")
+	if len(r.Crossovers) == 0 {
+		ew.printf("  nowhere in %s to %s: the same method is cheapest throughout\n", from, to)
+	}
+	orNone := func(s string) string {
+		if s == "" {
+			return "no feasible method"
+		}
+		return s
+	}
+	for _, c := range r.Crossovers {
+		ew.printf("  %s: %s below, %s above (%s", scenario.FormatMass(c.MassKg), orNone(c.CheaperBelow), orNone(c.CheaperAbove), c.Kind)
+		if c.Detail != "" {
+			ew.printf("; %s", c.Detail)
+		}
+		ew.printf(")\n")
+	}
+	if len(r.Pairwise) == 0 {
+		return
+	}
+	ew.printf("\nWhere two methods change places, cheapest overall or not (secondary):\n")
+	for _, c := range r.Pairwise {
+		ew.printf("  %s: %s cheaper below, %s cheaper above (%s)\n", scenario.FormatMass(c.MassKg), c.CheaperBelow, c.CheaperAbove, c.Kind)
+	}
 }
 
 // num prints a figure with about four significant digits.

@@ -4,8 +4,6 @@ import (
 	"fmt"
 	"strings"
 
-	"github.com/shopspring/decimal"
-
 	"sepcost/scale"
 )
 
@@ -34,6 +32,7 @@ func buildSummary(g *grid, st *styles, r *scale.Report, m money, methods []metho
 		}
 	}
 	cheapest := len(r.Methods) > 1
+	const perGramCol = 4 // "Cost per gram", the first of cols after the total
 	type column struct {
 		head string
 		get  func(massCells) numCell
@@ -75,8 +74,6 @@ func buildSummary(g *grid, st *styles, r *scale.Report, m money, methods []metho
 	row := 8
 	for i, kg := range r.MassesKg {
 		var feasibleRows [][2]int // summary row, method index
-		var low decimal.Decimal
-		lowSet := false
 		for j := range r.Methods {
 			mc := methods[j].mass[i]
 			g.text(row, 1, massLabel(kg), st.text)
@@ -100,25 +97,27 @@ func buildSummary(g *grid, st *styles, r *scale.Report, m money, methods []metho
 					g.formula(row, 4+k, sheetRef(methods[j].sheet, nc.ref), nc.v, c.st)
 				}
 			}
-			feasibleRows = append(feasibleRows, [2]int{row, j})
-			if !lowSet || mc.total.LessThan(low) {
-				low, lowSet = mc.total, true
+			if mc.perGram.ok {
+				feasibleRows = append(feasibleRows, [2]int{row, j})
 			}
 			row++
 		}
 		if cheapest && len(feasibleRows) > 0 {
-			// A formula, so that the mark moves when a price is edited:
-			// IF(C8=MIN(C8,C9,...),"cheapest","").
+			// Cheapest per gram of purified product, the one definition
+			// every output uses (scale.Cheapest), as a formula on the
+			// cost-per-gram cells so that the mark moves when a price is
+			// edited: IF(D8=MIN(D8,D9,...),"cheapest","").
 			refs := make([]string, len(feasibleRows))
 			for k, fr := range feasibleRows {
-				refs[k] = cellName(3, fr[0])
+				refs[k] = cellName(perGramCol, fr[0])
 			}
+			best := r.CheapestAt(i)
 			for _, fr := range feasibleRows {
 				mark := ""
-				if methods[fr[1]].mass[i].total.Equal(low) {
+				if fr[1] == best {
 					mark = "cheapest"
 				}
-				f := "IF(" + cellName(3, fr[0]) + "=MIN(" + strings.Join(refs, ",") + "),\"cheapest\",\"\")"
+				f := "IF(" + cellName(perGramCol, fr[0]) + "=MIN(" + strings.Join(refs, ",") + "),\"cheapest\",\"\")"
 				g.formula(fr[0], lastCol, f, mark, st.bold)
 			}
 		}
