@@ -32,6 +32,7 @@ type Report struct {
 	Cautions     []string     // safety cautions that apply to this scenario
 	Notes        []usage.Note // scenario-wide notes and warnings
 	TargetKg     float64      // the batch mass the decision is made at
+	TargetWhy    string       // where TargetKg comes from, e.g. "--target", "the largest mass given with --mass"
 	Decision     *Decision    // the recommendation at TargetKg
 	Crossovers   []Crossover  // masses where the cheapest feasible method changes (sweeps only)
 	Pairwise     []Crossover  // masses where two methods change places, cheapest or not (sweeps only; secondary)

@@ -26,6 +26,7 @@ type jsonReport struct {
 
 type jsonDecision struct {
 	TargetKg    float64           `json:"target_kg"`
+	TargetFrom  string            `json:"target_from,omitempty"`
 	Winner      string            `json:"method"`
 	RunnerUp    string            `json:"runner_up,omitempty"`
 	WinnerPerG  float64           `json:"cost_per_g"`
@@ -151,7 +152,7 @@ func JSON(w io.Writer, r *scale.Report) error {
 		out.Batches = append(out.Batches, b)
 	}
 	if d := r.Decision; d != nil {
-		jd := &jsonDecision{TargetKg: d.TargetKg, Winner: d.Winner, RunnerUp: d.RunnerUp, Margin: d.Margin, Tie: d.Tie, Infeasible: d.Infeasible, Explanation: d.Explanation}
+		jd := &jsonDecision{TargetKg: d.TargetKg, TargetFrom: r.TargetWhy, Winner: d.Winner, RunnerUp: d.RunnerUp, Margin: d.Margin, Tie: d.Tie, Infeasible: d.Infeasible, Explanation: d.Explanation}
 		if !math.IsNaN(d.WinnerPerG) {
 			jd.WinnerPerG = d.WinnerPerG
 		}

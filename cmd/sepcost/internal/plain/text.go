@@ -72,7 +72,11 @@ func Text(w io.Writer, r *scale.Report) error {
 		}
 	}
 	if d := r.Decision; d != nil {
-		ew.printf("\nDecision at %s of crude:\n", scenario.FormatMass(d.TargetKg))
+		why := ""
+		if r.TargetWhy != "" {
+			why = " (" + r.TargetWhy + ")"
+		}
+		ew.printf("\nDecision at %s of crude%s:\n", scenario.FormatMass(d.TargetKg), why)
 		for _, line := range d.Explanation {
 			ew.printf("  %s\n", line)
 		}

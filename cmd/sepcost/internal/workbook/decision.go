@@ -31,7 +31,11 @@ func writeDecision(g *grid, st *styles, r *scale.Report, m money, row, lastCol i
 		target = r.TargetKg
 	}
 	row++
-	g.set(row, 1, cell{value: "Decision at " + massLabel(target) + " of crude", style: st.heading, spill: true})
+	heading := "Decision at " + massLabel(target) + " of crude"
+	if r.TargetWhy != "" {
+		heading += " (" + r.TargetWhy + ")"
+	}
+	g.set(row, 1, cell{value: heading, style: st.heading, spill: true})
 	row++
 	for _, line := range d.Explanation {
 		wrapped(g, st, row, line, lastCol)
