@@ -60,6 +60,7 @@ func EstimateWith(p *costing.Plan, t *prices.Table, massesKg []float64, opt Opti
 		r.TargetKg, r.TargetWhy = opt.TargetKg, opt.TargetWhy
 	}
 	r.Waste = wasteRows(p, massesKg, r.Methods, res)
+	r.Warnings = collectWarnings(r.Methods, massesKg, res)
 	r.Greenness = greenness(p)
 	r.WasteSector = sc.WasteSector.String()
 	r.Coefficients = append(r.Coefficients, waste.Sources()...)

@@ -31,6 +31,7 @@ type Report struct {
 	Coefficients []source.Coefficient
 	Cautions     []string     // safety cautions that apply to this scenario
 	Notes        []usage.Note // scenario-wide notes and warnings
+	Warnings     []Warning    // every warning and caution of the models, by method and text, with the masses
 	TargetKg     float64      // the batch mass the decision is made at
 	TargetWhy    string       // where TargetKg comes from, e.g. "--target", "the largest mass given with --mass"
 	Decision     *Decision    // the recommendation at TargetKg

@@ -21,7 +21,17 @@ type jsonReport struct {
 	Decision   *jsonDecision   `json:"decision,omitempty"`
 	Crossovers []jsonCrossover `json:"crossovers,omitempty"`
 	Pairwise   []jsonCrossover `json:"pairwise_crossings,omitempty"`
+	Warnings   []jsonWarning   `json:"warnings"`
 	Cautions   []string        `json:"cautions"`
+}
+
+// jsonWarning is one warning of the models with the masses it was raised
+// at (the text is its wording at the first).
+type jsonWarning struct {
+	Method   string    `json:"method"`
+	Level    string    `json:"level"`
+	Text     string    `json:"text"`
+	MassesKg []float64 `json:"crude_kg"`
 }
 
 type jsonDecision struct {
@@ -169,6 +179,10 @@ func JSON(w io.Writer, r *scale.Report) error {
 	}
 	for _, c := range r.Pairwise {
 		out.Pairwise = append(out.Pairwise, jsonCrossover{c.MassKg, c.CheaperBelow, c.CheaperAbove, c.Step, c.Kind, c.Detail, c.LoKg, c.HiKg})
+	}
+	out.Warnings = []jsonWarning{}
+	for _, w := range r.Warnings {
+		out.Warnings = append(out.Warnings, jsonWarning{w.Method, string(w.Level), w.Text, w.MassesKg})
 	}
 	enc := json.NewEncoder(w)
 	enc.SetIndent("", "  ")

@@ -64,8 +64,10 @@ func Text(w io.Writer, r *scale.Report) error {
 			if err := tw.Flush(); err != nil {
 				return err
 			}
+			// Warnings at every mass; the models' notes on what they
+			// assumed at the decision's mass.
 			for _, n := range u.Notes {
-				if n.Level != usage.Info {
+				if n.Level != usage.Info || m == r.TargetKg {
 					ew.printf("  %s: %s\n", n.Level, n.Text)
 				}
 			}
@@ -86,6 +88,12 @@ func Text(w io.Writer, r *scale.Report) error {
 	}
 	if r.IsSweep {
 		crossovers(ew, r)
+		if len(r.Warnings) > 0 {
+			ew.printf("\nWarnings:\n")
+		}
+		for _, w := range r.Warnings {
+			ew.printf("  %s: %s\n", w.Level, w.Line())
+		}
 	}
 	if len(r.Cautions) > 0 {
 		ew.printf("\nCautions:\n")

@@ -105,3 +105,25 @@ func indexMethod(r *scale.Report, sheet string) int {
 	}
 	return -1
 }
+
+// Every warning of the models reaches the Summary: the liquid demo at
+// 2 kg needs 30 runs of the largest column (a warning from
+// usage.ManyRepeats runs on), and its distillation carries the caution on
+// the pot's stability limit; "No notes." is not written over them.
+func TestSummaryShowsEveryWarning(t *testing.T) {
+	r := liquidDemoReport(t)
+	if len(r.Warnings) == 0 {
+		t.Fatal("the liquid demo raises no warnings; the test needs one")
+	}
+	b, _ := render(t, r, Options{})
+	d := dump(t, b)
+	summary := onlySheets(d, []string{sheetSummary})
+	for _, w := range r.Warnings {
+		if !strings.Contains(summary, capitalize(w.Line())) {
+			t.Errorf("the Summary lacks the warning %q", w.Line())
+		}
+	}
+	if strings.Contains(summary, "No notes.") {
+		t.Error(`the Summary says "No notes." though the models raised warnings`)
+	}
+}

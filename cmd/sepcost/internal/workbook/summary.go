@@ -176,13 +176,20 @@ func summaryNotes(g *grid, st *styles, r *scale.Report, row, lastCol int) {
 	row++
 	g.set(row, 1, cell{value: "Notes", style: st.heading, spill: true})
 	row++
-	if len(r.Notes) == 0 {
+	if len(r.Notes) == 0 && len(r.Warnings) == 0 {
 		g.set(row, 1, cell{value: "No notes.", style: st.note, spill: true})
 		row++
 	}
 	for _, n := range r.Notes {
 		g.text(row, 1, string(n.Level), st.text)
 		g.set(row, 2, cell{value: n.Text, style: st.text, spill: true})
+		row++
+	}
+	// Every warning of the models, once per method and wording, with
+	// the masses it was raised at.
+	for _, w := range r.Warnings {
+		g.text(row, 1, string(w.Level), st.text)
+		g.set(row, 2, cell{value: capitalize(w.Line()), style: st.text, spill: true})
 		row++
 	}
 
