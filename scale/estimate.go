@@ -69,6 +69,10 @@ func EstimateWith(p *costing.Plan, t *prices.Table, massesKg []float64, opt Opti
 	if r.Decision, err = Decide(p, t, r.TargetKg); err != nil {
 		return nil, err
 	}
+	if r.Assumptions, err = FindAssumptions(p, t, r.TargetKg); err != nil {
+		return nil, err
+	}
+	markFlips(r.Assumptions, r.Decision)
 	if opt.Draws > 0 {
 		if r.Uncertainty, err = Sample(p, t, r.TargetKg, opt.Draws, opt.Seed, opt.Progress); err != nil {
 			return nil, err

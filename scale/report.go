@@ -39,6 +39,7 @@ type Report struct {
 	Pairwise     []Crossover  // masses where two methods change places, cheapest or not (sweeps only; secondary)
 	IsSweep      bool         // the masses are a log-spaced curve
 	Uncertainty  *Uncertainty // Monte Carlo bands at TargetKg (nil when not sampled)
+	Assumptions  []Assumption // defaults the user did not set that move a method's cost at TargetKg by more than AssumptionSwing
 	Waste        []WasteRow   // every stream of every feasible result, classified
 	Greenness    []SolventGreenness
 	WasteSector  string // the EU List of Waste chapter used for the codes

@@ -147,26 +147,41 @@ func quantile(sorted []float64, q float64) float64 {
 func drawCoefficients(c source.Set, rng *rand.Rand) source.Set {
 	out := c.Clone()
 	for _, k := range c.Keys() {
-		co := c[k]
-		sigma, ok := Spread[co.Mark]
-		if !ok || co.Dim == units.Temperature || co.SI == 0 {
+		if !perturbable(c[k]) {
 			continue
 		}
-		z := sigma * rng.NormFloat64()
-		switch {
-		case co.Dim == units.None && co.SI == 1:
-			continue // a whole share (e.g. fully attended) stays whole
-		case co.Dim == units.None && co.SI < 1:
-			// A share or fraction: the factor acts on its odds, so the
-			// draw stays inside (0, 1).
-			odds := co.SI / (1 - co.SI) * math.Exp(z)
-			co.SI = odds / (1 + odds)
-		default:
-			co.SI *= math.Exp(z)
-		}
-		out[k] = co
+		out[k], _ = perturb(c[k], rng.NormFloat64())
 	}
 	return out
+}
+
+// perturbable reports whether a coefficient is drawn at all: it has a
+// spread for its mark, is not a temperature and not zero.
+func perturbable(co source.Coefficient) bool {
+	_, ok := Spread[co.Mark]
+	return ok && co.Dim != units.Temperature && co.SI != 0
+}
+
+// perturb moves a coefficient z standard deviations (σ = Spread of its
+// mark) on the log scale: a plain share or fraction below 1 on its odds,
+// so that it stays in (0, 1), anything else by the factor exp(z σ).
+// Temperatures (not scale quantities), zeros, whole shares and marks
+// without a spread are left alone (ok false).
+func perturb(co source.Coefficient, z float64) (source.Coefficient, bool) {
+	if !perturbable(co) {
+		return co, false
+	}
+	sigma := Spread[co.Mark]
+	switch {
+	case co.Dim == units.None && co.SI == 1:
+		return co, false // a whole share (e.g. fully attended) stays whole
+	case co.Dim == units.None && co.SI < 1:
+		odds := co.SI / (1 - co.SI) * math.Exp(sigma*z)
+		co.SI = odds / (1 + odds)
+	default:
+		co.SI *= math.Exp(sigma * z)
+	}
+	return co, true
 }
 
 // drawPrices copies a price table with each price multiplied by a

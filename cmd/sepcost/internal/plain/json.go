@@ -22,7 +22,27 @@ type jsonReport struct {
 	Crossovers []jsonCrossover `json:"crossovers,omitempty"`
 	Pairwise   []jsonCrossover `json:"pairwise_crossings,omitempty"`
 	Warnings   []jsonWarning   `json:"warnings"`
+	Assumed    []jsonAssumed   `json:"assumptions"`
 	Cautions   []string        `json:"cautions"`
+}
+
+// jsonAssumed is a default the user did not set that moves a method's cost
+// per gram at the target mass by more than scale.AssumptionSwing between
+// its low and high plausible values (null cost: not feasible there).
+type jsonAssumed struct {
+	Method    string   `json:"method"`
+	Key       string   `json:"setting"`
+	Label     string   `json:"label"`
+	Unit      string   `json:"unit"`
+	Default   float64  `json:"default"`
+	Low       float64  `json:"plausible_low"`
+	High      float64  `json:"plausible_high"`
+	PerGram   *float64 `json:"cost_per_g_default"`
+	PerGramLo *float64 `json:"cost_per_g_low"`
+	PerGramHi *float64 `json:"cost_per_g_high"`
+	Flips     bool     `json:"changes_decision"`
+	Mark      string   `json:"mark"`
+	Source    string   `json:"source"`
 }
 
 // jsonWarning is one warning of the models with the masses it was raised
@@ -180,6 +200,11 @@ func JSON(w io.Writer, r *scale.Report) error {
 	for _, c := range r.Pairwise {
 		out.Pairwise = append(out.Pairwise, jsonCrossover{c.MassKg, c.CheaperBelow, c.CheaperAbove, c.Step, c.Kind, c.Detail, c.LoKg, c.HiKg})
 	}
+	out.Assumed = []jsonAssumed{}
+	for _, a := range r.Assumptions {
+		out.Assumed = append(out.Assumed, jsonAssumed{a.Method, a.Key, a.Label, a.Unit, a.Default, a.Low, a.High,
+			finiteOrNil(a.PerGram), finiteOrNil(a.PerGramLo), finiteOrNil(a.PerGramHi), a.Flips, string(a.Mark), a.Source})
+	}
 	out.Warnings = []jsonWarning{}
 	for _, w := range r.Warnings {
 		out.Warnings = append(out.Warnings, jsonWarning{w.Method, string(w.Level), w.Text, w.MassesKg})
@@ -187,4 +212,12 @@ func JSON(w io.Writer, r *scale.Report) error {
 	enc := json.NewEncoder(w)
 	enc.SetIndent("", "  ")
 	return enc.Encode(out)
+}
+
+// finiteOrNil is nil for NaN and infinities (JSON has no NaN).
+func finiteOrNil(v float64) *float64 {
+	if math.IsNaN(v) || math.IsInf(v, 0) {
+		return nil
+	}
+	return &v
 }

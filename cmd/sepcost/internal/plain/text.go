@@ -86,6 +86,7 @@ func Text(w io.Writer, r *scale.Report) error {
 			ew.printf("  %s: %s is %.0f %% of the cost\n", dr.Method, dr.Item, dr.Share*100)
 		}
 	}
+	assumptions(ew, r)
 	if r.IsSweep {
 		crossovers(ew, r)
 		if len(r.Warnings) > 0 {
@@ -102,6 +103,19 @@ func Text(w io.Writer, r *scale.Report) error {
 		}
 	}
 	return ew.err
+}
+
+// assumptions prints the defaults the user did not set that move a
+// method's cost at the target mass by more than scale.AssumptionSwing.
+func assumptions(ew *errWriter, r *scale.Report) {
+	if len(r.Assumptions) == 0 {
+		return
+	}
+	ew.printf("\nAssumptions: defaults not set in the scenario that move a cost per gram at %s by more than %.0f %% (set them under settings: when you know better):\n",
+		scenario.FormatMass(r.TargetKg), scale.AssumptionSwing*100)
+	for _, a := range r.Assumptions {
+		ew.printf("  - %s\n", a.Words())
+	}
 }
 
 // crossovers prints where the decision changes, then, as a secondary

@@ -61,6 +61,7 @@ func buildSummary(g *grid, st *styles, r *scale.Report, m money, methods []metho
 	if !details {
 		row := summaryOmitted(g, st, r, lastCol)
 		row = writeDecision(g, st, r, m, row, lastCol, lay)
+		row = writeAssumptions(g, st, r, row, lastCol)
 		row = writeCrossovers(g, st, r, row, lastCol)
 		summaryNotes(g, st, r, row, lastCol)
 		return
@@ -128,8 +129,31 @@ func buildSummary(g *grid, st *styles, r *scale.Report, m money, methods []metho
 		row++
 	}
 	row = writeDecision(g, st, r, m, row, lastCol, lay)
+	row = writeAssumptions(g, st, r, row, lastCol)
 	row = writeCrossovers(g, st, r, row, lastCol)
 	summaryNotes(g, st, r, row, lastCol)
+}
+
+// writeAssumptions lists, after a blank row, the defaults the user did not
+// set that move a method's cost per gram at the target mass by more than
+// scale.AssumptionSwing between their low and high plausible values; row
+// is the next free row; it returns the next free row.
+func writeAssumptions(g *grid, st *styles, r *scale.Report, row, lastCol int) int {
+	if len(r.Assumptions) == 0 {
+		return row
+	}
+	row++
+	g.set(row, 1, cell{value: "Assumptions the cost rests on", style: st.heading, spill: true})
+	row++
+	wrapped(g, st, row, fmt.Sprintf("Defaults not set in the scenario that move a method's cost per gram at %s by more than %.0f %% between their "+
+		"low and high plausible values (P10 and P90 of the spread their source is given, as on the Uncertainty sheet), each changed alone. "+
+		"Measure them or set them under settings: in the scenario.", massLabel(r.TargetKg), scale.AssumptionSwing*100), lastCol)
+	row++
+	for _, a := range r.Assumptions {
+		wrapped(g, st, row, capitalize(a.Words()), lastCol)
+		row++
+	}
+	return row
 }
 
 // summaryOmitted writes, in place of the per-mass table of a sweep of many
