@@ -119,3 +119,46 @@ func cheapestName(t *testing.T, names []string, p *costing.Plan, pt *prices.Tabl
 	}
 	return "none"
 }
+
+// One definition of cheapest: at every mass of the solid demo with a
+// distillation section, the decision, the portfolio's choice and the
+// report's CheapestAt name the same method, the one with the lowest cost
+// per gram of purified product among the feasible (derived from the
+// results themselves), whichever batch total is lowest.
+func TestOneCheapest(t *testing.T) {
+	yaml, err := os.ReadFile("testdata/solid-with-distillation.yaml")
+	if err != nil {
+		t.Fatal(err)
+	}
+	p, pt := plan(t, yaml)
+	masses := []float64{1e-4, 0.003, 0.085, 1, 5}
+	r, err := EstimateWith(p, pt, masses, Options{})
+	if err != nil {
+		t.Fatal(err)
+	}
+	for i, m := range masses {
+		best, bestPerG := "", math.Inf(1)
+		for j, res := range r.Results[i] {
+			if pg := res.PerGram(); !math.IsNaN(pg) && pg < bestPerG {
+				best, bestPerG = r.Methods[j], pg
+			}
+		}
+		if k := r.CheapestAt(i); k < 0 || r.Methods[k] != best {
+			t.Errorf("%g kg: CheapestAt says %d, lowest cost per gram is %s", m, k, best)
+		}
+		d, err := Decide(p, pt, m)
+		if err != nil {
+			t.Fatal(err)
+		}
+		if d.Winner != best {
+			t.Errorf("%g kg: the decision picks %s, lowest cost per gram is %s", m, d.Winner, best)
+		}
+		line, err := costRow(p, PlanRow{Line: 2, Scenario: "s.yaml", MassKg: m, Runs: 1}, pt)
+		if err != nil {
+			t.Fatal(err)
+		}
+		if line.Method != best {
+			t.Errorf("%g kg: the portfolio picks %s, lowest cost per gram is %s", m, line.Method, best)
+		}
+	}
+}
