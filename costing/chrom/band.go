@@ -84,7 +84,10 @@ type Cut struct {
 	Recovery float64 // share of the product eluted in the pure cut
 	Purity   float64 // product / (product + nearest impurity) in the pure cut
 	Mixed    float64 // share of the product in mixed fractions (eluted outside the pure cut)
-	OK       bool    // the cut reaches the target purity with some product in it
+	// MixedImpurity is the share of the impurity eluted in the mixed
+	// fractions: from the cut point to 6σ past the product band's far end.
+	MixedImpurity float64
+	OK            bool // the cut reaches the target purity with some product in it
 }
 
 // CutFor places the cut point that keeps the most product while the pooled
@@ -132,7 +135,8 @@ func CutFor(p, imp Band, first bool, target float64) Cut {
 		best = a
 	}
 	pu, rec := purity(best)
-	return Cut{Recovery: rec, Purity: pu, Mixed: 1 - rec, OK: rec > 0}
+	mixedImp := math.Max(imp.share(hi)-imp.share(best), 0)
+	return Cut{Recovery: rec, Purity: pu, Mixed: 1 - rec, MixedImpurity: mixedImp, OK: rec > 0}
 }
 
 // mirror reflects a band about zero (its elution volume negated), so that

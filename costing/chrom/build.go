@@ -27,6 +27,8 @@ type runPlan struct {
 	fracSize   float64
 	fractions  float64
 	plates2    float64 // TLC plates per run
+	rerunP     float64 // kg of product in the mixed fractions sent to a second run
+	rerunI     float64 // kg of impurity going with it
 	prodFrac   float64
 	productVol float64
 	ev         SiteEvaporator
@@ -52,7 +54,14 @@ func build(u *usage.Usage, a analysis, sc *scenario.Scenario, coef source.Set, s
 	p.fractionsAndTLC(u, sc, coef)
 	p.times(u, sc, coef, site)
 	p.product(u, a, coef)
+	var second *usage.Usage
+	if sc.Chromatography.RerunMixed {
+		second = p.rerun(u, a, sc, coef, site)
+	}
 	p.wasteAndDemands(u, sc, coef)
+	if second != nil {
+		mergeRerun(u, second)
+	}
 }
 
 // equipmentFigures reports the equipment and the silica.
