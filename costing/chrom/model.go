@@ -139,7 +139,7 @@ func (a analysis) header(sc *scenario.Scenario, coef source.Set, crudeKg float64
 		note(usage.Info, "Silica sized by %s; elution theory %.0f : 1, Still's table %.0f : 1.", a.why, theory, a.ratioTable)
 	}
 	t := usage.Table{Key: "loading_tradeoff", Title: "Loading against recovery at the purity asked (15 cm bed)",
-		Columns: []string{"silica : crude", "crude per silica (%)", "product in the pure cut (%)", "product in mixed fractions (%)", "purity of the cut (%)", "usable"}}
+		Columns: []string{"silica : crude", "crude per silica (%)", "product in the pure cut (%)", "product in mixed fractions (%)", "purity of the cut (%)", "usable (1 = yes)"}}
 	for _, r := range a.trade {
 		ok := 0.0
 		if usable(r.cut, coef) {
