@@ -140,8 +140,13 @@ func newPlan(sc *scenario.Scenario, coef source.Set, eq *equipment.Table) *Plan 
 				return []usage.Usage{{Method: chrom.Method, CrudeKg: m, ProductInKg: m * sc.Purity, Reason: why}}
 			}
 		}
+		run := model.Run
+		if why := siteProblem(site, eq); why != "" {
+			run = func(m float64) usage.Usage { return choices(m)[0] }
+		}
 		p.Methods[len(p.Methods)-1].Choices = choices
-		p.Methods[len(p.Methods)-1].Run = func(m float64) usage.Usage { return choices(m)[0] }
+		// Run alone (without prices) gives the rule's loading on a column.
+		p.Methods[len(p.Methods)-1].Run = run
 	}
 	p.add(cryst.Method, sc.Crystallization != nil, func(m float64) usage.Usage { return cryst.Run(sc, coef, m) })
 	p.add(distil.Method, sc.Distillation != nil, func(m float64) usage.Usage { return distil.Run(sc, coef, m) })
