@@ -130,23 +130,10 @@ func PrepareWith(sc *scenario.Scenario, opt Options) (*Plan, error) {
 // newPlan registers the methods on a settled coefficient set.
 func newPlan(sc *scenario.Scenario, coef source.Set, eq *equipment.Table) *Plan {
 	p := &Plan{Scenario: sc, Coef: coef, Equipment: eq}
-	site := chromSite(sc, eq)
 	p.add(chrom.Method, sc.Chromatography != nil, nil)
 	if sc.Chromatography != nil {
-		model := chrom.NewModel(sc, coef, site)
-		choices := model.Candidates
-		if why := siteProblem(site, eq); why != "" {
-			choices = func(m float64) []usage.Usage {
-				return []usage.Usage{{Method: chrom.Method, CrudeKg: m, ProductInKg: m * sc.Purity, Reason: why}}
-			}
-		}
-		run := model.Run
-		if why := siteProblem(site, eq); why != "" {
-			run = func(m float64) usage.Usage { return choices(m)[0] }
-		}
-		p.Methods[len(p.Methods)-1].Choices = choices
-		// Run alone (without prices) gives the rule's loading on a column.
-		p.Methods[len(p.Methods)-1].Run = run
+		m := &p.Methods[len(p.Methods)-1]
+		m.Run, m.Choices = chromMethod(sc, coef, eq)
 	}
 	p.add(cryst.Method, sc.Crystallization != nil, func(m float64) usage.Usage { return cryst.Run(sc, coef, m) })
 	p.add(distil.Method, sc.Distillation != nil, func(m float64) usage.Usage { return distil.Run(sc, coef, m) })
