@@ -113,7 +113,7 @@ func (a analysis) header(sc *scenario.Scenario, coef source.Set, crudeKg float64
 	fig("cv_product", "product elutes at (column volumes)", ElutionCV(ch.ProductRf), "")
 	fig("delta_cv", "difference in elution volume from the nearest impurity (column volumes)", DeltaCV(ch.ProductRf, ch.ImpurityRf), "")
 	fig("alpha", "separation factor α", a.sep.Alpha(), "")
-	fig("plates_reference", "theoretical plates of a 15 cm bed (Knox plate height at the flow used)", a.plates, "")
+	fig("plates_reference", fmt.Sprintf("theoretical plates of a %.0f cm bed (Knox plate height at the flow used)", coef.Get(KeyRefBed)*100), a.plates, "")
 	fig("target_purity", "purity asked of the product fractions", a.target, "%")
 	fig("ratio_theory", "silica : crude by elution theory (touching bands)", a.ratioTheory, "")
 	fig("ratio_table", "silica : crude by Still's table", a.ratioTable, "")
@@ -138,7 +138,7 @@ func (a analysis) header(sc *scenario.Scenario, coef source.Set, crudeKg float64
 	} else {
 		note(usage.Info, "Silica sized by %s; elution theory %.0f : 1, Still's table %.0f : 1.", a.why, theory, a.ratioTable)
 	}
-	t := usage.Table{Key: "loading_tradeoff", Title: "Loading against recovery at the purity asked (15 cm bed)",
+	t := usage.Table{Key: "loading_tradeoff", Title: fmt.Sprintf("Loading against recovery at the purity asked (%.0f cm bed, %.0f plates)", coef.Get(KeyRefBed)*100, a.plates),
 		Columns: []string{"silica : crude", "crude per silica (%)", "product in the pure cut (%)", "product in mixed fractions (%)", "purity of the cut (%)", "usable (1 = yes)"}}
 	for _, r := range a.trade {
 		ok := 0.0
