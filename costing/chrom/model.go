@@ -72,6 +72,12 @@ func Candidates(sc *scenario.Scenario, coef source.Set, site Site, crudeKg float
 // Candidates is the package-level Candidates on a prepared model.
 func (md *Model) Candidates(crudeKg float64) []usage.Usage {
 	a, sc, coef, site := md.a, md.sc, md.coef, md.site
+	if len(site.Evaporators) == 0 || len(site.Columns)+len(site.Cartridges) == 0 {
+		u := usage.New(Method, crudeKg, crudeKg*sc.Purity)
+		u.Feasible = false
+		u.Reason = "the site lists no column or cartridge, or no evaporator"
+		return []usage.Usage{u}
+	}
 	var out []usage.Usage
 	seen := map[string]bool{} // a cartridge holds what it holds: several loadings may give the same plan
 	for k, row := range a.trade {
