@@ -409,6 +409,7 @@ func Run(sc *scenario.Scenario, coef source.Set, crudeKg float64) usage.Usage {
 		}
 	}
 	u.ProductOutKg = product.Product
+	u.ImpurityOutKg = product.Impurity + product.Other
 	fig("product_out", "product recovered", u.ProductOutKg, "g")
 	fig("recovery", "recovery", u.ProductOutKg/u.ProductInKg, "%")
 	if product.Purity() != out.Purity {

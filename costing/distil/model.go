@@ -303,6 +303,13 @@ func Run(sc *scenario.Scenario, coef source.Set, crudeKg float64) usage.Usage {
 	lossHold = prodKg(br.Holdup)
 	lossTrap = prodKg(trapCut)
 	u.ProductOutKg = recovered * batches
+	// The impurity isolated with the product: the heavy moles of the heart
+	// cut, or the light moles left in the pot.
+	if productLight {
+		u.ImpurityOutKg = nBatch * (heart.N - heart.Light) * mH * batches
+	} else {
+		u.ImpurityOutKg = nBatch * br.Pot.Light * mL * batches
+	}
 	purity := heart.X()
 	if productLight {
 		purity = MassFraction(purity, P.M, I.M)

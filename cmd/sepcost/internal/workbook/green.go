@@ -60,9 +60,12 @@ var greenMetrics = []greenMetric{
 	{"Input\n(kg)", "Input", func(m *green.Metrics) float64 { return m.InputKg }, func(st *styles) int { return st.kgFine },
 		"Crude + materials − recycled, water counted, kg: the numerator of the PMI.",
 		srcPMI},
-	{"Product\n(kg)", "Product", func(m *green.Metrics) float64 { return m.ProductKg }, func(st *styles) int { return st.kgFine },
-		"Purified product recovered, kg: the denominator of every ratio here.",
+	{"Product\n(kg)", "Product", func(m *green.Metrics) float64 { return m.IsolatedKg }, func(st *styles) int { return st.kgFine },
+		"Product as isolated, kg, counted with the impurity it still contains (in the crystals, the heart cut or the pooled fractions): the denominator of every ratio here.",
 		"the method models"},
+	{"Balance gap\n(kg)", "Mass balance gap", func(m *green.Metrics) float64 { return m.BalanceGapKg }, func(st *styles) int { return st.kgFine },
+		"Input − product − waste, kg: zero when every input leaves as product or waste, and then PMI = E + 1. Inputs listed as not counted below are outside it.",
+		srcPMI},
 }
 
 // writeGreenMetrics writes, after the codes, the green metrics of each
