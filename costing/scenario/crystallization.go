@@ -29,7 +29,7 @@ import (
 //	  impurity:
 //	    solubility: {"0 C": "8 g/L", "75 C": "60 g/L"}   # same forms as product
 //	    # or purge_factor: 0.8
-//	    fraction: 0.10                 # of the crude; default all impurities
+//	    fraction: 0.10                 # of the crude; default crude.nearest_impurity, else all impurities
 //	  dissolve_at: "75 C"
 //	  isolate_at: "0 C"
 //	  target_purity: 0.995
@@ -309,9 +309,12 @@ func (c *collector) crystallization(r *rawCryst, s *Scenario, root *yaml.Node, e
 					echo(field+".fraction", r.Impurity.Fraction, fmt.Sprintf("%.3g %% of the crude; other impurities stay in the mother liquor", v*100))
 				}
 			}
+		} else if s.NearestGiven {
+			cr.ImpurityFraction = s.NearestImpurity
+			s.Inputs = append(s.Inputs, Input{Field: field + ".fraction", Written: "(not given)", Meaning: fmt.Sprintf("crude.nearest_impurity, %.3g %% of the crude; other impurities stay in the mother liquor", s.NearestImpurity*100)})
 		} else if s.Purity > 0 {
 			cr.ImpurityFraction = rest
-			s.Inputs = append(s.Inputs, Input{Field: field + ".fraction", Written: "(not given)", Meaning: fmt.Sprintf("all impurities (%.3g %%) behave like this one: the cautious case", rest*100)})
+			s.Inputs = append(s.Inputs, Input{Field: field + ".fraction", Written: "(not given)", Meaning: fmt.Sprintf("all impurities (%.3g %%) behave like this one: the cautious case (crude.nearest_impurity not given either)", rest*100)})
 		}
 	}
 
