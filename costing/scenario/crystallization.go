@@ -29,6 +29,7 @@ import (
 //	  impurity:
 //	    solubility: {"0 C": "8 g/L", "75 C": "60 g/L"}   # same forms as product
 //	    # or purge_factor: 0.8
+//	    distribution_coefficient: 0.05 # measured uptake by the crystals, 0–1
 //	    fraction: 0.10                 # of the crude; default crude.nearest_impurity, else all impurities
 //	  dissolve_at: "75 C"
 //	  isolate_at: "0 C"
@@ -72,6 +73,7 @@ type rawCrystSolute struct {
 	ActivityFactor   Text              `yaml:"activity_factor"`
 	Fraction         Text              `yaml:"fraction"`
 	PurgeFactor      Text              `yaml:"purge_factor"`
+	Distribution     Text              `yaml:"distribution_coefficient"`
 	Extra            map[string]rawAny `yaml:",inline"`
 }
 
@@ -108,6 +110,7 @@ type Crystallization struct {
 	ImpurityByPurge  bool        // the impurity is described by PurgeFactor, not by its solubility
 	PurgeFactor      float64     // fraction of the impurity removed per pass, 0–1
 	ImpurityFraction float64     // mass fraction of the crude that is this impurity
+	Distribution     *float64    // measured logarithmic distribution coefficient λ of the impurity, 0–1; nil for the default
 
 	DissolveK    float64 // dissolution temperature, K
 	IsolateK     float64 // isolation (filtration) temperature, K
@@ -255,6 +258,9 @@ func (c *collector) crystallization(r *rawCryst, s *Scenario, root *yaml.Node, e
 		if r.Product.Fraction.Set {
 			c.add(r.Product.Fraction.Line, field+".fraction", "only the impurity takes a fraction; the product's share of the crude is crude.purity")
 		}
+		if r.Product.Distribution.Set {
+			c.add(r.Product.Distribution.Line, field+".distribution_coefficient", "only the impurity takes a distribution_coefficient (its uptake by the product's crystals)")
+		}
 		if r.Product.PurgeFactor.Set {
 			c.add(r.Product.PurgeFactor.Line, field+".purge_factor", "only the impurity takes a purge_factor; describe the product by its solubility or melting data")
 		}
@@ -297,6 +303,17 @@ func (c *collector) crystallization(r *rawCryst, s *Scenario, root *yaml.Node, e
 			}
 		} else if !defined {
 			c.add(il, field, `give the impurity's solubility (same forms as the product) or a purge_factor, the fraction of it removed per pass, e.g. purge_factor: 0.8`)
+		}
+		if t := r.Impurity.Distribution; t.Set {
+			const what = `the impurity's logarithmic distribution coefficient between crystals and liquor, from 0 (rejected) to 1 (no separation), e.g. 0.05`
+			if r.Impurity.PurgeFactor.Set {
+				c.add(t.Line, field+".distribution_coefficient", "a purge_factor already says how much of the impurity stays; give one or the other")
+			} else if v, ok := c.fraction(t, field+".distribution_coefficient", 0, 1, what); ok {
+				cr.Distribution = &v
+				echo(field+".distribution_coefficient", t, fmt.Sprintf("λ = %.3g: ln(I₀/I) = λ·ln(P₀/P) in the liquor", v))
+			}
+		} else if !r.Impurity.PurgeFactor.Set {
+			s.Inputs = append(s.Inputs, Input{Field: field + ".distribution_coefficient", Written: "(not given)", Meaning: "the model default (crystallization.impurity_distribution), an assumption"})
 		}
 		rest := 1 - s.Purity
 		if r.Impurity.Fraction.Set {
