@@ -150,6 +150,7 @@ func (m *Model) scaleNotes(u *usage.Usage, o *outcome) {
 		A, _, _ := m.filterOf(o.purify.Passes[0], b)
 		u.Notef(usage.Info, "Reactor scale: %.3g operators attend each hands-on step; liquids move at %.3g L/min and solids are charged at %.3g kg/h; the slurry is filtered on a %.2g m² pressure filter sized with the reactor (Darcy's law, specific cake resistance %.2g m/kg) and dried there to %.2g %% loss on drying; cleaning grows with the wall area.",
 			b.crew, p.transferRate*60e3, p.solidChargeRate*3600, A, p.cakeResistance, p.lodTarget*100)
+		u.Notef(usage.Caution, "At reactor scale: charging solids into a vessel that holds flammable solvent can ignite the vapour by static discharge, so inert the vessel and charge by the site's procedure; a pressure filter works under gas pressure, so relieve it before opening; and the operating limits of the reactor and filter are those the site has approved. Follow local codes and licensed practice.")
 	}
 	if p.screeningMass > o.crudeKg {
 		u.Notef(usage.Warning, "Screening uses %s of crude, more than the batch itself (%s): at this scale the development cost dominates.", scenario.FormatMass(p.screeningMass), scenario.FormatMass(o.crudeKg))

@@ -115,6 +115,7 @@ func (m *Model) energyNotes(u *usage.Usage, o *outcome) {
 	}
 	if o.crew > 1 {
 		u.Notef(usage.Info, "Plant still (%s): %.3g operators attend the set-up, charging, draining and cleaning, and the watched share of the distillation; liquids move at %.3g L/min and cleaning grows with the still's wall area.", formatL(o.st.Volume), o.crew, p.transferRate*60e3)
+		u.Notef(usage.Caution, "A plant still holds tens of litres of hot flammable liquid under vacuum: inert it before letting air in, keep the vacuum and heating interlocks the site requires, and run it within the pressure and temperature limits the site has approved. Follow local codes and licensed practice.")
 	}
 }
 
