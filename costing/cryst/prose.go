@@ -144,7 +144,7 @@ func (m *Model) scaleNotes(u *usage.Usage, o *outcome) {
 		if b.vessel.Reactor {
 			fill = p.reactorFill
 		}
-		u.Notef(usage.Info, "The batch needs %.3g L of liquid, more than the largest vessel (%.4g L at %.0f %% fill) holds: %d batches run one after another.", b.liquid*1000, b.vessel.Volume*1000, fill*100, b.vessel.Batches)
+		u.Notef(usage.RepeatLevel(b.vessel.Batches), "The batch needs %.3g L of liquid, more than the largest vessel (%.4g L at %.0f %% fill) holds: %d batches run one after another.", b.liquid*1000, b.vessel.Volume*1000, fill*100, b.vessel.Batches)
 	}
 	if b.vessel.Reactor {
 		A, _, _ := m.filterOf(o.purify.Passes[0], b)
@@ -153,6 +153,6 @@ func (m *Model) scaleNotes(u *usage.Usage, o *outcome) {
 		u.Notef(usage.Caution, "At reactor scale: charging solids into a vessel that holds flammable solvent can ignite the vapour by static discharge, so inert the vessel and charge by the site's procedure; a pressure filter works under gas pressure, so relieve it before opening; and the operating limits of the reactor and filter are those the site has approved. Follow local codes and licensed practice.")
 	}
 	if p.screeningMass > o.crudeKg {
-		u.Notef(usage.Warning, "Screening uses %s of crude, more than the batch itself (%s): at this scale the development cost dominates.", scenario.FormatMass(p.screeningMass), scenario.FormatMass(o.crudeKg))
+		u.Notef(usage.Warning, "Screening uses %s of crude, more than the batch itself (%s): the plan is impractical at this scale, and the development cost dominates.", scenario.FormatMass(p.screeningMass), scenario.FormatMass(o.crudeKg))
 	}
 }

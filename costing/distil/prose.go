@@ -88,7 +88,7 @@ func (m *Model) stagesNote(u *usage.Usage, o *outcome) {
 
 func (m *Model) batchesNote(u *usage.Usage, o *outcome) {
 	if o.st.Batches > 1 {
-		u.Notef(usage.Info, "The charge (%.3g L) is more than the largest still (%.3g L at %.0f %% fill) holds: %d batches of %s.", o.crudeKg/o.rhoMix*1000, o.st.Volume*1000, o.fill*100, o.st.Batches, scenario.FormatMass(o.mBatch))
+		u.Notef(usage.RepeatLevel(o.st.Batches), "The charge (%.3g L) is more than the largest still (%.3g L at %.0f %% fill) holds: %d batches of %s.", o.crudeKg/o.rhoMix*1000, o.st.Volume*1000, o.fill*100, o.st.Batches, scenario.FormatMass(o.mBatch))
 	}
 }
 
