@@ -52,6 +52,7 @@ func (p *runPlan) rerun(u *usage.Usage, a analysis, sc *scenario.Scenario, coef 
 func mergeRerun(u, v *usage.Usage) {
 	gained := v.ProductOutKg
 	u.ProductOutKg += gained
+	u.ImpurityOutKg += v.ImpurityOutKg
 	u.AddFigure("rerun_crude", "mixed fractions run again (product and impurity)", v.CrudeKg, "g")
 	u.AddFigure("rerun_product", "product recovered from the mixed fractions", gained, "g")
 	if f, ok := v.Figure("impurity_in_product"); ok {

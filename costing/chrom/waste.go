@@ -56,6 +56,7 @@ func (p *runPlan) wasteAndDemands(u *usage.Usage, sc *scenario.Scenario, coef so
 	// Mixed fractions sent to a second run leave this pass's waste.
 	lostMixed := (u.ProductInKg-u.ProductInKg*get(KeyRetainedLoss))*p.cut.Mixed - p.rerunP
 	lostSilica := u.ProductInKg * get(KeyRetainedLoss)
+	u.ImpurityOutKg = impurityInProduct
 	u.AddFigure("impurity_in_product", "nearest impurity in the isolated product", impurityInProduct, "g")
 	spent := solventStream("spent eluent and mixed fractions", liquid, book)
 	spent.Components = append(spent.Components,
