@@ -195,6 +195,7 @@ func readRow(get func(string) string, line int, add func(int, string, string, ..
 	it.Size = quantity(get("size"), dim, it.Kind != Evaporator, line, "size", add)
 	it.Throughput = quantity(get("throughput"), units.VolumeFlow, it.Kind == Evaporator || it.Kind == Cartridge, line, "throughput", add)
 	it.MaxLoad = quantity(get("max_load"), units.Mass, it.Kind == Cartridge, line, "max_load", add)
+	checkLimits(&it, get, line, add)
 	switch strings.ToLower(get("ownership")) {
 	case OwnedWord:
 		it.Owned = true
@@ -211,6 +212,42 @@ func readRow(get func(string) string, line int, add func(int, string, string, ..
 		it.Life, it.LifeDim = serviceLife(s, line, add)
 	}
 	return it
+}
+
+// Physical limits of what a site lists (inclusive), in SI: beyond them a
+// value is a slip of the unit, not equipment (common practice, no source:
+// the largest process columns are about 2 m wide, plant vessels tens of m³).
+var sizeMax = map[Kind]float64{
+	Column: 2, Cartridge: 1000, Evaporator: 100, Flask: 0.1, Reactor: 100, Still: 100, Filter: 1000, Dryer: 100,
+}
+
+const (
+	throughputMax = 100.0 / 3600 // m³/s: 100 m³/h
+	moneyMax      = 1e9          // per hour or per item
+)
+
+// checkLimits refuses sizes, flows and money beyond the physical limits and
+// a cartridge whose load limit exceeds the silica inside it.
+func checkLimits(it *Item, get func(string) string, line int, add func(int, string, string, ...any)) {
+	if max := sizeMax[it.Kind]; it.Size > max {
+		add(line, "size", "%q is more than any %s (at most %g %s in SI units); check the unit", get("size"), it.Kind, max, SizeDim[it.Kind].Name())
+		it.Size = 0
+	}
+	if it.Throughput > throughputMax {
+		add(line, "throughput", "%q is more than 100 m³/h; check the unit", get("throughput"))
+		it.Throughput = 0
+	}
+	if it.Kind == Cartridge && it.MaxLoad > 0 && it.Size > 0 && it.MaxLoad > it.Size {
+		add(line, "max_load", "%q is more than the %q of silica in the cartridge; a cartridge takes a fraction of its silica's mass of crude", get("max_load"), get("size"))
+	}
+	for _, f := range []struct {
+		name string
+		v    decimal.Decimal
+	}{{"hourly_rate", it.Rate}, {"price", it.Price}} {
+		if f.v.GreaterThan(decimal.NewFromFloat(moneyMax)) {
+			add(line, f.name, "%q is more than %g; check the number", get(f.name), moneyMax)
+		}
+	}
 }
 
 // quantity parses an optional or required quantity of one dimension (> 0).

@@ -49,7 +49,9 @@ func TestReadReportsFileLineFieldAndWhatIsValid(t *testing.T) {
 		"e,reactor,20 L,,,-3,owned,,EUR,,\n" + // line 6: negative rate
 		"f,still,20 L,,,,to buy,900,EUR,,\n" + // line 7: no service life
 		"g,column,10 mm,,,,rented,,,,\n" + // line 8: ownership word
-		"a,column,20 mm,,,,owned,,,,\n" // line 9: fine (a on line 2 was refused)
+		"a,column,20 mm,,,,owned,,,,\n" + // line 9: fine (a on line 2 was refused)
+		"h,column,3 m,,,,owned,,,,\n" + // line 10: wider than any column
+		"i,cartridge,40 g,40 mL/min,50 g,,to buy,18,EUR,,\n" // line 11: load above the silica
 	_, err := Read(strings.NewReader(in), "eq.csv")
 	if !errors.Is(err, ErrInvalid) {
 		t.Fatalf("want ErrInvalid, got %v", err)
@@ -62,6 +64,8 @@ func TestReadReportsFileLineFieldAndWhatIsValid(t *testing.T) {
 		`eq.csv:6: hourly_rate: "-3" is negative`,
 		"eq.csv:7: service_life: empty",
 		`eq.csv:8: ownership: "rented": write "owned" or "to buy"`,
+		`eq.csv:10: size: "3 m" is more than any column`,
+		`eq.csv:11: max_load: "50 g" is more than the "40 g" of silica`,
 	}
 	for _, w := range want {
 		if !strings.Contains(err.Error(), w) {
