@@ -63,7 +63,7 @@ func runInit(_ context.Context, opts *initOptions, stdout io.Writer) error {
 		}
 		fmt.Fprintf(stdout, "wrote %s\n", p)
 	}
-	fmt.Fprintf(stdout, "next: edit both files, then `sepcost check %s --prices %s`\n",
+	fmt.Fprintf(stdout, "next: edit the files (equipment.csv lists what your site owns), then `sepcost check %s --prices %s`\n",
 		filepath.Join(opts.dir, templates.ScenarioName), filepath.Join(opts.dir, templates.PricesName))
 	return nil
 }
