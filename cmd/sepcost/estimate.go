@@ -31,7 +31,7 @@ the price table. Without -o a summary is printed; with -o the format follows
 the file's extension (.xlsx, .json, .csv) unless --format says otherwise.`,
 		Example: `  sepcost estimate mycase/scenario.yaml --prices mycase/prices.csv --mass 0.25g,20g,2kg -o plan.xlsx
   sepcost estimate mycase/scenario.yaml --format json`,
-		Args: cobra.ExactArgs(1),
+		Args: oneFile("scenario file", "mycase/scenario.yaml --prices mycase/prices.csv"),
 		RunE: func(cmd *cobra.Command, args []string) error {
 			opts.scenario = args[0]
 			return runEstimate(cmd.Context(), opts, cmd.OutOrStdout(), cmd.ErrOrStderr())

@@ -5,6 +5,7 @@ import (
 	"sort"
 	"strings"
 
+	"sepcost/costing/scenario"
 	"sepcost/costing/units"
 )
 
@@ -31,10 +32,16 @@ func (m *massList) Set(s string) error {
 		}
 		v, err := units.ParseAs(part, units.Mass)
 		if err != nil {
-			return fmt.Errorf("--mass %q: %v", part, err)
+			return fmt.Errorf("--mass %s: %v", scenario.Excerpt(part), err)
 		}
 		if v <= 0 {
-			return fmt.Errorf("--mass %q: a batch mass must be above zero", part)
+			return fmt.Errorf("--mass %s: a batch mass must be above zero; it must lie %s", scenario.Excerpt(part), scenario.BatchRange)
+		}
+		if err := scenario.CheckBatchMass(v); err != nil {
+			return fmt.Errorf("--mass %s: %v", scenario.Excerpt(part), err)
+		}
+		if len(m.kg) == scenario.MaxMasses {
+			return fmt.Errorf("--mass: more than %d masses; give at most %d", scenario.MaxMasses, scenario.MaxMasses)
 		}
 		m.kg = append(m.kg, v)
 	}

@@ -7,6 +7,7 @@ import (
 
 	"github.com/spf13/cobra"
 
+	"sepcost/costing/scenario"
 	"sepcost/costing/units"
 	"sepcost/scale"
 )
@@ -34,7 +35,7 @@ bisection on the models), and decides at the scenario's target mass: the
 method, the margin, the largest cost drivers and the prices that would flip it.`,
 		Example: `  sepcost sweep scenario.yaml --prices prices.csv --from 100mg --to 10kg --points 40 -o sweep.xlsx
   sepcost sweep scenario.yaml --format csv > curve.csv`,
-		Args: cobra.ExactArgs(1),
+		Args: oneFile("scenario file", "mycase/scenario.yaml --prices mycase/prices.csv"),
 		RunE: func(cmd *cobra.Command, args []string) error {
 			opts.scenario = args[0]
 			return runSweep(cmd.Context(), opts, cmd.OutOrStdout(), cmd.ErrOrStderr())
@@ -57,11 +58,19 @@ func runSweep(_ context.Context, opts *sweepOptions, stdout, stderr io.Writer) e
 	}
 	from, err := units.ParseAs(opts.from, units.Mass)
 	if err != nil {
-		return usageError{fmt.Errorf("--from %q: %v", opts.from, err)}
+		return usageError{fmt.Errorf("--from %s: %v", scenario.Excerpt(opts.from), err)}
 	}
 	to, err := units.ParseAs(opts.to, units.Mass)
 	if err != nil {
-		return usageError{fmt.Errorf("--to %q: %v", opts.to, err)}
+		return usageError{fmt.Errorf("--to %s: %v", scenario.Excerpt(opts.to), err)}
+	}
+	for _, f := range []struct {
+		flag, text string
+		kg         float64
+	}{{"--from", opts.from, from}, {"--to", opts.to, to}} {
+		if err := scenario.CheckBatchMass(f.kg); err != nil {
+			return usageError{fmt.Errorf("%s %s: %v", f.flag, scenario.Excerpt(f.text), err)}
+		}
 	}
 	if opts.draws < 0 || opts.draws > maxDraws {
 		return usageError{fmt.Errorf("--draws %d: write 0 to skip, or up to %d", opts.draws, maxDraws)}

@@ -172,7 +172,7 @@ func (c *collector) unknown(extra map[string]rawAny, section string, of any) {
 		if line == 0 {
 			line = pathLine(c.root, field)
 		}
-		c.add(line, fieldExcerpt(field), "not a known field; valid fields here: %s", strings.Join(valid, ", "))
+		c.add(line, FieldExcerpt(field), "not a known field; valid fields here: %s", strings.Join(valid, ", "))
 	}
 }
 
@@ -256,9 +256,9 @@ func pathLine(n *yaml.Node, path string) int {
 
 var plainField = regexp.MustCompile(`^[A-Za-z0-9_ .\[\]-]{1,80}$`)
 
-// fieldExcerpt is a field name as written when it is plain, else its
+// FieldExcerpt is a field name as written when it is plain, else its
 // quoted, shortened Excerpt.
-func fieldExcerpt(f string) string {
+func FieldExcerpt(f string) string {
 	if plainField.MatchString(f) {
 		return f
 	}

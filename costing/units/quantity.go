@@ -113,6 +113,9 @@ func ParseUnit(s string) (Unit, error) {
 // needs more, and the bound keeps the exponents from overflowing.
 const MaxExponent = 8
 
+// MaxQuantityLen bounds the length of a quantity as written, in bytes.
+const MaxQuantityLen = 100
+
 // MaxUnitLen bounds the length of a unit expression, in bytes.
 const MaxUnitLen = 64
 
@@ -125,8 +128,13 @@ func addExp(exp *[6]int, d Dim, p, sign int) {
 
 // Parse reads "number unit", e.g. "20 g", "1.5kg", "78 C", "0.75 mL/g".
 // A bare number is refused: quantities in user files carry units.
+// A quantity longer than MaxQuantityLen bytes is refused without being
+// repeated in the message.
 func Parse(s string) (Quantity, Unit, error) {
 	t := strings.TrimSpace(s)
+	if len(t) > MaxQuantityLen {
+		return Quantity{}, Unit{}, fmt.Errorf("%w: a quantity of %d characters; a number and its unit take at most %d", ErrUnit, len(t), MaxQuantityLen)
+	}
 	i := 0
 	for i < len(t) {
 		c := rune(t[i])
