@@ -61,8 +61,12 @@ func run(ctx context.Context, args []string, stdout, stderr io.Writer) error {
 	if err != nil && cmd != nil && isArgError(err) {
 		return usageError{err}
 	}
-	if err == nil && out.err != nil {
-		return fmt.Errorf("writing to standard output: %w; the report is incomplete", out.err)
+	if out.err != nil {
+		werr := fmt.Errorf("writing to standard output: %w; the report is incomplete", out.err)
+		if err == nil || errors.Is(err, out.err) {
+			return werr
+		}
+		return errors.Join(err, werr)
 	}
 	return err
 }
