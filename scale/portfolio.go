@@ -16,6 +16,7 @@ import (
 
 	"sepcost/costing"
 	"sepcost/costing/prices"
+	"sepcost/costing/quote"
 	"sepcost/costing/scenario"
 	"sepcost/costing/units"
 	"sepcost/costing/usage"
@@ -127,7 +128,7 @@ func planHeader(file string, header []string) (map[string]int, []error) {
 	for i, h := range header {
 		name := strings.ToLower(strings.TrimSpace(strings.TrimPrefix(h, "\ufeff")))
 		if !slices.Contains(planColumns, name) {
-			errs = append(errs, &PlanError{File: file, Line: 1, Field: scenario.FieldExcerpt(name), Msg: "unknown column; valid columns: scenario, mass, runs, method"})
+			errs = append(errs, &PlanError{File: file, Line: 1, Field: quote.Field(name), Msg: "unknown column; valid columns: scenario, mass, runs, method"})
 			continue
 		}
 		if first, dup := col[name]; dup {
@@ -161,19 +162,19 @@ func planRow(file string, line int, rec []string, col map[string]int) (PlanRow, 
 	case row.Scenario == "":
 		bad("scenario", "empty; write the path of a scenario file, relative to the plan")
 	case ext != ".yaml" && ext != ".yml":
-		bad("scenario", "%s is not a scenario file; write the path of a .yaml or .yml scenario, relative to the plan", scenario.Excerpt(row.Scenario))
+		bad("scenario", "%s is not a scenario file; write the path of a .yaml or .yml scenario, relative to the plan", quote.Excerpt(row.Scenario))
 	}
 	mass := get("mass")
 	if m, err := units.ParseAs(mass, units.Mass); err != nil {
 		bad("mass", "%v", err)
 	} else if err := scenario.CheckBatchMass(m); err != nil {
-		bad("mass", "%s: %v", scenario.Excerpt(mass), err)
+		bad("mass", "%s: %v", quote.Excerpt(mass), err)
 	} else {
 		row.MassKg = m
 	}
 	runs := get("runs")
 	if n, err := strconv.Atoi(runs); err != nil || n < 0 || n > MaxRunsPerRow {
-		bad("runs", "%s: write how many times the batch is run, a whole number from 0 to %d", scenario.Excerpt(runs), MaxRunsPerRow)
+		bad("runs", "%s: write how many times the batch is run, a whole number from 0 to %d", quote.Excerpt(runs), MaxRunsPerRow)
 	} else {
 		row.Runs = n
 	}

@@ -92,6 +92,9 @@ func TestBadInput(t *testing.T) {
 		{name: "price table with too many items", files: with(map[string]string{"prices.csv": string(templates.Prices) + manyItems(10001)}),
 			args: []string{"check", "{dir}/s.yaml", "--prices", "{dir}/prices.csv"}, code: 1,
 			want: []string{"prices.csv:", "more than 10000 items"}},
+		{name: "long price field is cut short", files: with(map[string]string{"prices.csv": string(templates.Prices) + strings.Repeat("y", 3000) + ",kg,1,EUR,,,\n" + strings.Repeat("y", 3000) + ",kg,1,EUR,,,\n"}),
+			args: []string{"check", "{dir}/s.yaml", "--prices", "{dir}/prices.csv"}, code: 1,
+			want: []string{"prices.csv:", "listed twice", `yyy…"`}, notWant: []string{strings.Repeat("y", 41)}},
 		// 6. Settings without ranges.
 		{name: "share above 100 %", files: setting(`chromatography.mixed_fraction_loss: "150 %"`),
 			args: []string{"check", "{dir}/s.yaml", "--prices", "{dir}/prices.csv"}, code: 1,

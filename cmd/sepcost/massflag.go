@@ -5,6 +5,7 @@ import (
 	"sort"
 	"strings"
 
+	"sepcost/costing/quote"
 	"sepcost/costing/scenario"
 	"sepcost/costing/units"
 )
@@ -32,13 +33,13 @@ func (m *massList) Set(s string) error {
 		}
 		v, err := units.ParseAs(part, units.Mass)
 		if err != nil {
-			return fmt.Errorf("--mass %s: %v", scenario.Excerpt(part), err)
+			return fmt.Errorf("--mass %s: %v", quote.Excerpt(part), err)
 		}
 		if v <= 0 {
-			return fmt.Errorf("--mass %s: a batch mass must be above zero; it must lie %s", scenario.Excerpt(part), scenario.BatchRange)
+			return fmt.Errorf("--mass %s: a batch mass must be above zero; it must lie %s", quote.Excerpt(part), scenario.BatchRange)
 		}
 		if err := scenario.CheckBatchMass(v); err != nil {
-			return fmt.Errorf("--mass %s: %v", scenario.Excerpt(part), err)
+			return fmt.Errorf("--mass %s: %v", quote.Excerpt(part), err)
 		}
 		if len(m.kg) == scenario.MaxMasses {
 			return fmt.Errorf("--mass: more than %d masses; give at most %d", scenario.MaxMasses, scenario.MaxMasses)

@@ -7,6 +7,7 @@ import (
 
 	"github.com/spf13/cobra"
 
+	"sepcost/costing/quote"
 	"sepcost/costing/scenario"
 	"sepcost/costing/units"
 	"sepcost/scale"
@@ -58,18 +59,18 @@ func runSweep(_ context.Context, opts *sweepOptions, stdout, stderr io.Writer) e
 	}
 	from, err := units.ParseAs(opts.from, units.Mass)
 	if err != nil {
-		return usageError{fmt.Errorf("--from %s: %v", scenario.Excerpt(opts.from), err)}
+		return usageError{fmt.Errorf("--from %s: %v", quote.Excerpt(opts.from), err)}
 	}
 	to, err := units.ParseAs(opts.to, units.Mass)
 	if err != nil {
-		return usageError{fmt.Errorf("--to %s: %v", scenario.Excerpt(opts.to), err)}
+		return usageError{fmt.Errorf("--to %s: %v", quote.Excerpt(opts.to), err)}
 	}
 	for _, f := range []struct {
 		flag, text string
 		kg         float64
 	}{{"--from", opts.from, from}, {"--to", opts.to, to}} {
 		if err := scenario.CheckBatchMass(f.kg); err != nil {
-			return usageError{fmt.Errorf("%s %s: %v", f.flag, scenario.Excerpt(f.text), err)}
+			return usageError{fmt.Errorf("%s %s: %v", f.flag, quote.Excerpt(f.text), err)}
 		}
 	}
 	if opts.draws < 0 || opts.draws > maxDraws {

@@ -14,6 +14,7 @@ import (
 
 	"github.com/shopspring/decimal"
 
+	"sepcost/costing/quote"
 	"sepcost/costing/units"
 )
 
@@ -75,7 +76,8 @@ func Read(r io.Reader, file string) (*Table, error) {
 	}
 	var errs Errors
 	add := func(line int, field, format string, args ...any) {
-		errs = append(errs, &Error{File: file, Line: line, Field: field, Msg: fmt.Sprintf(format, args...)})
+		quote.Args(format, args) // the user's text, cut to a short excerpt
+		errs = append(errs, &Error{File: file, Line: line, Field: quote.Field(field), Msg: fmt.Sprintf(format, args...)})
 	}
 
 	// Header.

@@ -2,7 +2,6 @@ package scenario
 
 import (
 	"fmt"
-	"unicode/utf8"
 )
 
 // Batch masses are bounded so that every count the models derive from them
@@ -28,24 +27,4 @@ func CheckBatchMass(kg float64) error {
 		return fmt.Errorf("a batch mass must lie %s", BatchRange)
 	}
 	return nil
-}
-
-// maxExcerpt bounds how much of a user's text a message quotes.
-const maxExcerpt = 40
-
-// Excerpt is s quoted and escaped (control characters shown as escapes,
-// never sent to a terminal raw), cut to its first 40 characters: messages
-// that quote a file quote no more than that.
-func Excerpt(s string) string {
-	if utf8.RuneCountInString(s) <= maxExcerpt {
-		return fmt.Sprintf("%q", s)
-	}
-	n, i := 0, 0
-	for i = range s {
-		if n == maxExcerpt {
-			break
-		}
-		n++
-	}
-	return fmt.Sprintf("%q…", s[:i])
 }

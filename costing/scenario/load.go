@@ -11,6 +11,8 @@ import (
 	"strings"
 
 	"go.yaml.in/yaml/v3"
+
+	"sepcost/costing/quote"
 )
 
 // MaxFileSize caps a scenario file; real ones are a few kilobytes.
@@ -136,7 +138,7 @@ func plainTypeMessage(msg string) string {
 		found = "a value of type " + m[1]
 	}
 	if m[2] != "" {
-		found += " (" + Excerpt(m[2]) + ")"
+		found += " (" + quote.Excerpt(m[2]) + ")"
 	}
 	want := "a single value"
 	switch into := m[3]; {
@@ -172,7 +174,7 @@ func (c *collector) unknown(extra map[string]rawAny, section string, of any) {
 		if line == 0 {
 			line = pathLine(c.root, field)
 		}
-		c.add(line, FieldExcerpt(field), "not a known field; valid fields here: %s", strings.Join(valid, ", "))
+		c.add(line, quote.Field(field), "not a known field; valid fields here: %s", strings.Join(valid, ", "))
 	}
 }
 
@@ -252,15 +254,4 @@ func pathLine(n *yaml.Node, path string) int {
 		}
 	}
 	return line
-}
-
-var plainField = regexp.MustCompile(`^[A-Za-z0-9_ .\[\]-]{1,80}$`)
-
-// FieldExcerpt is a field name as written when it is plain, else its
-// quoted, shortened Excerpt.
-func FieldExcerpt(f string) string {
-	if plainField.MatchString(f) {
-		return f
-	}
-	return Excerpt(f)
 }

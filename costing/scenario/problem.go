@@ -6,6 +6,8 @@ import (
 	"strings"
 
 	"go.yaml.in/yaml/v3"
+
+	"sepcost/costing/quote"
 )
 
 // ErrInvalid is the sentinel that every scenario input error unwraps to.
@@ -62,56 +64,10 @@ type collector struct {
 }
 
 // add records a problem. A string quoted with %q is the user's text: it is
-// cut to a short excerpt (Excerpt), so that no message repeats a file.
+// cut to a short excerpt (quote.Args), so that no message repeats a file.
 func (c *collector) add(line int, field, format string, args ...any) {
-	for _, i := range quotedArgs(format) {
-		if i < len(args) {
-			if s, ok := args[i].(string); ok && len(s) > maxExcerpt {
-				args[i] = excerptText(s)
-			}
-		}
-	}
+	quote.Args(format, args)
 	c.list = append(c.list, &Problem{File: c.file, Line: line, Field: field, Msg: fmt.Sprintf(format, args...)})
-}
-
-// quotedArgs lists the argument indexes that format prints with %q.
-func quotedArgs(format string) []int {
-	var out []int
-	arg := 0
-	for i := 0; i < len(format); i++ {
-		if format[i] != '%' {
-			continue
-		}
-		j := i + 1
-		for j < len(format) && strings.IndexByte("+-# 0123456789.", format[j]) >= 0 {
-			j++
-		}
-		if j >= len(format) {
-			break
-		}
-		if format[j] == '%' {
-			i = j
-			continue
-		}
-		if format[j] == 'q' {
-			out = append(out, arg)
-		}
-		arg++
-		i = j
-	}
-	return out
-}
-
-// excerptText is the first 40 characters of s with "…" after them.
-func excerptText(s string) string {
-	n := 0
-	for i := range s {
-		if n == maxExcerpt {
-			return s[:i] + "…"
-		}
-		n++
-	}
-	return s
 }
 
 func (c *collector) err() error {
