@@ -146,14 +146,14 @@ func Parse(s string) (Quantity, Unit, error) {
 	}
 	num, rest := t[:i], strings.TrimSpace(t[i:])
 	if num == "" {
-		return Quantity{}, Unit{}, fmt.Errorf("%w: %q does not start with a number", ErrUnit, s)
+		return Quantity{}, Unit{}, fmt.Errorf("%w: %q does not start with a number", ErrUnit, t)
 	}
 	v, err := strconv.ParseFloat(num, 64)
 	if err != nil || math.IsNaN(v) || math.IsInf(v, 0) {
 		return Quantity{}, Unit{}, fmt.Errorf("%w: %q is not a number", ErrUnit, num)
 	}
 	if rest == "" {
-		return Quantity{}, Unit{}, fmt.Errorf("%w: %q has no unit", ErrUnit, s)
+		return Quantity{}, Unit{}, fmt.Errorf("%w: %q has no unit", ErrUnit, t)
 	}
 	u, err := ParseUnit(rest)
 	if err != nil {
@@ -161,7 +161,7 @@ func Parse(s string) (Quantity, Unit, error) {
 	}
 	si := v*u.Factor + u.Offset
 	if math.IsInf(si, 0) || math.IsNaN(si) {
-		return Quantity{}, Unit{}, fmt.Errorf("%w: %q is too large to represent", ErrUnit, s)
+		return Quantity{}, Unit{}, fmt.Errorf("%w: %q is too large to represent", ErrUnit, t)
 	}
 	return Quantity{SI: si, Dim: u.Dim}, u, nil
 }
@@ -174,7 +174,7 @@ func ParseAs(s string, want Dim) (float64, error) {
 		return 0, fmt.Errorf("%w; write %s", err, Accepted(want))
 	}
 	if q.Dim != want {
-		return 0, fmt.Errorf("%w: %q is %s, not %s; write %s", ErrUnit, s, q.Dim.Name(), want.Name(), Accepted(want))
+		return 0, fmt.Errorf("%w: %q is %s, not %s; write %s", ErrUnit, strings.TrimSpace(s), q.Dim.Name(), want.Name(), Accepted(want))
 	}
 	return q.SI, nil
 }
