@@ -118,6 +118,8 @@ func TestBadInput(t *testing.T) {
 			want: []string{"--mass", "at most 100"}},
 		{name: "unit powers add up", files: sc, args: []string{"estimate", "{dir}/s.yaml", "--mass", "1 kg^4 kg^4 kg^4"}, code: 2,
 			want: []string{"--mass", "powers from -8 to 8"}},
+		{name: "target too large", files: sc, args: []string{"estimate", "{dir}/s.yaml", "--target", "1e30 kg"}, code: 2,
+			want: []string{"--target", "from 1 mg to 10 t"}},
 		{name: "sweep from too large", files: sc, args: []string{"sweep", "{dir}/s.yaml", "--from", "1e30 kg", "--to", "1e31 kg"}, code: 2,
 			want: []string{"--from", "from 1 mg to 10 t"}},
 		{name: "scenario mass too large", files: with(map[string]string{"s.yaml": strings.Replace(caseScenario, `["20 g"]`, `["20 g", "7e17 kg"]`, 1)}),
