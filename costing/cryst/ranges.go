@@ -36,13 +36,11 @@ var ranges = map[string][2]float64{
 	KeyHeatAttended:    {0, 1},           // share
 	KeyCoolAttended:    {0, 1},           // share
 	KeyFilterSetup:     {0, 172800},      // s
-	KeyFilterFlux:      {1e-7, 1e-2},     // m/s: 0.36 L/(m² h) to 36 m³/(m² h); never zero
 	KeyCakeDepth:       {0.002, 1},       // m
 	KeyMinFilterArea:   {1e-4, 10},       // m²: 1 cm² to 10 m²
 	KeyFilterAttended:  {0, 1},           // share
 	KeyCheckTime:       {0, 172800},      // s
 	KeyCleanTime:       {0, 172800},      // s
-	KeyDryingTime:      {0, 604800},      // s: up to a week
 	KeyDryAttended:     {0, 1},           // share
 	KeyDryWarmup:       {0, 200},         // K
 	KeyHeaterEff:       {0.01, 1},        // share; never zero
