@@ -66,5 +66,5 @@ func Calibrate(bedHeight, bedDensity float64) Calibration {
 func AddCalibration(coef source.Set) {
 	cal := Calibrate(coef.Get(KeyRefBed), coef.Get(KeyBedDensity))
 	fit := fmt.Sprintf("fitted here so that the touching-band loading of elution theory reproduces the sample loads of Still, Kahn and Mitra 1978 Table 1 (both ΔRf classes, all five diameters; reference crude: product Rf 0.35, impurity ΔRf above it, equal amounts); largest deviation %.0f %%, rms %.0f %% in ln(load)", cal.MaxError*100, cal.RMSLog*100)
-	coef.Put(source.Coefficient{Key: KeyQs, Method: Method, Label: "effective saturation capacity of silica", SI: cal.Qs, Dim: units.None, Unit: "", Source: fit, Mark: source.Calibrated, Lo: 1e-4, Hi: 0.5})
+	coef.Put(source.Coefficient{Key: KeyQs, Method: Method, Label: "effective saturation capacity of silica", SI: cal.Qs, Dim: units.None, Unit: "", Source: fit, Mark: source.Calibrated, Lo: ranges[KeyQs][0], Hi: ranges[KeyQs][1]})
 }

@@ -48,11 +48,12 @@ const (
 // calibrated saturation capacity is added by Prepare (AddCalibration).
 func Defaults() []source.Coefficient {
 	c := func(key, label string, si float64, dim units.Dim, unit, src string, mark source.Mark) source.Coefficient {
-		return source.Coefficient{Key: key, Method: Method, Label: label, SI: si, Dim: dim, Unit: unit, Source: src, Mark: mark}
+		lo, hi := rangeOf(key)
+		return source.Coefficient{Key: key, Method: Method, Label: label, SI: si, Dim: dim, Unit: unit, Source: src, Mark: mark, Lo: lo, Hi: hi}
 	}
 	still := "Still, W. C.; Kahn, M.; Mitra, A. J. Org. Chem. 1978, 43, 2923"
 	return append([]source.Coefficient{
-		r(c(KeyRefBed, "bed height of Still's columns (the calibration's reference, not the column packed here)", 0.15, units.Length, "cm", still+`: a bed of about 5–6 in`, source.FromMemory), 0.05, 0.50),
+		c(KeyRefBed, "bed height of Still's columns (the calibration's reference, not the column packed here)", 0.15, units.Length, "cm", still+`: a bed of about 5–6 in`, source.FromMemory),
 		c(KeyBedMin, "shortest bed packed", 0.10, units.Length, "cm", "beds much below 10 cm resolve poorly", source.CommonPractice),
 		c(KeyBedMax, "tallest bed packed before a wider column is taken", 0.20, units.Length, "cm", "flash beds of about 10–20 cm", source.CommonPractice),
 		c(KeyBedDensity, "packed bed density of silica gel 60", 500, units.Density, "g/mL", "typical 0.45–0.55 g/mL for 40–63 µm silica gel 60", source.FromMemory),
@@ -84,10 +85,4 @@ func Defaults() []source.Coefficient {
 		c(KeyPlateMass, "mass of one TLC plate (waste)", 2e-3, units.Mass, "g", "aluminium-backed silica plate, 5 × 10 cm", source.CommonPractice),
 		c(KeyRouteTolerance, "factor by which the two loading rules may differ before a warning", 2, units.None, "", "two estimates of the same quantity a factor of two apart are worth a look", source.CommonPractice),
 	}, scaleDefaults(c)...)
-}
-
-// r gives a coefficient its physical range (SI, inclusive).
-func r(c source.Coefficient, lo, hi float64) source.Coefficient {
-	c.Lo, c.Hi = lo, hi
-	return c
 }

@@ -17,6 +17,11 @@ import (
 // writes them; a file may order them freely (any letter case), naming all.
 var Columns = []string{"item", "kind", "size", "throughput", "max_load", "hourly_rate", "ownership", "price", "currency", "service_life", "source"}
 
+// MaxFileSize is the largest equipment table read (1 MiB): a site lists
+// hundreds of items, not millions; a larger file is refused before it is
+// read.
+const MaxFileSize = 1 << 20
+
 // Ownership values.
 const (
 	OwnedWord = "owned"
