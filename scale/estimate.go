@@ -61,6 +61,12 @@ func EstimateWith(p *costing.Plan, t *prices.Table, massesKg []float64, opt Opti
 		}
 		r.Decision.weigh(r.Uncertainty)
 	}
+	if sc.Campaign != nil {
+		if r.Campaign, err = RunCampaign(p, t, sc.Campaign); err != nil {
+			return nil, err
+		}
+		r.Decision.onCampaign(r.Campaign)
+	}
 	for _, in := range sc.Inputs {
 		r.Inputs = append(r.Inputs, Input(in))
 	}

@@ -39,4 +39,5 @@ type Report struct {
 	Waste        []WasteRow   // every stream of every feasible result, classified
 	Greenness    []SolventGreenness
 	WasteSector  string // the EU List of Waste chapter used for the codes
+	Campaign     *CampaignReport // the scenario's campaign (nil when it describes none)
 }

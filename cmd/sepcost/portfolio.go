@@ -27,12 +27,16 @@ func newPortfolioCommand() *cobra.Command {
 	cmd := &cobra.Command{
 		Use:   "portfolio PLAN.csv",
 		Short: "Cost a year's plan of batches and roll up cost, waste, solvent and hours",
-		Long: `Reads a plan CSV with the header scenario,mass,runs and an optional method
-column: a scenario file (relative to the plan), a batch mass with its unit,
-how many times that batch is run, and optionally the method to force. Each
-row takes the cheapest feasible method at its mass unless forced. The
-roll-up gives cost per method, waste by class and by suggested code, solvent
-purchases by solvent and hours; totals reconcile to the cent.`,
+		Long: `Reads a plan CSV with the header scenario,mass,runs and the optional
+columns method, date and development: a scenario file (relative to the
+plan), a batch mass with its unit, how many times that batch is run,
+optionally the method to force, the planned date (YYYY-MM-DD, rolled up by
+quarter) and where one-time development costs are charged (scenario: once
+per scenario and method in the plan, the default; row: on this row; done:
+already developed). Each row is costed as a campaign of its runs and takes
+the method cheapest per gram over that campaign unless forced. The roll-up
+gives cost per method and quarter, waste by class and by suggested code,
+solvent purchases by solvent and hours; totals reconcile to the cent.`,
 		Example: `  sepcost portfolio plan.csv --prices prices.csv -o year.xlsx`,
 		Args:    cobra.ExactArgs(1),
 		RunE: func(cmd *cobra.Command, args []string) error {
