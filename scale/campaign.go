@@ -58,6 +58,10 @@ type CampaignMap struct {
 	Batches  []int
 	Winner   [][]string // [mass][batches]; "" when no method is feasible
 	PerGram  [][]float64
+	// Payback gives, for each method with start-up costs, the batches
+	// after which it pays back against chromatography at each mass (one
+	// batch's price bands); 0 when it never does or cannot run there.
+	Payback map[string][]int
 }
 
 // MapBatches are the campaign sizes the map shows (common practice, no
@@ -65,7 +69,7 @@ type CampaignMap struct {
 var MapBatches = []int{1, 2, 5, 10, 20, 50, 100}
 
 // MapPoints is the number of batch masses the map shows.
-const MapPoints = 9
+const MapPoints = 13
 
 // shiftsOf turns the scenario's campaign hours into campaign.Shifts.
 func shiftsOf(sp *scenario.Campaign) campaign.Shifts {
@@ -77,8 +81,8 @@ func shiftsOf(sp *scenario.Campaign) campaign.Shifts {
 // times as sp.ProductKg needs with that method's recovery; one-time costs
 // once; the decision on cost per gram over the campaign; the payback of
 // each method with start-up costs against staying with chromatography;
-// and the map of winners over batch mass (a decade either side of the
-// batch mass) and MapBatches.
+// and the map of winners over batch mass (the scenario's masses and a
+// decade either side of the batch mass) and MapBatches.
 func RunCampaign(p *costing.Plan, t *prices.Table, sp *scenario.Campaign) (*CampaignReport, error) {
 	cr := &CampaignReport{Spec: *sp, Shifts: shiftsOf(sp), Infeasible: map[string]string{}}
 	for j, name := range p.MethodNames() {
@@ -104,6 +108,9 @@ func RunCampaign(p *costing.Plan, t *prices.Table, sp *scenario.Campaign) (*Camp
 	cr.decide(t.Currency)
 	cr.paybacks()
 	lo, hi := sp.BatchKg/10, sp.BatchKg*10
+	if ms := p.Scenario.MassesKg; len(ms) > 0 {
+		lo, hi = math.Min(lo, ms[0]), math.Max(hi, ms[len(ms)-1])
+	}
 	masses, err := LogSpace(lo, hi, MapPoints)
 	if err != nil {
 		return nil, err
@@ -118,7 +125,7 @@ func RunCampaign(p *costing.Plan, t *prices.Table, sp *scenario.Campaign) (*Camp
 func (cr *CampaignReport) decide(cur string) {
 	order := append([]campaign.Cost(nil), cr.Costs...)
 	sort.SliceStable(order, func(a, b int) bool { return order[a].PerGram < order[b].PerGram })
-	what := fmt.Sprintf("%d batches of %s", cr.Spec.Batches, scenario.FormatMass(cr.Spec.BatchKg))
+	what := plural(cr.Spec.Batches, "batch", "batches") + " of " + scenario.FormatMass(cr.Spec.BatchKg)
 	if cr.Spec.ProductKg > 0 {
 		what = fmt.Sprintf("%s of purified product from batches of %s", scenario.FormatMass(cr.Spec.ProductKg), scenario.FormatMass(cr.Spec.BatchKg))
 	}
@@ -128,8 +135,8 @@ func (cr *CampaignReport) decide(cur string) {
 	}
 	w := order[0]
 	cr.Winner = w.Method
-	line := fmt.Sprintf("For the campaign (%s), %s costs %s %s in %d batches (%.2f %s per gram, one-time costs %s charged once; %.1f working days, %.1f person-days)",
-		what, w.Method, w.Total.StringFixed(w.Ledger.Places), cur, w.Batches, w.PerGram, cur, w.OneTime.StringFixed(w.Ledger.Places), w.WorkingDays, w.PersonDays)
+	line := fmt.Sprintf("For the campaign (%s), %s costs %s %s in %s (%.2f %s per gram, one-time costs %s charged once; at least %.1f working days, %.1f person-days)",
+		what, w.Method, w.Total.StringFixed(w.Ledger.Places), cur, plural(w.Batches, "batch", "batches"), w.PerGram, cur, w.OneTime.StringFixed(w.Ledger.Places), w.WorkingDays, w.PersonDays)
 	if len(order) > 1 {
 		r := order[1]
 		cr.RunnerUp = r.Method
@@ -158,7 +165,7 @@ func (cr *CampaignReport) paybacks() {
 		pb := Payback{Method: c.Method, Against: stay.Method, Batches: n, Never: !ok}
 		cr.Paybacks = append(cr.Paybacks, pb)
 		if ok {
-			cr.Explanation = append(cr.Explanation, fmt.Sprintf("Developing %s pays for itself after %d batches of %s: from then on it is at most as dear per gram as staying with %s.", c.Method, n, scenario.FormatMass(c.BatchKg), stay.Method))
+			cr.Explanation = append(cr.Explanation, fmt.Sprintf("Developing %s pays for itself from %s of %s on: from then on it is at most as dear per gram as staying with %s.", c.Method, plural(n, "batch", "batches"), scenario.FormatMass(c.BatchKg), stay.Method))
 		} else {
 			cr.Explanation = append(cr.Explanation, fmt.Sprintf("Developing %s never pays for itself at %s per batch: each batch costs more per gram than staying with %s.", c.Method, scenario.FormatMass(c.BatchKg), stay.Method))
 		}
@@ -169,8 +176,8 @@ func (cr *CampaignReport) paybacks() {
 // campaigns of each number of batches; the winner is the cheapest per gram
 // over the campaign.
 func campaignMap(p *costing.Plan, t *prices.Table, masses []float64, batches []int, sh campaign.Shifts) (*CampaignMap, error) {
-	m := &CampaignMap{MassesKg: masses, Batches: batches}
-	for _, mass := range masses {
+	m := &CampaignMap{MassesKg: masses, Batches: batches, Payback: map[string][]int{}}
+	for i, mass := range masses {
 		us := make([]usage.Usage, 0, len(p.Methods))
 		for j := range p.Methods {
 			if u := p.Methods[j].Run(mass); u.Feasible && u.ProductOutKg > 0 {
@@ -193,8 +200,42 @@ func campaignMap(p *costing.Plan, t *prices.Table, masses []float64, batches []i
 		}
 		m.Winner = append(m.Winner, ws)
 		m.PerGram = append(m.PerGram, pgs)
+		if err := m.paybackAt(i, us, t, sh); err != nil {
+			return nil, err
+		}
 	}
 	return m, nil
+}
+
+// paybackAt fills the payback of each method with start-up costs against
+// chromatography at mass i from the methods' usages there.
+func (m *CampaignMap) paybackAt(i int, us []usage.Usage, t *prices.Table, sh campaign.Shifts) error {
+	costs := make([]campaign.Cost, len(us))
+	var stay *campaign.Cost
+	for k, u := range us {
+		c, err := campaign.Run(u, t, 1, decimal.Zero, sh)
+		if err != nil {
+			return err
+		}
+		costs[k] = c
+		if u.Method == chrom.Method {
+			stay = &costs[k]
+		}
+	}
+	for _, c := range costs {
+		if c.Method == chrom.Method || !c.OneTime.Add(c.Capital).IsPositive() {
+			continue
+		}
+		if m.Payback[c.Method] == nil {
+			m.Payback[c.Method] = make([]int, len(m.MassesKg))
+		}
+		if stay != nil {
+			if n, ok := campaign.Payback(c, *stay); ok {
+				m.Payback[c.Method][i] = n
+			}
+		}
+	}
+	return nil
 }
 
 // onCampaign makes the decision on the campaign: the winner is the method
@@ -221,4 +262,12 @@ func (d *Decision) onCampaign(cr *CampaignReport) {
 		lines = append(lines, "The campaign changes the answer for one batch bearing all one-time costs; the lines below are for one batch.")
 	}
 	d.Explanation = append(lines, d.Explanation...)
+}
+
+// plural writes "1 batch", "4 batches".
+func plural(n int, one, many string) string {
+	if n == 1 {
+		return "1 " + one
+	}
+	return fmt.Sprintf("%d %s", n, many)
 }

@@ -66,6 +66,9 @@ func EstimateWith(p *costing.Plan, t *prices.Table, massesKg []float64, opt Opti
 			return nil, err
 		}
 		r.Decision.onCampaign(r.Campaign)
+		if w, ok := r.Campaign.Cost(r.Campaign.Winner); ok {
+			r.Budget = NewBudget(w, r.Uncertainty)
+		}
 	}
 	for _, in := range sc.Inputs {
 		r.Inputs = append(r.Inputs, Input(in))

@@ -38,6 +38,7 @@ type Report struct {
 	Uncertainty  *Uncertainty // Monte Carlo bands at TargetKg (nil when not sampled)
 	Waste        []WasteRow   // every stream of every feasible result, classified
 	Greenness    []SolventGreenness
-	WasteSector  string // the EU List of Waste chapter used for the codes
+	WasteSector  string          // the EU List of Waste chapter used for the codes
 	Campaign     *CampaignReport // the scenario's campaign (nil when it describes none)
+	Budget       *Budget         // the request for the campaign's chosen method (nil without a campaign)
 }

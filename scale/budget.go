@@ -1,0 +1,81 @@
+package scale
+
+import (
+	"math"
+
+	"github.com/shopspring/decimal"
+
+	"sepcost/costing/usage"
+	"sepcost/scale/campaign"
+)
+
+// Budget is the request for the campaign of the chosen method, by what
+// the money is for. Capital + Consumables + Labour + Disposal +
+// ProductLost + OneTime = Subtotal, the campaign's cost exactly; the
+// contingency is added on top.
+type Budget struct {
+	Method    string
+	Batches   int
+	BatchKg   float64
+	ProductKg float64
+	Currency  string
+	Places    int32
+	Cost      campaign.Cost // the campaign priced: one batch's ledger, batches, one-time costs
+
+	Capital     decimal.Decimal // equipment bought for the campaign
+	Consumables decimal.Decimal // materials, energy and credits for recovered solvent, × batches
+	Labour      decimal.Decimal // hands-on time × batches
+	Disposal    decimal.Decimal // waste disposal × batches
+	ProductLost decimal.Decimal // value of the product not recovered × batches (not a purchase)
+	OneTime     decimal.Decimal // development, once
+	Subtotal    decimal.Decimal
+	// ContingencyShare is (P90 − P50) / P50 of the method's cost per gram
+	// at the target mass in the Monte Carlo draws (0 when not sampled);
+	// Contingency = round(Subtotal × ContingencyShare).
+	ContingencyShare float64
+	P50, P90         float64
+	Contingency      decimal.Decimal
+	Total            decimal.Decimal // Subtotal + Contingency
+}
+
+// BudgetGroups says which ledger groups each budget heading gathers.
+var BudgetGroups = map[string][]usage.Group{
+	"consumables":  {usage.Materials, usage.Energy, usage.Credit},
+	"labour":       {usage.Labour},
+	"disposal":     {usage.Disposal},
+	"product lost": {usage.ProductLoss},
+	"one-time":     {usage.OneTime},
+}
+
+// NewBudget builds the budget of a campaign. u, when not nil, gives the
+// contingency from the method's band at the target mass: the cost above
+// the median that one draw in ten exceeds, a common way of sizing a
+// contingency from a cost distribution (P90 − P50; common practice, no
+// source).
+func NewBudget(c campaign.Cost, u *Uncertainty) *Budget {
+	l := c.Ledger
+	n := decimal.NewFromInt(int64(c.Batches))
+	sum := func(head string) decimal.Decimal {
+		s := decimal.Zero
+		for _, g := range BudgetGroups[head] {
+			s = s.Add(l.Subtotal(g))
+		}
+		return s
+	}
+	b := &Budget{Method: c.Method, Batches: c.Batches, BatchKg: c.BatchKg, ProductKg: c.ProductKg, Currency: l.Currency, Places: l.Places, Cost: c,
+		Capital: c.Capital, Consumables: sum("consumables").Mul(n), Labour: sum("labour").Mul(n), Disposal: sum("disposal").Mul(n),
+		ProductLost: sum("product lost").Mul(n), OneTime: sum("one-time")}
+	b.Subtotal = b.Capital.Add(b.Consumables).Add(b.Labour).Add(b.Disposal).Add(b.ProductLost).Add(b.OneTime)
+	if u != nil {
+		for _, band := range u.Bands {
+			if band.Method == c.Method && band.P50 > 0 && !math.IsNaN(band.P90) {
+				b.P50, b.P90 = band.P50, band.P90
+				b.ContingencyShare = math.Max(band.P90/band.P50-1, 0)
+			}
+		}
+	}
+	// The same float product a spreadsheet forms, rounded as ROUND does.
+	b.Contingency = decimal.NewFromFloat(b.Subtotal.InexactFloat64() * b.ContingencyShare).Round(b.Places)
+	b.Total = b.Subtotal.Add(b.Contingency)
+	return b
+}
