@@ -20,6 +20,8 @@ type jsonReport struct {
 	Batches    []jsonBatch     `json:"batches"`
 	Decision   *jsonDecision   `json:"decision,omitempty"`
 	Crossovers []jsonCrossover `json:"crossovers,omitempty"`
+	Campaign   *jsonCampaign   `json:"campaign,omitempty"`
+	Budget     *jsonBudget     `json:"budget,omitempty"`
 	Cautions   []string        `json:"cautions"`
 }
 
@@ -153,6 +155,7 @@ func JSON(w io.Writer, r *scale.Report) error {
 	for _, c := range r.Crossovers {
 		out.Crossovers = append(out.Crossovers, jsonCrossover{c.MassKg, c.CheaperBelow, c.CheaperAbove, c.Step})
 	}
+	out.Campaign, out.Budget = campaignJSON(r)
 	enc := json.NewEncoder(w)
 	enc.SetIndent("", "  ")
 	return enc.Encode(out)

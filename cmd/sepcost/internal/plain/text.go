@@ -80,6 +80,7 @@ func Text(w io.Writer, r *scale.Report) error {
 			ew.printf("  %s: %s is %.0f %% of the cost\n", dr.Method, dr.Item, dr.Share*100)
 		}
 	}
+	campaignText(ew, r)
 	if r.IsSweep {
 		ew.printf("\nCrossovers (cost per gram of purified product):\n")
 		if len(r.Crossovers) == 0 {
