@@ -10,6 +10,7 @@ import (
 	"github.com/shopspring/decimal"
 
 	"sepcost/costing"
+	"sepcost/costing/ledger"
 	"sepcost/costing/prices"
 	"sepcost/costing/scenario"
 	"sepcost/costing/usage"
@@ -30,7 +31,7 @@ func loaderFor(t *testing.T, files map[string][]byte) Loader {
 	}
 }
 
-// Portfolio totals reconcile to the cent with the estimates: each row is
+// Portfolio totals reconcile to the cent with the ledger: each row is
 // runs × (the batch's ledger total less its one-time lines), plus the
 // one-time lines once per scenario and method in the plan (identity).
 func TestPortfolioReconciles(t *testing.T) {
@@ -49,16 +50,16 @@ func TestPortfolioReconciles(t *testing.T) {
 	charged := map[string]bool{}
 	for i, row := range rows {
 		p, _ := loaderFor(t, files)(row.Scenario)
-		est, err := Estimate(p, pt, []float64{row.MassKg})
-		if err != nil {
-			t.Fatal(err)
-		}
 		method := pf.Lines[i].Method
-		for k, n := range est.Methods {
+		for k, n := range p.MethodNames() {
 			if n != method {
 				continue
 			}
-			l := est.Results[0][k].Ledger
+			// One batch priced at the bands of the row's purchases.
+			l, err := ledger.PriceCampaign(p.Methods[k].Run(row.MassKg), pt, row.Runs)
+			if err != nil {
+				t.Fatal(err)
+			}
 			ot := l.Subtotal(usage.OneTime)
 			sum = sum.Add(l.Total.Sub(ot).Mul(decimal.NewFromInt(int64(row.Runs))))
 			if key := row.Scenario + method; !charged[key] {
@@ -161,13 +162,18 @@ func TestPortfolioChoosesOnCampaign(t *testing.T) {
 		}
 		best, bestPG := "", 0.0
 		for j, name := range p.MethodNames() {
-			r, err := p.RunOne(j, 0.05, pt)
-			if err != nil || !r.Usage.Feasible {
+			u := p.Methods[j].Run(0.05)
+			if !u.Feasible {
 				continue
 			}
-			ot := r.Ledger.Subtotal(usage.OneTime)
-			total := r.Ledger.Total.Sub(ot).Mul(decimal.NewFromInt(int64(runs))).Add(ot)
-			pg := total.InexactFloat64() / (float64(runs) * r.Usage.ProductOutKg * 1000)
+			// Priced at the bands of the row's purchases (runs batches).
+			l, err := ledger.PriceCampaign(u, pt, runs)
+			if err != nil {
+				t.Fatal(err)
+			}
+			ot := l.Subtotal(usage.OneTime)
+			total := l.Total.Sub(ot).Mul(decimal.NewFromInt(int64(runs))).Add(ot)
+			pg := total.InexactFloat64() / (float64(runs) * u.ProductOutKg * 1000)
 			if best == "" || pg < bestPG {
 				best, bestPG = name, pg
 			}

@@ -48,12 +48,12 @@ func TestPriceBands(t *testing.T) {
 	}{
 		// One batch: 80.3 + 10.2 = 90.5 L → can band (25 L up), 7.50 €/L:
 		// 80.3 × 7.50 = 602.25; 10.2 × 7.50 = 76.50.
-		{1, 1, "602.25", "76.50", "band from 25"},
+		{1, 1, "602.25", "76.50", "from 25"},
 		// Two batches: 2 × 80.3 + 10.2 = 170.8 L, still the can band.
-		{2, 1, "602.25", "76.50", "band from 25"},
+		{2, 1, "602.25", "76.50", "from 25"},
 		// Three batches: 3 × 80.3 + 10.2 = 251.1 L ≥ 200 L → drum, 4.10 €/L:
 		// 80.3 × 4.10 = 329.23; 10.2 × 4.10 = 41.82.
-		{3, 2, "329.23", "41.82", "band from 200 L"},
+		{3, 2, "329.23", "41.82", "from 200 L"},
 	}
 	for _, c := range cases {
 		l, err := ledger.PriceCampaign(u, tb, c.batches)
@@ -78,7 +78,7 @@ func TestPriceBands(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	if l.Lines[0].PriceRow != 0 || l.Total.StringFixed(2) != "0.12" || l.Lines[0].Band != "first band (from zero)" {
+	if l.Lines[0].PriceRow != 0 || l.Total.StringFixed(2) != "0.12" || l.Lines[0].Band != "from zero" {
 		t.Errorf("small purchase: row %d, total %s, band %q; want row 0, 0.12, the first band", l.Lines[0].PriceRow, l.Total.StringFixed(2), l.Lines[0].Band)
 	}
 }

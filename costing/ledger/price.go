@@ -196,9 +196,9 @@ func band(t *prices.Table, idx int) string {
 		return ""
 	}
 	if it.FromSI == 0 {
-		return "first band (from zero)"
+		return "from zero"
 	}
-	return "band from " + it.From
+	return "from " + it.From
 }
 
 // joinErrors is nil for none, the error itself for one, else errors.Join.

@@ -181,18 +181,8 @@ func Read(r io.Reader, file string) (*Table, error) {
 		if it.From != "" && it.Per.Dim != (units.Dim{}) {
 			it.FromSI, _ = checkFrom(it.From, it.Per, line, add)
 		}
-		if _, ok := col["item"]; ok {
-			key := nameKey(it.Name) + "\x00" + strconv.FormatFloat(it.FromSI, 'g', -1, 64)
-			if first, dup := firstLine[key]; dup {
-				again := "keep one line per item, or give each line its own from (the purchase from which its price applies)"
-				if firstName[key] == it.Name {
-					add(line, "item", "%q is listed twice, on lines %d and %d, from the same purchase; %s", it.Name, first, line, again)
-				} else {
-					add(line, "item", "%q is listed twice, on line %d as %q and on line %d (names are compared without regard to letter case), from the same purchase; %s", it.Name, first, firstName[key], line, again)
-				}
-				continue
-			}
-			firstLine[key], firstName[key] = line, it.Name
+		if _, ok := col["item"]; ok && !firstOf(it, firstName, firstLine, add) {
+			continue
 		}
 		if len(errs) == nBefore {
 			t.Items = append(t.Items, it)
@@ -316,6 +306,24 @@ func checkUnit(s string, line int, add func(int, string, string, ...any)) (units
 	}
 	add(line, "unit", "%q is a unit of %s; a price is per unit of mass, volume, count, time or energy: write one of %s", s, u.Dim.Name(), validUnits)
 	return units.Unit{}, false
+}
+
+// firstOf records an item's line under its name and band, or reports that
+// the same name and band was listed before and returns false.
+func firstOf(it Item, firstName map[string]string, firstLine map[string]int, add func(int, string, string, ...any)) bool {
+	key := nameKey(it.Name) + "\x00" + strconv.FormatFloat(it.FromSI, 'g', -1, 64)
+	first, dup := firstLine[key]
+	if !dup {
+		firstLine[key], firstName[key] = it.Line, it.Name
+		return true
+	}
+	again := "keep one line per item, or give each line its own from (the purchase from which its price applies)"
+	if firstName[key] == it.Name {
+		add(it.Line, "item", "%q is listed twice, on lines %d and %d, from the same purchase; %s", it.Name, first, it.Line, again)
+	} else {
+		add(it.Line, "item", "%q is listed twice, on line %d as %q and on line %d (names are compared without regard to letter case), from the same purchase; %s", it.Name, first, firstName[key], it.Line, again)
+	}
+	return false
 }
 
 // checkFrom reads the purchase from which a price band applies: a
