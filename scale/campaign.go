@@ -85,15 +85,23 @@ func shiftsOf(sp *scenario.Campaign) campaign.Shifts {
 // decade either side of the batch mass) and MapBatches.
 func RunCampaign(p *costing.Plan, t *prices.Table, sp *scenario.Campaign) (*CampaignReport, error) {
 	cr := &CampaignReport{Spec: *sp, Shifts: shiftsOf(sp), Infeasible: map[string]string{}}
+	// The site's table (prices with the equipment's charges) prices every
+	// ledger, as the plan's own runs do.
+	t, err := p.SitePrices(t)
+	if err != nil {
+		return nil, err
+	}
 	for j, name := range p.MethodNames() {
-		u := p.Methods[j].Run(sp.BatchKg)
+		u, err := chosen(p, j, sp.BatchKg, t)
+		if err != nil {
+			return nil, err
+		}
 		if !u.Feasible || u.ProductOutKg <= 0 {
 			cr.Infeasible[name] = u.Reason
 			continue
 		}
 		n := sp.Batches
 		if n == 0 {
-			var err error
 			if n, err = campaign.BatchesFor(sp.ProductKg, u.ProductOutKg); err != nil {
 				cr.Infeasible[name] = err.Error()
 				continue
@@ -180,7 +188,11 @@ func campaignMap(p *costing.Plan, t *prices.Table, masses []float64, batches []i
 	for i, mass := range masses {
 		us := make([]usage.Usage, 0, len(p.Methods))
 		for j := range p.Methods {
-			if u := p.Methods[j].Run(mass); u.Feasible && u.ProductOutKg > 0 {
+			u, err := chosen(p, j, mass, t)
+			if err != nil {
+				return nil, err
+			}
+			if u.Feasible && u.ProductOutKg > 0 {
 				us = append(us, u)
 			}
 		}
@@ -270,4 +282,12 @@ func plural(n int, one, many string) string {
 		return "1 " + one
 	}
 	return fmt.Sprintf("%d %s", n, many)
+}
+
+// chosen is the usage of method j at a mass as the plan runs it: for a
+// method with several candidate plans (equipment, loading), the one the
+// plan chooses as cheapest per gram for one batch.
+func chosen(p *costing.Plan, j int, kg float64, t *prices.Table) (usage.Usage, error) {
+	r, err := p.RunOne(j, kg, t)
+	return r.Usage, err
 }

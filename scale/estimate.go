@@ -29,6 +29,12 @@ func Estimate(p *costing.Plan, t *prices.Table, massesKg []float64) (*Report, er
 
 // EstimateWith is Estimate with chosen sampling options.
 func EstimateWith(p *costing.Plan, t *prices.Table, massesKg []float64, opt Options) (*Report, error) {
+	// The report holds the price table with the site equipment's charges,
+	// so that every ledger line points into it.
+	t, err := p.SitePrices(t)
+	if err != nil {
+		return nil, err
+	}
 	res, err := p.Run(massesKg, t)
 	if err != nil {
 		return nil, err

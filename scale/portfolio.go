@@ -450,7 +450,14 @@ func costRow(p *costing.Plan, row PlanRow, t *prices.Table, charged map[string]b
 // row pays the method's one-time costs. A method that is not feasible
 // gives its reason instead.
 func costMethod(p *costing.Plan, j int, row PlanRow, t *prices.Table, bears bool) (*rowCost, string, error) {
-	u := p.Methods[j].Run(row.MassKg)
+	t, err := p.SitePrices(t)
+	if err != nil {
+		return nil, "", err
+	}
+	u, err := chosen(p, j, row.MassKg, t)
+	if err != nil {
+		return nil, "", err
+	}
 	if !u.Feasible || u.ProductOutKg <= 0 {
 		return nil, u.Reason, nil
 	}

@@ -56,7 +56,12 @@ func TestPortfolioReconciles(t *testing.T) {
 				continue
 			}
 			// One batch priced at the bands of the row's purchases.
-			l, err := ledger.PriceCampaign(p.Methods[k].Run(row.MassKg), pt, row.Runs)
+			st, _ := p.SitePrices(pt)
+			r, err := p.RunOne(k, row.MassKg, pt)
+			if err != nil {
+				t.Fatal(err)
+			}
+			l, err := ledger.PriceCampaign(r.Usage, st, row.Runs)
 			if err != nil {
 				t.Fatal(err)
 			}
@@ -162,12 +167,17 @@ func TestPortfolioChoosesOnCampaign(t *testing.T) {
 		}
 		best, bestPG := "", 0.0
 		for j, name := range p.MethodNames() {
-			u := p.Methods[j].Run(0.05)
+			r, err := p.RunOne(j, 0.05, pt)
+			if err != nil {
+				t.Fatal(err)
+			}
+			u := r.Usage
 			if !u.Feasible {
 				continue
 			}
 			// Priced at the bands of the row's purchases (runs batches).
-			l, err := ledger.PriceCampaign(u, pt, runs)
+			st, _ := p.SitePrices(pt)
+			l, err := ledger.PriceCampaign(u, st, runs)
 			if err != nil {
 				t.Fatal(err)
 			}

@@ -11,14 +11,15 @@ import (
 )
 
 type estimateOptions struct {
-	scenario string
-	prices   string
-	masses   massList
-	out      string
-	format   string
-	force    bool
-	draws    int
-	seed     uint64
+	scenario  string
+	prices    string
+	equipment string
+	masses    massList
+	out       string
+	format    string
+	force     bool
+	draws     int
+	seed      uint64
 }
 
 func newEstimateCommand() *cobra.Command {
@@ -39,6 +40,7 @@ the file's extension (.xlsx, .json, .csv) unless --format says otherwise.`,
 	}
 	f := cmd.Flags()
 	f.StringVar(&opts.prices, "prices", "", "price table CSV (default: prices.csv beside the scenario)")
+	f.StringVar(&opts.equipment, "equipment", "", "site equipment table CSV (default: equipment.csv beside the scenario if there is one, else the built-in table)")
 	f.Var(&opts.masses, "mass", `crude batch masses with units, e.g. "250mg,20g,2kg" (default: the scenario's masses)`)
 	addOutputFlags(cmd, &opts.out, &opts.format, &opts.force)
 	addDrawFlags(cmd, &opts.draws, &opts.seed)
@@ -68,7 +70,7 @@ func runEstimate(_ context.Context, opts *estimateOptions, stdout, stderr io.Wri
 	if err != nil {
 		return err
 	}
-	plan, t, err := loadPlan(opts.scenario, opts.prices)
+	plan, t, err := loadPlan(opts.scenario, opts.prices, opts.equipment)
 	if err != nil {
 		return err
 	}

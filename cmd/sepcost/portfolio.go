@@ -15,11 +15,12 @@ import (
 )
 
 type portfolioOptions struct {
-	plan   string
-	prices string
-	out    string
-	format string
-	force  bool
+	plan      string
+	prices    string
+	equipment string
+	out       string
+	format    string
+	force     bool
 }
 
 func newPortfolioCommand() *cobra.Command {
@@ -45,6 +46,7 @@ solvent purchases by solvent and hours; totals reconcile to the cent.`,
 		},
 	}
 	cmd.Flags().StringVar(&opts.prices, "prices", "", "price table CSV (default: prices.csv beside the plan)")
+	cmd.Flags().StringVar(&opts.equipment, "equipment", "", "site equipment table CSV (default: equipment.csv beside the plan if there is one, else the built-in table)")
 	addOutputFlags(cmd, &opts.out, &opts.format, &opts.force)
 	return cmd
 }
@@ -75,7 +77,7 @@ func runPortfolio(_ context.Context, opts *portfolioOptions, stdout, stderr io.W
 		if err != nil {
 			return nil, err
 		}
-		return costing.Prepare(sc)
+		return preparePlan(sc, opts.equipment, opts.plan)
 	}
 	pf, err := scale.BuildPortfolio(opts.plan, rows, load, t)
 	if err != nil {

@@ -12,15 +12,16 @@ import (
 )
 
 type sweepOptions struct {
-	scenario string
-	prices   string
-	from, to string
-	points   int
-	out      string
-	format   string
-	force    bool
-	draws    int
-	seed     uint64
+	scenario  string
+	prices    string
+	equipment string
+	from, to  string
+	points    int
+	out       string
+	format    string
+	force     bool
+	draws     int
+	seed      uint64
 }
 
 func newSweepCommand() *cobra.Command {
@@ -42,6 +43,7 @@ method, the margin, the largest cost drivers and the prices that would flip it.`
 	}
 	f := cmd.Flags()
 	f.StringVar(&opts.prices, "prices", "", "price table CSV (default: prices.csv beside the scenario)")
+	f.StringVar(&opts.equipment, "equipment", "", "site equipment table CSV (default: equipment.csv beside the scenario if there is one, else the built-in table)")
 	f.StringVar(&opts.from, "from", "100mg", "smallest crude batch mass, with its unit")
 	f.StringVar(&opts.to, "to", "10kg", "largest crude batch mass, with its unit")
 	f.IntVar(&opts.points, "points", 30, "number of log-spaced masses (2 to 10000)")
@@ -70,7 +72,7 @@ func runSweep(_ context.Context, opts *sweepOptions, stdout, stderr io.Writer) e
 	if err != nil {
 		return usageError{err}
 	}
-	plan, t, err := loadPlan(opts.scenario, opts.prices)
+	plan, t, err := loadPlan(opts.scenario, opts.prices, opts.equipment)
 	if err != nil {
 		return err
 	}

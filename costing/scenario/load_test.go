@@ -22,7 +22,7 @@ chromatography:
       column_volumes: 2
   loading: dry
 settings:
-  chromatography.bed_height: "12 cm"
+  chromatography.calibration_bed_height: "12 cm"
 `
 
 func TestLoadGood(t *testing.T) {

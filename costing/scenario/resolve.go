@@ -230,6 +230,12 @@ func (c *collector) chromatography(r *rawChrom, s *Scenario, root *yaml.Node, ec
 			echo("chromatography.recover_solvent", r.RecoverSolvent, fmt.Sprintf("%.3g %% of the spent eluent recovered", v*100))
 		}
 	}
+	if r.TargetPurity.Set {
+		if v, ok := c.fraction(r.TargetPurity, "chromatography.target_purity", 0.5, 0.99999, `the purity asked of the pooled product fractions (product over product and nearest impurity), from 0.5 to 0.99999, e.g. "98 %"`); ok {
+			ch.TargetPurity = v
+			echo("chromatography.target_purity", r.TargetPurity, fmt.Sprintf("%.4g %% purity asked of the product fractions", v*100))
+		}
+	}
 	if r.LoadingRule.Set {
 		switch Rule(strings.ToLower(r.LoadingRule.Value)) {
 		case RuleTheory, RuleTable:

@@ -55,6 +55,7 @@ type Chromatography struct {
 	RecoverSolvent float64   // fraction of the spent eluent recovered for reuse, 0–1
 	LoadingRule    Rule      // which route sizes the silica
 	ColumnsM       []float64 // available column inner diameters, m, ascending
+	TargetPurity   float64   // purity asked of the pooled product fractions; 0: the model's default
 }
 
 // Setting is one model default the user overrides.

@@ -41,6 +41,7 @@ type rawChrom struct {
 	RecoverSolvent Text              `yaml:"recover_solvent"`
 	LoadingRule    Text              `yaml:"loading_rule"`
 	Columns        []Text            `yaml:"column_diameters"`
+	TargetPurity   Text              `yaml:"target_purity"`
 	Extra          map[string]rawAny `yaml:",inline"`
 }
 

@@ -117,6 +117,7 @@ func buildMethod(g *grid, st *styles, r *scale.Report, m money, j int, lay *layo
 	}
 	ms.time()
 	ms.waste()
+	ms.tables()
 	ms.notes()
 	return methodOut{sheet: g.name, mass: ms.out}, nil
 }
