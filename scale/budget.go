@@ -22,13 +22,15 @@ type Budget struct {
 	Places    int32
 	Cost      campaign.Cost // the campaign priced: one batch's ledger, batches, one-time costs
 
-	Capital     decimal.Decimal // equipment bought for the campaign
-	Consumables decimal.Decimal // materials, energy and credits for recovered solvent, × batches
-	Labour      decimal.Decimal // hands-on time × batches
-	Disposal    decimal.Decimal // waste disposal × batches
-	ProductLost decimal.Decimal // value of the product not recovered × batches (not a purchase)
-	OneTime     decimal.Decimal // development, once
-	Subtotal    decimal.Decimal
+	Capital      decimal.Decimal // equipment bought for the campaign: the sum of CapitalItems' prices
+	CapitalItems []CapitalItem
+	Consumables  decimal.Decimal // materials, energy and credits for recovered solvent, × batches
+	Labour       decimal.Decimal // hands-on time × batches
+	Equipment    decimal.Decimal // occupancy charges of the site's equipment × batches (hourly rates; wear of items not bought here)
+	Disposal     decimal.Decimal // waste disposal × batches
+	ProductLost  decimal.Decimal // value of the product not recovered × batches (not a purchase)
+	OneTime      decimal.Decimal // development, once
+	Subtotal     decimal.Decimal
 	// ContingencyShare is (P90 − P50) / P50 of the method's cost per gram
 	// at the target mass in the Monte Carlo draws (0 when not sampled);
 	// Contingency = round(Subtotal × ContingencyShare).
@@ -38,10 +40,12 @@ type Budget struct {
 	Total            decimal.Decimal // Subtotal + Contingency
 }
 
-// BudgetGroups says which ledger groups each budget heading gathers.
+// BudgetGroups says which ledger groups each budget heading gathers; every
+// group of usage.Groups is under exactly one heading.
 var BudgetGroups = map[string][]usage.Group{
 	"consumables":  {usage.Materials, usage.Energy, usage.Credit},
 	"labour":       {usage.Labour},
+	"equipment":    {usage.EquipmentUse},
 	"disposal":     {usage.Disposal},
 	"product lost": {usage.ProductLoss},
 	"one-time":     {usage.OneTime},
@@ -63,9 +67,9 @@ func NewBudget(c campaign.Cost, u *Uncertainty) *Budget {
 		return s
 	}
 	b := &Budget{Method: c.Method, Batches: c.Batches, BatchKg: c.BatchKg, ProductKg: c.ProductKg, Currency: l.Currency, Places: l.Places, Cost: c,
-		Capital: c.Capital, Consumables: sum("consumables").Mul(n), Labour: sum("labour").Mul(n), Disposal: sum("disposal").Mul(n),
+		Capital: c.Capital, Consumables: sum("consumables").Mul(n), Labour: sum("labour").Mul(n), Equipment: sum("equipment").Mul(n), Disposal: sum("disposal").Mul(n),
 		ProductLost: sum("product lost").Mul(n), OneTime: sum("one-time")}
-	b.Subtotal = b.Capital.Add(b.Consumables).Add(b.Labour).Add(b.Disposal).Add(b.ProductLost).Add(b.OneTime)
+	b.Subtotal = b.Capital.Add(b.Consumables).Add(b.Labour).Add(b.Equipment).Add(b.Disposal).Add(b.ProductLost).Add(b.OneTime)
 	if u != nil {
 		for _, band := range u.Bands {
 			if band.Method == c.Method && band.P50 > 0 && !math.IsNaN(band.P90) {

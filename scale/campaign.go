@@ -5,8 +5,6 @@ import (
 	"math"
 	"sort"
 
-	"github.com/shopspring/decimal"
-
 	"sepcost/costing"
 	"sepcost/costing/chrom"
 	"sepcost/costing/prices"
@@ -30,9 +28,10 @@ type Payback struct {
 type CampaignReport struct {
 	Spec        scenario.Campaign
 	Shifts      campaign.Shifts
-	Costs       []campaign.Cost   // feasible methods, in plan order
-	Infeasible  map[string]string // method → reason
-	Winner      string            // cheapest per gram over the campaign; "" when none is feasible
+	Costs       []campaign.Cost          // feasible methods, in plan order
+	Infeasible  map[string]string        // method → reason
+	Capital     map[string][]CapitalItem // method → the equipment to buy its campaign uses
+	Winner      string                   // cheapest per gram over the campaign; "" when none is feasible
 	RunnerUp    string
 	Margin      float64 // (runner − winner) / runner, per gram over the campaign
 	Tie         bool    // Margin below TieMargin
@@ -84,13 +83,14 @@ func shiftsOf(sp *scenario.Campaign) campaign.Shifts {
 // and the map of winners over batch mass (the scenario's masses and a
 // decade either side of the batch mass) and MapBatches.
 func RunCampaign(p *costing.Plan, t *prices.Table, sp *scenario.Campaign) (*CampaignReport, error) {
-	cr := &CampaignReport{Spec: *sp, Shifts: shiftsOf(sp), Infeasible: map[string]string{}}
+	cr := &CampaignReport{Spec: *sp, Shifts: shiftsOf(sp), Infeasible: map[string]string{}, Capital: map[string][]CapitalItem{}}
 	// The site's table (prices with the equipment's charges) prices every
 	// ledger, as the plan's own runs do.
 	t, err := p.SitePrices(t)
 	if err != nil {
 		return nil, err
 	}
+	var notes []string
 	for j, name := range p.MethodNames() {
 		u, err := chosen(p, j, sp.BatchKg, t)
 		if err != nil {
@@ -107,14 +107,21 @@ func RunCampaign(p *costing.Plan, t *prices.Table, sp *scenario.Campaign) (*Camp
 				continue
 			}
 		}
-		c, err := campaign.Run(u, t, n, decimal.Zero, cr.Shifts)
+		c, items, missing, err := campaignCost(p, u, t, n, cr.Shifts)
 		if err != nil {
 			return nil, err
 		}
 		cr.Costs = append(cr.Costs, c)
+		if len(items) > 0 {
+			cr.Capital[name] = items
+		}
+		if missing != "" {
+			notes = append(notes, missing)
+		}
 	}
 	cr.decide(t.Currency)
 	cr.paybacks()
+	cr.Explanation = append(cr.Explanation, notes...)
 	lo, hi := sp.BatchKg/10, sp.BatchKg*10
 	if ms := p.Scenario.MassesKg; len(ms) > 0 {
 		lo, hi = math.Min(lo, ms[0]), math.Max(hi, ms[len(ms)-1])
@@ -143,8 +150,8 @@ func (cr *CampaignReport) decide(cur string) {
 	}
 	w := order[0]
 	cr.Winner = w.Method
-	line := fmt.Sprintf("For the campaign (%s), %s costs %s %s in %s (%.2f %s per gram, one-time costs %s charged once; at least %.1f working days, %.1f person-days)",
-		what, w.Method, w.Total.StringFixed(w.Ledger.Places), cur, plural(w.Batches, "batch", "batches"), w.PerGram, cur, w.OneTime.StringFixed(w.Ledger.Places), w.WorkingDays, w.PersonDays)
+	line := fmt.Sprintf("For the campaign (%s), %s costs %s %s in %s (%.2f %s per gram, one-time costs %s and capital %s charged once; at least %.1f working days, %.1f person-days)",
+		what, w.Method, w.Total.StringFixed(w.Ledger.Places), cur, plural(w.Batches, "batch", "batches"), w.PerGram, cur, w.OneTime.StringFixed(w.Ledger.Places), w.Capital.StringFixed(w.Ledger.Places), w.WorkingDays, w.PersonDays)
 	if len(order) > 1 {
 		r := order[1]
 		cr.RunnerUp = r.Method
@@ -201,7 +208,7 @@ func campaignMap(p *costing.Plan, t *prices.Table, masses []float64, batches []i
 		for k, n := range batches {
 			pgs[k] = math.NaN()
 			for _, u := range us {
-				c, err := campaign.Run(u, t, n, decimal.Zero, sh)
+				c, _, _, err := campaignCost(p, u, t, n, sh)
 				if err != nil {
 					return nil, err
 				}
@@ -212,7 +219,7 @@ func campaignMap(p *costing.Plan, t *prices.Table, masses []float64, batches []i
 		}
 		m.Winner = append(m.Winner, ws)
 		m.PerGram = append(m.PerGram, pgs)
-		if err := m.paybackAt(i, us, t, sh); err != nil {
+		if err := m.paybackAt(p, i, us, t, sh); err != nil {
 			return nil, err
 		}
 	}
@@ -221,11 +228,11 @@ func campaignMap(p *costing.Plan, t *prices.Table, masses []float64, batches []i
 
 // paybackAt fills the payback of each method with start-up costs against
 // chromatography at mass i from the methods' usages there.
-func (m *CampaignMap) paybackAt(i int, us []usage.Usage, t *prices.Table, sh campaign.Shifts) error {
+func (m *CampaignMap) paybackAt(p *costing.Plan, i int, us []usage.Usage, t *prices.Table, sh campaign.Shifts) error {
 	costs := make([]campaign.Cost, len(us))
 	var stay *campaign.Cost
 	for k, u := range us {
-		c, err := campaign.Run(u, t, 1, decimal.Zero, sh)
+		c, _, _, err := campaignCost(p, u, t, 1, sh)
 		if err != nil {
 			return err
 		}
@@ -290,4 +297,13 @@ func plural(n int, one, many string) string {
 func chosen(p *costing.Plan, j int, kg float64, t *prices.Table) (usage.Usage, error) {
 	r, err := p.RunOne(j, kg, t)
 	return r.Usage, err
+}
+
+// campaignCost prices one method's batch as a campaign of n batches: the
+// equipment to buy that it uses is capital, charged once, and its wear is
+// dropped from the running cost (capitalPrices).
+func campaignCost(p *costing.Plan, u usage.Usage, t *prices.Table, n int, sh campaign.Shifts) (campaign.Cost, []CapitalItem, string, error) {
+	items, missing := capitalOf(p.Equipment, u)
+	c, err := campaign.Run(u, capitalPrices(p.Equipment, t, items), n, capitalSum(items), sh)
+	return c, items, missing, err
 }

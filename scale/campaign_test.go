@@ -1,13 +1,19 @@
 package scale
 
 import (
+	"bytes"
 	"math"
 	"strings"
 	"testing"
 
 	"github.com/shopspring/decimal"
 
+	"sepcost/costing"
+	"sepcost/costing/equipment"
+	"sepcost/costing/scenario"
 	"sepcost/costing/usage"
+	"sepcost/scale/campaign"
+	"sepcost/templates"
 )
 
 // The demo's campaign (5 kg of product from 2 kg batches, in
@@ -75,7 +81,7 @@ func TestBudget(t *testing.T) {
 	}
 	b := r.Budget
 	w, _ := r.Campaign.Cost(r.Campaign.Winner)
-	sum := b.Capital.Add(b.Consumables).Add(b.Labour).Add(b.Disposal).Add(b.ProductLost).Add(b.OneTime)
+	sum := b.Capital.Add(b.Consumables).Add(b.Labour).Add(b.Equipment).Add(b.Disposal).Add(b.ProductLost).Add(b.OneTime)
 	if !sum.Equal(b.Subtotal) || !b.Subtotal.Equal(w.Total) {
 		t.Errorf("headings %s, subtotal %s, campaign %s", sum, b.Subtotal, w.Total)
 	}
@@ -100,4 +106,84 @@ func TestBudget(t *testing.T) {
 	if !r0.Budget.Contingency.IsZero() || !r0.Budget.Total.Equal(r0.Budget.Subtotal) {
 		t.Errorf("unsampled budget: contingency %s", r0.Budget.Contingency)
 	}
+}
+
+// Every ledger group is under exactly one budget heading, so the headings
+// always add up to the campaign's cost.
+func TestBudgetGroupsCoverLedger(t *testing.T) {
+	seen := map[usage.Group]int{}
+	for _, gs := range BudgetGroups {
+		for _, g := range gs {
+			seen[g]++
+		}
+	}
+	for _, g := range usage.Groups {
+		if seen[g] != 1 {
+			t.Errorf("group %q is under %d budget headings", g, seen[g])
+		}
+	}
+}
+
+// Capital: with the site's jacketed reactors marked "to buy", the demo's
+// crystallization campaign asks for the reactor its 2 kg batch needs as
+// capital, once (its purchase price as written in the table), drops the
+// reactor's wear from the running cost, and its payback counts the
+// purchase: the smallest n with n·(g_c·R_x − g_x·R_c) ≤ g_x·K_c − g_c·K_x
+// (campaign.Payback, tested by hand there).
+func TestCampaignCapital(t *testing.T) {
+	eqCSV := strings.NewReplacer(
+		"jacketed reactor 20 L,reactor,20 L,,,20.00,owned,,EUR,,", "jacketed reactor 20 L,reactor,20 L,,,20.00,to buy,18000.00,EUR,20000 h,",
+		"jacketed reactor 100 L,reactor,100 L,,,45.00,owned,,EUR,,", "jacketed reactor 100 L,reactor,100 L,,,45.00,to buy,42000.00,EUR,20000 h,",
+	).Replace(string(templates.Equipment))
+	eq, err := equipment.Read(strings.NewReader(eqCSV), "eq.csv")
+	if err != nil {
+		t.Fatal(err)
+	}
+	sc, err := scenario.Load(bytes.NewReader(templates.Scenario), "demo.yaml")
+	if err != nil {
+		t.Fatal(err)
+	}
+	p, err := costing.PrepareWith(sc, costing.Options{Equipment: eq})
+	if err != nil {
+		t.Fatal(err)
+	}
+	_, pt := plan2(t)
+	r, err := EstimateWith(p, pt, []float64{sc.TargetKg}, Options{})
+	if err != nil {
+		t.Fatal(err)
+	}
+	items := r.Campaign.Capital["crystallization"]
+	if len(items) != 1 || items[0].Kind != equipment.Reactor || !strings.HasPrefix(items[0].Name, "jacketed reactor") {
+		t.Fatalf("capital %+v", items)
+	}
+	k, _ := r.Campaign.Cost("crystallization")
+	if !k.Capital.Equal(items[0].Price) || !k.Total.Equal(k.PerBatch.Mul(decimal.NewFromInt(int64(k.Batches))).Add(k.OneTime).Add(k.Capital)) {
+		t.Errorf("capital %s (item %s), total %s", k.Capital, items[0].Price, k.Total)
+	}
+	c, _ := r.Campaign.Cost("chromatography")
+	n, ok := campaignPayback(k, c)
+	for _, pb := range r.Campaign.Paybacks {
+		if pb.Method == "crystallization" && (pb.Never == ok || pb.Batches != n) {
+			t.Errorf("payback %+v, want %d (%v)", pb, n, ok)
+		}
+	}
+	if b := r.Budget; b.Method == "crystallization" && (!b.Capital.Equal(items[0].Price) || len(b.CapitalItems) != 1) {
+		t.Errorf("budget capital %s %v", b.Capital, b.CapitalItems)
+	}
+}
+
+// campaignPayback restates campaign.Payback's inequality by brute force:
+// the first n from which developing is at most as dear per gram.
+func campaignPayback(dev, stay campaign.Cost) (int, bool) {
+	gd := dev.ProductKg * 1000 / float64(dev.Batches)
+	gs := stay.ProductKg * 1000 / float64(stay.Batches)
+	for n := 1; n <= 100000; n++ {
+		N := decimal.NewFromInt(int64(n))
+		d := dev.PerBatch.Mul(N).Add(dev.OneTime).Add(dev.Capital).InexactFloat64() / (float64(n) * gd)
+		s := stay.PerBatch.Mul(N).Add(stay.OneTime).Add(stay.Capital).InexactFloat64() / (float64(n) * gs)
+		if d <= s {
+			return n, true
+		}
+	}
+	return 0, false
 }

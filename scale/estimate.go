@@ -50,6 +50,7 @@ func EstimateWith(p *costing.Plan, t *prices.Table, massesKg []float64, opt Opti
 		Results:      res,
 		Coefficients: p.Coefficients(),
 		Cautions:     p.Cautions(),
+		Equipment:    p.Equipment,
 	}
 	r.TargetKg = sc.TargetKg
 	r.Waste = wasteRows(p, massesKg, r.Methods, res)
@@ -74,6 +75,7 @@ func EstimateWith(p *costing.Plan, t *prices.Table, massesKg []float64, opt Opti
 		r.Decision.onCampaign(r.Campaign)
 		if w, ok := r.Campaign.Cost(r.Campaign.Winner); ok {
 			r.Budget = NewBudget(w, r.Uncertainty)
+			r.Budget.CapitalItems = r.Campaign.Capital[w.Method]
 		}
 	}
 	for _, in := range sc.Inputs {

@@ -2,6 +2,7 @@ package scale
 
 import (
 	"sepcost/costing"
+	"sepcost/costing/equipment"
 	"sepcost/costing/prices"
 	"sepcost/costing/source"
 	"sepcost/costing/usage"
@@ -38,7 +39,8 @@ type Report struct {
 	Uncertainty  *Uncertainty // Monte Carlo bands at TargetKg (nil when not sampled)
 	Waste        []WasteRow   // every stream of every feasible result, classified
 	Greenness    []SolventGreenness
-	WasteSector  string          // the EU List of Waste chapter used for the codes
-	Campaign     *CampaignReport // the scenario's campaign (nil when it describes none)
-	Budget       *Budget         // the request for the campaign's chosen method (nil without a campaign)
+	WasteSector  string           // the EU List of Waste chapter used for the codes
+	Campaign     *CampaignReport  // the scenario's campaign (nil when it describes none)
+	Budget       *Budget          // the request for the campaign's chosen method (nil without a campaign)
+	Equipment    *equipment.Table // the site equipment table the models chose from
 }

@@ -62,6 +62,7 @@ type jsonBudget struct {
 	Capital     string  `json:"capital"`
 	Consumables string  `json:"consumables"`
 	Labour      string  `json:"labour"`
+	Equipment   string  `json:"equipment"`
 	Disposal    string  `json:"disposal"`
 	ProductLost string  `json:"product_lost"`
 	OneTime     string  `json:"one_time"`
@@ -96,7 +97,7 @@ func campaignJSON(r *scale.Report) (*jsonCampaign, *jsonBudget) {
 		return jc, nil
 	}
 	f := func(d interface{ StringFixed(int32) string }) string { return d.StringFixed(b.Places) }
-	return jc, &jsonBudget{b.Method, b.Batches, f(b.Capital), f(b.Consumables), f(b.Labour), f(b.Disposal), f(b.ProductLost), f(b.OneTime), f(b.Subtotal),
+	return jc, &jsonBudget{b.Method, b.Batches, f(b.Capital), f(b.Consumables), f(b.Labour), f(b.Equipment), f(b.Disposal), f(b.ProductLost), f(b.OneTime), f(b.Subtotal),
 		b.ContingencyShare, f(b.Contingency), f(b.Total)}
 }
 
@@ -113,7 +114,7 @@ func budgetCSV(r *scale.Report) [][]string {
 	for _, h := range []struct {
 		item string
 		v    interface{ StringFixed(int32) string }
-	}{{"capital", b.Capital}, {"consumables", b.Consumables}, {"labour", b.Labour}, {"disposal", b.Disposal}, {"product lost", b.ProductLost},
+	}{{"capital", b.Capital}, {"consumables", b.Consumables}, {"labour", b.Labour}, {"equipment", b.Equipment}, {"disposal", b.Disposal}, {"product lost", b.ProductLost},
 		{"one-time", b.OneTime}, {"subtotal", b.Subtotal}, {"contingency", b.Contingency}, {"total", b.Total}} {
 		rows = append(rows, []string{mass, Safe(b.Method), "budget", h.item, Safe(label), "", "", "", h.v.StringFixed(b.Places), Safe(b.Currency)})
 	}
@@ -129,8 +130,8 @@ func campaignText(ew *errWriter, r *scale.Report) {
 	ew.printf("\nCampaign (one-time costs charged once; working days at least, one batch after another):\n")
 	for _, k := range c.Costs {
 		p := k.Ledger.Places
-		ew.printf("  %s: %d × %s + one-time %s = %s %s, %.2f %s/g; %.1f working days, %.1f person-days, %.0f equipment hours\n",
-			k.Method, k.Batches, k.PerBatch.StringFixed(p), k.OneTime.StringFixed(p), k.Total.StringFixed(p), k.Ledger.Currency, k.PerGram, k.Ledger.Currency,
+		ew.printf("  %s: %d × %s + one-time %s + capital %s = %s %s, %.2f %s/g; %.1f working days, %.1f person-days, %.0f equipment hours\n",
+			k.Method, k.Batches, k.PerBatch.StringFixed(p), k.OneTime.StringFixed(p), k.Capital.StringFixed(p), k.Total.StringFixed(p), k.Ledger.Currency, k.PerGram, k.Ledger.Currency,
 			k.WorkingDays, k.PersonDays, k.OccupiedH)
 	}
 	b := r.Budget
@@ -141,7 +142,7 @@ func campaignText(ew *errWriter, r *scale.Report) {
 	for _, h := range []struct {
 		name string
 		v    interface{ StringFixed(int32) string }
-	}{{"capital", b.Capital}, {"consumables and energy", b.Consumables}, {"labour", b.Labour}, {"disposal", b.Disposal},
+	}{{"capital", b.Capital}, {"consumables and energy", b.Consumables}, {"labour", b.Labour}, {"equipment occupancy", b.Equipment}, {"disposal", b.Disposal},
 		{"product lost (value)", b.ProductLost}, {"one-time development", b.OneTime}, {"subtotal", b.Subtotal}} {
 		ew.printf("  %-24s %12s\n", h.name, h.v.StringFixed(b.Places))
 	}

@@ -46,7 +46,7 @@ func TestBudgetJSONAndCSV(t *testing.T) {
 	if err := json.Unmarshal(js.Bytes(), &out); err != nil {
 		t.Fatal(err)
 	}
-	want := map[string]string{"capital": b.Capital.StringFixed(2), "consumables": b.Consumables.StringFixed(2), "labour": b.Labour.StringFixed(2),
+	want := map[string]string{"capital": b.Capital.StringFixed(2), "consumables": b.Consumables.StringFixed(2), "labour": b.Labour.StringFixed(2), "equipment": b.Equipment.StringFixed(2),
 		"disposal": b.Disposal.StringFixed(2), "product_lost": b.ProductLost.StringFixed(2), "one_time": b.OneTime.StringFixed(2),
 		"subtotal": b.Subtotal.StringFixed(2), "contingency": b.Contingency.StringFixed(2), "total": b.Total.StringFixed(2)}
 	for k, v := range want {

@@ -8,6 +8,7 @@ import (
 	"github.com/shopspring/decimal"
 	"github.com/xuri/excelize/v2"
 
+	"sepcost/costing/equipment"
 	"sepcost/costing/usage"
 	"sepcost/scale"
 )
@@ -20,9 +21,9 @@ const sheetBudget = "Budget"
 const (
 	bBatchesRow = 5  // the number of batches, a value a reader may edit
 	bHeadRow    = 13 // first heading (capital)
-	bP50Row     = 23 // P50 cost per gram at the target mass
-	bP90Row     = 24
-	bLedgerHead = 27 // header of the ledger table
+	bP50Row     = 24 // P50 cost per gram at the target mass
+	bP90Row     = 25
+	bLedgerHead = 28 // header of the ledger table
 	bItem       = 1
 	bLabel      = 2
 	bHeading    = 3
@@ -41,6 +42,7 @@ var budgetHeadings = []struct{ label, key string }{
 	{"Capital: equipment to buy", ""},
 	{"Consumables and energy", "consumables"},
 	{"Labour", "labour"},
+	{"Equipment occupancy", "equipment"},
 	{"Waste disposal", "disposal"},
 	{"Product lost (its value; not a purchase)", "product lost"},
 	{"One-time development", "one-time"},
@@ -96,13 +98,15 @@ func buildBudget(g *grid, st *styles, r *scale.Report, m money, lay *layout) {
 	first, last := bLedgerHead+1, bLedgerHead+len(lines)
 	g.text(bHeadRow-1, 1, "Heading", st.header)
 	g.text(bHeadRow-1, 2, "Amount", st.headerRight)
-	amounts := []decimal.Decimal{b.Capital, b.Consumables, b.Labour, b.Disposal, b.ProductLost, b.OneTime}
+	amounts := []decimal.Decimal{b.Capital, b.Consumables, b.Labour, b.Equipment, b.Disposal, b.ProductLost, b.OneTime}
 	for k, h := range budgetHeadings {
 		row := bHeadRow + k
 		g.text(row, 1, h.label, st.text)
 		if h.key == "" {
-			g.num(row, 2, amounts[k].InexactFloat64(), st.money)
-			g.set(row, 3, cell{value: "no equipment to buy in this estimate", style: st.note, spill: true})
+			capitalRow(g, st, r, row)
+			if len(b.CapitalItems) > 0 {
+				lay.add(sheetBudget, cellName(2, row), amounts[k], "subtotal")
+			}
 			continue
 		} else {
 			f := fmt.Sprintf(`SUMIF(%s:%s,"%s",%s:%s)`, absName(bHeading, first), absName(bHeading, max(last, first)), h.key, absName(bCampaign, first), absName(bCampaign, max(last, first)))
@@ -125,7 +129,7 @@ func buildBudget(g *grid, st *styles, r *scale.Report, m money, lay *layout) {
 	g.text(bP90Row, 1, "P90 cost per gram at the target mass", st.text)
 	g.num(bP90Row, 2, b.P90, st.perGram)
 	g.set(bP90Row+1, 1, cell{value: "The contingency is the cost above the median that one draw in ten exceeds (P90 − P50), a common way to size it (common practice). Price bands are those of the campaign's purchases; editing the number of batches does not move a line to another band.", style: st.note, spill: true})
-	budgetLedger(g, st, b, m, lay)
+	budgetLedger(g, st, r, m, lay)
 	first, last, methods := budgetCampaigns(g, st, r, bLedgerHead+len(lines)+3)
 	if len(methods) > 0 {
 		g.beforeRows = func(f *excelize.File) error {
@@ -138,8 +142,47 @@ func buildBudget(g *grid, st *styles, r *scale.Report, m money, lay *layout) {
 	}
 }
 
+// capitalRow writes the capital heading: the sum of the purchase prices of
+// the equipment to buy on the Equipment sheet, or zero with a note.
+func capitalRow(g *grid, st *styles, r *scale.Report, row int) {
+	b := r.Budget
+	if len(b.CapitalItems) == 0 || r.Equipment == nil {
+		g.num(row, 2, 0, st.money)
+		g.set(row, 3, cell{value: "no equipment to buy: the campaign uses what the equipment table lists as owned", style: st.note, spill: true})
+		return
+	}
+	refs := make([]string, len(b.CapitalItems))
+	names := make([]string, len(b.CapitalItems))
+	for i, c := range b.CapitalItems {
+		refs[i] = eqRef(eqPrice, c.Row)
+		names[i] = c.Name
+	}
+	g.formula(row, 2, "SUM("+strings.Join(refs, ",")+")", b.Capital.InexactFloat64(), st.money)
+	g.set(row, 3, cell{value: "to buy: " + strings.Join(names, ", ") + " (purchase price on the Equipment sheet; its wear is not charged again per batch)", style: st.note, spill: true})
+}
+
+// capitalRate is the formula of the unit price of a ledger line that
+// charges an item bought for the campaign: its hourly rate on the
+// Equipment sheet, or nothing per use; ok is false for other lines.
+func capitalRate(r *scale.Report, item string) (string, bool) {
+	if r.Equipment == nil {
+		return "", false
+	}
+	for _, c := range r.Budget.CapitalItems {
+		name := r.Equipment.Items[c.Row].Name
+		switch item {
+		case equipment.HourItem(name):
+			return eqRef(eqRate, c.Row), true
+		case equipment.UseItem(name):
+			return "0", true
+		}
+	}
+	return "", false
+}
+
 // budgetLedger writes one batch's ledger lines with their campaign amounts.
-func budgetLedger(g *grid, st *styles, b *scale.Budget, m money, lay *layout) {
+func budgetLedger(g *grid, st *styles, r *scale.Report, m money, lay *layout) {
+	b := r.Budget
 	for c, h := range []string{"Item", "Line", "Heading", "Quantity per batch", "Unit", "Unit price", "Per batch", "Times", "Campaign", "Price band"} {
 		style := st.header
 		if c+1 >= bQty && c+1 != bUnit && c+1 != bBand {
@@ -159,7 +202,11 @@ func budgetLedger(g *grid, st *styles, b *scale.Budget, m money, lay *layout) {
 		g.text(row, bHeading, headingOf(l.Demand.Group), st.text)
 		g.num(row, bQty, l.Qty.InexactFloat64(), st.figure)
 		g.text(row, bUnit, l.Unit, st.text)
-		g.formula(row, bPrice, priceRef(l.PriceRow), l.UnitPrice.InexactFloat64(), st.priceStyle(l.UnitPrice))
+		ref := priceRef(l.PriceRow)
+		if f, ok := capitalRate(r, l.Demand.Item); ok {
+			ref = f
+		}
+		g.formula(row, bPrice, ref, l.UnitPrice.InexactFloat64(), st.priceStyle(l.UnitPrice))
 		lay.add(sheetBudget, cellName(bPrice, row), l.UnitPrice, "unit price")
 		g.formula(row, bPerBatch, fmt.Sprintf("ROUND(%s*%s,%d)", cellName(bQty, row), cellName(bPrice, row), m.places), l.Amount.InexactFloat64(), st.money)
 		lay.add(sheetBudget, cellName(bPerBatch, row), l.Amount, "line")
