@@ -32,7 +32,8 @@ type Budget struct {
 	OneTime      decimal.Decimal // development, once
 	Subtotal     decimal.Decimal
 	// ContingencyShare is (P90 − P50) / P50 of the method's cost per gram
-	// at the target mass in the Monte Carlo draws (0 when not sampled);
+	// of one batch at the campaign's batch mass in the Monte Carlo draws (0
+	// when not sampled);
 	// Contingency = round(Subtotal × ContingencyShare).
 	ContingencyShare float64
 	P50, P90         float64
@@ -52,7 +53,7 @@ var BudgetGroups = map[string][]usage.Group{
 }
 
 // NewBudget builds the budget of a campaign. u, when not nil, gives the
-// contingency from the method's band at the target mass: the cost above
+// contingency from the method's band, sampled at the campaign's batch mass: the cost above
 // the median that one draw in ten exceeds, a common way of sizing a
 // contingency from a cost distribution (P90 − P50; common practice, no
 // source).

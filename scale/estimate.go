@@ -74,7 +74,15 @@ func EstimateWith(p *costing.Plan, t *prices.Table, massesKg []float64, opt Opti
 		}
 		r.Decision.onCampaign(r.Campaign)
 		if w, ok := r.Campaign.Cost(r.Campaign.Winner); ok {
-			r.Budget = NewBudget(w, r.Uncertainty)
+			// The contingency comes from the draws at the campaign's own
+			// batch mass.
+			u := r.Uncertainty
+			if u != nil && sc.Campaign.BatchKg != u.TargetKg {
+				if u, err = Sample(p, t, sc.Campaign.BatchKg, opt.Draws, opt.Seed, nil); err != nil {
+					return nil, err
+				}
+			}
+			r.Budget = NewBudget(w, u)
 			r.Budget.CapitalItems = r.Campaign.Capital[w.Method]
 		}
 	}
