@@ -130,17 +130,10 @@ func PrepareWith(sc *scenario.Scenario, opt Options) (*Plan, error) {
 // newPlan registers the methods on a settled coefficient set.
 func newPlan(sc *scenario.Scenario, coef source.Set, eq *equipment.Table) *Plan {
 	p := &Plan{Scenario: sc, Coef: coef, Equipment: eq}
-	site := chromSite(sc, eq)
-	p.add(chrom.Method, sc.Chromatography != nil, func(m float64) usage.Usage { return chrom.Run(sc, coef, site, m) })
+	p.add(chrom.Method, sc.Chromatography != nil, nil)
 	if sc.Chromatography != nil {
-		choices := func(m float64) []usage.Usage { return chrom.Candidates(sc, coef, site, m) }
-		if why := siteProblem(site, eq); why != "" {
-			choices = func(m float64) []usage.Usage {
-				return []usage.Usage{{Method: chrom.Method, CrudeKg: m, ProductInKg: m * sc.Purity, Reason: why}}
-			}
-		}
-		p.Methods[len(p.Methods)-1].Choices = choices
-		p.Methods[len(p.Methods)-1].Run = func(m float64) usage.Usage { return choices(m)[0] }
+		m := &p.Methods[len(p.Methods)-1]
+		m.Run, m.Choices = chromMethod(sc, coef, eq)
 	}
 	p.add(cryst.Method, sc.Crystallization != nil, func(m float64) usage.Usage { return cryst.Run(sc, coef, m) })
 	p.add(distil.Method, sc.Distillation != nil, func(m float64) usage.Usage { return distil.Run(sc, coef, m) })
@@ -323,4 +316,19 @@ func (r Result) PerGram() float64 {
 		return math.NaN()
 	}
 	return r.Ledger.Total.InexactFloat64() / (r.Usage.ProductOutKg * 1000)
+}
+
+// WithSetting is the plan as if the scenario's settings also set key to
+// si (in the coefficient's SI unit): the coefficients are settled again,
+// calibrations included, exactly as for a setting written in the file.
+func (p *Plan) WithSetting(key string, si float64) (*Plan, error) {
+	co, ok := p.Coef[key]
+	if !ok {
+		return nil, fmt.Errorf("unknown model setting %q", key)
+	}
+	sc := *p.Scenario
+	co.SI = si
+	sc.Settings = append(append([]scenario.Setting(nil), p.Scenario.Settings...),
+		scenario.Setting{Key: key, Value: units.Quantity{SI: si, Dim: co.Dim}, Written: co.String()})
+	return Prepare(&sc)
 }

@@ -6,7 +6,25 @@ import (
 	"sepcost/costing/chrom"
 	"sepcost/costing/equipment"
 	"sepcost/costing/scenario"
+	"sepcost/costing/source"
+	"sepcost/costing/usage"
 )
+
+// chromMethod is the chromatography on the site's equipment: run gives the
+// rule's loading on a column (no prices needed), choices every candidate
+// the plan prices. A site that lacks what a column needs makes every run
+// not feasible, with the reason.
+func chromMethod(sc *scenario.Scenario, coef source.Set, eq *equipment.Table) (run func(float64) usage.Usage, choices func(float64) []usage.Usage) {
+	site := chromSite(sc, eq)
+	if why := siteProblem(site, eq); why != "" {
+		run = func(m float64) usage.Usage {
+			return usage.Usage{Method: chrom.Method, CrudeKg: m, ProductInKg: m * sc.Purity, Reason: why}
+		}
+		return run, func(m float64) []usage.Usage { return []usage.Usage{run(m)} }
+	}
+	model := chrom.NewModel(sc, coef, site)
+	return model.Run, model.Candidates
+}
 
 // chromSite is the chromatography model's view of the site's equipment:
 // the columns (or the scenario's own column_diameters, which replace the

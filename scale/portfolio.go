@@ -60,7 +60,8 @@ type Development string
 // Development choices, written in the plan's development column.
 const (
 	// PerScenario charges a scenario's one-time costs for a method once in
-	// the plan, on the first row that runs it (the default).
+	// the plan, on the first row that runs it (the default; an empty value
+	// means the same).
 	PerScenario Development = "scenario"
 	// PerRow charges them on this row, as a campaign of its own.
 	PerRow Development = "row"
@@ -413,7 +414,7 @@ func costRow(p *costing.Plan, row PlanRow, t *prices.Table, charged map[string]b
 	var best *rowCost
 	var reasons []string
 	for _, j := range cands {
-		rc, reason, err := costMethod(p, j, row, t, row.Development == PerRow || (row.Development == PerScenario && !charged[key(j)]))
+		rc, reason, err := costMethod(p, j, row, t, row.Development == PerRow || (row.Development != Developed && !charged[key(j)]))
 		if err != nil {
 			return line, err
 		}

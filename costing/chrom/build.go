@@ -27,6 +27,8 @@ type runPlan struct {
 	fracSize   float64
 	fractions  float64
 	plates2    float64 // TLC plates per run
+	rerunP     float64 // kg of product in the mixed fractions sent to a second run
+	rerunI     float64 // kg of impurity going with it
 	prodFrac   float64
 	productVol float64
 	ev         SiteEvaporator
@@ -52,7 +54,14 @@ func build(u *usage.Usage, a analysis, sc *scenario.Scenario, coef source.Set, s
 	p.fractionsAndTLC(u, sc, coef)
 	p.times(u, sc, coef, site)
 	p.product(u, a, coef)
+	var second *usage.Usage
+	if sc.Chromatography.RerunMixed {
+		second = p.rerun(u, a, sc, coef, site)
+	}
 	p.wasteAndDemands(u, sc, coef)
+	if second != nil {
+		mergeRerun(u, second)
+	}
 }
 
 // equipmentFigures reports the equipment and the silica.
@@ -78,7 +87,10 @@ func (p *runPlan) equipmentFigures(u *usage.Usage, coef source.Set) {
 	fig("load_factor", "load over the bed's capacity (crude / (q_s · silica))", p.crudeRun/(coef.Get(KeyQs)*e.silicaRun), "")
 	fig("column_volume", "column volume", p.v0, "mL")
 	if e.runs > 1 {
-		u.Notef(usage.Info, "The batch needs %.3g kg of silica, more than the largest %s holds: %d runs of %s of crude each.", u.CrudeKg*p.ratio, kindWord(e), e.runs, scenario.FormatMass(p.crudeRun))
+		u.Notef(usage.RepeatLevel(e.runs), "The batch needs %.3g kg of silica, more than the largest %s holds: %d runs of %s of crude each.%s", u.CrudeKg*p.ratio, kindWord(e), e.runs, scenario.FormatMass(p.crudeRun), impractical(e.runs, kindWord(e)+" runs"))
+	}
+	if e.diameter > 0.3 && e.cartridge == nil {
+		u.Notef(usage.Caution, "A %.0f mm column runs %.0f L/min of flammable eluent: bond and earth the column, lines and receivers against static charge, stay within the column's pressure rating, and have the set-up reviewed under your site's process-safety rules.", e.diameter*1000, coef.Get(KeyFrontVelocity)*math.Pi*e.diameter*e.diameter/4*60000)
 	}
 	if r := e.silicaRun * p.runs / u.CrudeKg; r > 300 {
 		u.Notef(usage.Warning, "Silica : crude of %.0f : 1 is far above the usual 20–150 : 1; a better eluent, a longer column or another method will pay.", r)
@@ -187,6 +199,12 @@ func (p *runPlan) times(u *usage.Usage, sc *scenario.Scenario, coef source.Set, 
 		act("adsorb the crude on silica (dry load)", p.dryLoad.Total()/p.ev.Rate, get(KeyEvapAttended))
 	}
 	act("evaporate product fractions", p.productVol/p.ev.Rate, get(KeyEvapAttended))
+	what := "product fractions"
+	if p.dryLoad.Total() > 0 {
+		what += " and dry-load solvent"
+	}
+	u.Notef(usage.Info, "Evaporator: %s (%.3g L/h), the smallest the site lists that takes a run's %.3g L of %s within the %.1f h the working day leaves after the column work, or else the fastest.",
+		p.ev.Name, p.ev.Rate*3.6e6, evapRun*1000, what, left/3600)
 	p.evapHours = evapRun / p.ev.Rate * p.runs / 3600
 	elapsed, attended := u.Hours()
 	p.colHours = elapsed - p.evapHours

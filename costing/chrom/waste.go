@@ -53,12 +53,13 @@ func (p *runPlan) wasteAndDemands(u *usage.Usage, sc *scenario.Scenario, coef so
 	}
 	recovered := p.recover(u, liquid, coef, ch.RecoverSolvent)
 	impurityInProduct := u.ProductOutKg * (1 - p.cut.Purity) / p.cut.Purity
-	lostMixed := (u.ProductInKg - u.ProductInKg*get(KeyRetainedLoss)) * p.cut.Mixed
+	// Mixed fractions sent to a second run leave this pass's waste.
+	lostMixed := (u.ProductInKg-u.ProductInKg*get(KeyRetainedLoss))*p.cut.Mixed - p.rerunP
 	lostSilica := u.ProductInKg * get(KeyRetainedLoss)
 	u.AddFigure("impurity_in_product", "nearest impurity in the isolated product", impurityInProduct, "g")
 	spent := solventStream("spent eluent and mixed fractions", liquid, book)
 	spent.Components = append(spent.Components,
-		usage.Component{Name: "impurities", Kg: u.CrudeKg - u.ProductInKg - impurityInProduct},
+		usage.Component{Name: "impurities", Kg: u.CrudeKg - u.ProductInKg - impurityInProduct - p.rerunI},
 		usage.Component{Name: "product in mixed fractions", Kg: lostMixed})
 	wet := usage.Stream{Name: "solvent-wet silica, sand and TLC plates", Class: usage.WetSolids}
 	wet.Components = append(wet.Components, usage.Component{Name: "silica gel", Kg: silicaWaste}, usage.Component{Name: "sea sand", Kg: sand}, usage.Component{Name: "TLC plates", Kg: tlcPlates * get(KeyPlateMass)})

@@ -236,6 +236,16 @@ func (c *collector) chromatography(r *rawChrom, s *Scenario, root *yaml.Node, ec
 			echo("chromatography.target_purity", r.TargetPurity, fmt.Sprintf("%.4g %% purity asked of the product fractions", v*100))
 		}
 	}
+	if r.MixedFractions.Set {
+		switch strings.ToLower(strings.TrimSpace(r.MixedFractions.Value)) {
+		case "set aside":
+		case "rerun":
+			ch.RerunMixed = true
+		default:
+			c.add(r.MixedFractions.Line, "chromatography.mixed_fractions", "%q: write \"set aside\" (the product in them is lost) or rerun (pooled and run once more)", r.MixedFractions.Value)
+		}
+		echo("chromatography.mixed_fractions", r.MixedFractions, map[bool]string{true: "mixed fractions pooled and run once more", false: "mixed fractions set aside"}[ch.RerunMixed])
+	}
 	if r.LoadingRule.Set {
 		switch Rule(strings.ToLower(r.LoadingRule.Value)) {
 		case RuleTheory, RuleTable:

@@ -56,6 +56,7 @@ type Chromatography struct {
 	LoadingRule    Rule      // which route sizes the silica
 	ColumnsM       []float64 // available column inner diameters, m, ascending
 	TargetPurity   float64   // purity asked of the pooled product fractions; 0: the model's default
+	RerunMixed     bool      // mixed fractions are pooled and run once more (else set aside)
 }
 
 // Setting is one model default the user overrides.

@@ -42,6 +42,7 @@ type rawChrom struct {
 	LoadingRule    Text              `yaml:"loading_rule"`
 	Columns        []Text            `yaml:"column_diameters"`
 	TargetPurity   Text              `yaml:"target_purity"`
+	MixedFractions Text              `yaml:"mixed_fractions"`
 	Extra          map[string]rawAny `yaml:",inline"`
 }
 
