@@ -74,6 +74,7 @@ func headingOf(g usage.Group) string {
 func buildBudget(g *grid, st *styles, r *scale.Report, m money, lay *layout) {
 	b, c := r.Budget, r.Campaign
 	g.widths[bItem] = 40
+	g.maxWidths[bLabel] = 32 // ledger labels wrap, so the amounts above stay near their headings
 	g.set(1, 1, cell{value: "Budget request: " + r.Title, style: st.title, spill: true})
 	mergedCell(g, 2, 1, bBand, cell{value: strings.Join(c.Explanation, " "), style: st.wrap, wrap: true})
 	facts := []struct {
@@ -198,7 +199,7 @@ func budgetLedger(g *grid, st *styles, r *scale.Report, m money, lay *layout) {
 			times, timesF = decimal.NewFromInt(1), "1"
 		}
 		g.text(row, bItem, l.Demand.Item, st.text)
-		g.text(row, bLabel, l.Demand.Label, st.text)
+		g.set(row, bLabel, cell{value: l.Demand.Label, style: st.wrap, wrap: true})
 		g.text(row, bHeading, headingOf(l.Demand.Group), st.text)
 		g.num(row, bQty, l.Qty.InexactFloat64(), st.figure)
 		g.text(row, bUnit, l.Unit, st.text)
