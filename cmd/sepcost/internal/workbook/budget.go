@@ -75,6 +75,7 @@ func buildBudget(g *grid, st *styles, r *scale.Report, m money, lay *layout) {
 	b, c := r.Budget, r.Campaign
 	g.widths[bItem] = 40
 	g.maxWidths[bLabel] = 32 // ledger labels wrap, so the amounts above stay near their headings
+	g.printWide = true
 	g.set(1, 1, cell{value: "Budget request: " + r.Title, style: st.title, spill: true})
 	mergedCell(g, 2, 1, bBand, cell{value: strings.Join(c.Explanation, " "), style: st.wrap, wrap: true})
 	facts := []struct {
