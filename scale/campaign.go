@@ -257,14 +257,24 @@ func (m *CampaignMap) paybackAt(p *costing.Plan, i int, us []usage.Usage, t *pri
 	return nil
 }
 
-// onCampaign makes the decision on the campaign: the winner is the method
-// cheapest per gram over the whole campaign, one-time costs charged once,
-// rather than over one batch bearing them all. The break-even prices and
+// onCampaign makes the decision on the campaign when its batches are of
+// the target mass: the winner is the method cheapest per gram over the
+// whole campaign, one-time costs and capital charged once, rather than
+// over one batch bearing them all. The break-even prices and
 // the Monte Carlo shares stay those of one batch at the target mass, and
 // the explanation says so when the campaign changes the answer.
 func (d *Decision) onCampaign(cr *CampaignReport) {
+	lines := append([]string(nil), cr.Explanation...)
 	if cr.Winner == "" {
-		d.Explanation = append(cr.Explanation, d.Explanation...)
+		d.Explanation = append(lines, d.Explanation...)
+		return
+	}
+	if math.Abs(cr.Spec.BatchKg/d.TargetKg-1) > 1e-9 {
+		// Another batch mass: the campaign informs, the decision stays at
+		// the target mass.
+		lines = append(lines, fmt.Sprintf("The campaign's batches (%s) are not the target mass (%s): the decision below is for one batch at the target mass.",
+			scenario.FormatMass(cr.Spec.BatchKg), scenario.FormatMass(d.TargetKg)))
+		d.Explanation = append(lines, d.Explanation...)
 		return
 	}
 	changed := cr.Winner != d.Winner
@@ -275,7 +285,6 @@ func (d *Decision) onCampaign(cr *CampaignReport) {
 	if r, ok := cr.Cost(cr.RunnerUp); ok {
 		d.RunnerUp, d.RunnerPerG, d.Margin = r.Method, r.PerGram, cr.Margin
 	}
-	lines := append([]string(nil), cr.Explanation...)
 	if changed {
 		d.Confidence = 0
 		lines = append(lines, "The campaign changes the answer for one batch bearing all one-time costs; the lines below are for one batch.")

@@ -87,7 +87,11 @@ func EstimateWith(p *costing.Plan, t *prices.Table, massesKg []float64, opt Opti
 		r.Decision.weigh(r.Uncertainty)
 	}
 	if sc.Campaign != nil {
-		if r.Campaign, err = RunCampaign(p, t, sc.Campaign); err != nil {
+		sp := *sc.Campaign
+		if !sp.BatchGiven {
+			sp.BatchKg = r.TargetKg
+		}
+		if r.Campaign, err = RunCampaign(p, t, &sp); err != nil {
 			return nil, err
 		}
 		r.Decision.onCampaign(r.Campaign)
@@ -95,8 +99,8 @@ func EstimateWith(p *costing.Plan, t *prices.Table, massesKg []float64, opt Opti
 			// The contingency comes from the draws at the campaign's own
 			// batch mass.
 			u := r.Uncertainty
-			if u != nil && sc.Campaign.BatchKg != u.TargetKg {
-				if u, err = Sample(p, t, sc.Campaign.BatchKg, opt.Draws, opt.Seed, nil); err != nil {
+			if u != nil && sp.BatchKg != u.TargetKg {
+				if u, err = Sample(p, t, sp.BatchKg, opt.Draws, opt.Seed, nil); err != nil {
 					return nil, err
 				}
 			}

@@ -17,6 +17,7 @@ type Campaign struct {
 	ProductKg    float64 // purified product to make, kg (0 when Batches is given)
 	Batches      int     // batches to run (0 when ProductKg is given)
 	BatchKg      float64 // crude per batch, kg (default: the target mass)
+	BatchGiven   bool    // batch_mass was written; else BatchKg follows the mass the decision is made at
 	ShiftS       float64 // length of one shift, s (default 8 h)
 	ShiftsPerDay int     // shifts worked per working day (default 1)
 	Line         int     // line of the campaign section
@@ -77,7 +78,7 @@ func (c *collector) campaign(r *rawCampaign, s *Scenario, root *yaml.Node, echo 
 	}
 	if r.BatchMass.Set {
 		if v, good := c.quantity(r.BatchMass, sec+".batch_mass", units.Mass); good && v > 0 {
-			cp.BatchKg = v
+			cp.BatchKg, cp.BatchGiven = v, true
 			echo(sec+".batch_mass", r.BatchMass, FormatMass(v)+" of crude per batch")
 		} else {
 			if good {
@@ -86,7 +87,7 @@ func (c *collector) campaign(r *rawCampaign, s *Scenario, root *yaml.Node, echo 
 			ok = false
 		}
 	} else if s.TargetKg > 0 {
-		s.Inputs = append(s.Inputs, Input{Field: sec + ".batch_mass", Written: "(not given)", Meaning: "the target mass, " + FormatMass(s.TargetKg) + " of crude per batch"})
+		s.Inputs = append(s.Inputs, Input{Field: sec + ".batch_mass", Written: "(not given)", Meaning: "the mass the decision is made at (target_mass, " + FormatMass(s.TargetKg) + ", unless --target says otherwise) of crude per batch"})
 	}
 	if r.ShiftLength.Set {
 		if v, good := c.quantity(r.ShiftLength, sec+".shift_length", units.Time); good && v > 0 && v <= 24*3600 {
