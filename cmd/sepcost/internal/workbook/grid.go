@@ -42,7 +42,8 @@ type grid struct {
 	maxWidths  map[int]float64 // widths the content may narrow but not widen (wrapped text)
 	printWide  bool            // print in landscape, scaled to one page wide
 	// beforeRows, when set, runs after the StreamWriter is made and before
-	// the rows are written: charts go there (DESIGN §9).
+	// the rows are written: excelize adds charts to a streamed sheet only
+	// before its rows.
 	beforeRows func(f *excelize.File) error
 }
 
