@@ -5,6 +5,9 @@ import (
 
 	"github.com/shopspring/decimal"
 
+	"sepcost/costing/scenario"
+	"sepcost/costing/source"
+	"sepcost/costing/units"
 	"sepcost/costing/usage"
 	"sepcost/scale/campaign"
 )
@@ -83,4 +86,17 @@ func NewBudget(c campaign.Cost, u *Uncertainty) *Budget {
 	b.Contingency = decimal.NewFromFloat(b.Subtotal.InexactFloat64() * b.ContingencyShare).Round(b.Places)
 	b.Total = b.Subtotal.Add(b.Contingency)
 	return b
+}
+
+// CampaignCoefficients lists the campaign's and budget's own defaults for
+// the Sources sheet, each with its physical range.
+func CampaignCoefficients() []source.Coefficient {
+	return []source.Coefficient{
+		{Key: "campaign.shift_length", Method: "campaign", Label: "length of a shift when the scenario gives none", SI: scenario.DefaultShiftS, Dim: units.Time, Unit: "h",
+			Source: "a normal laboratory working day of eight hours, one shift a day", Mark: source.CommonPractice, Lo: 3600, Hi: 24 * 3600},
+		{Key: "budget.contingency_quantile", Method: "campaign", Label: "quantile of the Monte Carlo cost whose excess over the median is the contingency", SI: 0.9, Dim: units.None,
+			Source: "sizing a contingency as P90 − P50 of a cost distribution", Mark: source.CommonPractice, Lo: 0.5, Hi: 1},
+		{Key: "campaign.map_batches_max", Method: "campaign", Label: "largest number of batches on the map of the cheapest method", SI: float64(MapBatches[len(MapBatches)-1]), Dim: units.None,
+			Source: "from a one-off batch to a long-running product", Mark: source.CommonPractice, Lo: 1, Hi: campaign.MaxBatches},
+	}
 }

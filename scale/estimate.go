@@ -94,6 +94,7 @@ func EstimateWith(p *costing.Plan, t *prices.Table, massesKg []float64, opt Opti
 		if r.Campaign, err = RunCampaign(p, t, &sp); err != nil {
 			return nil, err
 		}
+		r.Coefficients = append(r.Coefficients, CampaignCoefficients()...)
 		r.Decision.onCampaign(r.Campaign)
 		if w, ok := r.Campaign.Cost(r.Campaign.Winner); ok {
 			// The contingency comes from the draws at the campaign's own
