@@ -41,6 +41,10 @@ type grid struct {
 	minWidths  map[int]float64 // widths the content may widen but not narrow
 	maxWidths  map[int]float64 // widths the content may narrow but not widen (wrapped text)
 	printWide  bool            // print in landscape, scaled to one page wide
+	// beforeRows, when set, runs after the StreamWriter is made and before
+	// the rows are written: excelize adds charts to a streamed sheet only
+	// before its rows.
+	beforeRows func(f *excelize.File) error
 }
 
 func newGrid(name string) *grid {
@@ -220,6 +224,11 @@ func (g *grid) flush(f *excelize.File, st *styles, omit bool) error {
 	widths := g.fitWidths(st)
 	if err := setWidths(sw, g.name, widths); err != nil {
 		return err
+	}
+	if g.beforeRows != nil {
+		if err := g.beforeRows(f); err != nil {
+			return fmt.Errorf("workbook: sheet %s: %w", g.name, err)
+		}
 	}
 	if g.freezeRows > 0 || g.freezeCols > 0 {
 		if err := sw.SetPanes(g.panes()); err != nil {
