@@ -67,7 +67,7 @@ func TestCautions(t *testing.T) {
 		t.Fatal(err)
 	}
 	all := strings.Join(p.Cautions(), "\n")
-	for _, w := range []string{"diethyl ether (flash point -45 °C)", "Peroxide-forming ethers: diethyl ether", "Silica gel dust", "licensed environmental-health-and-safety"} {
+	for _, w := range []string{"diethyl ether (flash point -45 °C)", "Peroxide-forming solvents (ethers, secondary alcohols and others): diethyl ether", "Silica gel dust", "licensed environmental-health-and-safety"} {
 		if !strings.Contains(all, w) {
 			t.Errorf("cautions lack %q:\n%s", w, all)
 		}

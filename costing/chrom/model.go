@@ -39,7 +39,7 @@ func Run(sc *scenario.Scenario, coef source.Set, crudeKg float64) usage.Usage {
 	alpha := sep.Alpha()
 	fig("k_product", "retention factor k of the product", RetentionFactor(ch.ProductRf), "")
 	fig("cv_product", "product elutes at (column volumes)", ElutionCV(ch.ProductRf), "")
-	fig("delta_cv", "separation ΔCV from the nearest impurity", DeltaCV(ch.ProductRf, ch.ImpurityRf), "")
+	fig("elution_volume_difference_cv", "difference in elution volume from the nearest impurity, column volumes (1/Rf)", DeltaCV(ch.ProductRf, ch.ImpurityRf), "")
 	fig("alpha", "separation factor α", alpha, "")
 	if sep.FirstIsProduct() {
 		note(usage.Info, "The product runs above the nearest impurity (Rf %.2f vs %.2f) and elutes first.", ch.ProductRf, ch.ImpurityRf)

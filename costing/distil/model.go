@@ -97,8 +97,8 @@ func Run(sc *scenario.Scenario, coef source.Set, crudeKg float64) usage.Usage {
 	}
 	fig("head_pressure", "operating pressure at the still head", pr.Head, "mbar")
 	fig("pot_pressure", "pressure in the pot", pr.Pot, "mbar")
-	fig("pot_temperature", "pot temperature (boiling point of the less volatile component at the pot pressure)", tPot, "C")
-	fig("head_temperature", "head temperature (boiling point of the more volatile component at the head pressure)", tHead, "C")
+	fig("pot_temperature", "pot temperature (boiling point of the less volatile component at the pot pressure)", tPot, "°C")
+	fig("head_temperature", "head temperature (boiling point of the more volatile component at the head pressure)", tHead, "°C")
 	if pr.Vacuum {
 		note(usage.Info, "Operating pressure: %.3g mbar at the head (%.3g mbar in the pot after %.3g mbar per theoretical stage), the highest at which the pot stays at or below %.1f °C. The pot temperature is taken as the boiling point of the less volatile component (%s) at the pot pressure, the upper bound it approaches as the pot is depleted; the charge starts boiling lower, at its bubble point.", pr.Head/100, pr.Pot/100, dp/100, degC(d.MaxPotK), heavy.name)
 		note(usage.Caution, "The pot is run up to its stability limit of %.1f °C: that limit must already include the safety margin your site requires below the decomposition onset found by DSC or ARC.", degC(d.MaxPotK))
@@ -249,7 +249,7 @@ func Run(sc *scenario.Scenario, coef source.Set, crudeKg float64) usage.Usage {
 	holdShare := vHold / st.Charge
 	fig("holdup", "hold-up of head and column", vHold, "mL")
 	if holdShare > get(KeyMaxHoldup) {
-		return fail("the still head and column hold about %.2g mL, %.0f %% of the %.2g mL charge in the smallest suitable still (%s): too small a batch for this apparatus; a short-path (Kugelrohr) distillation or a larger batch would suit", vHold*1e6, holdShare*100, st.Charge*1e6, formatL(st.Volume))
+		return fail("the still head and column hold about %.2g mL, %.0f %% of the %.2g mL charge in the smallest suitable still (%s): too small a batch for this apparatus; a bulb-to-bulb short-path distillation or a larger batch would suit", vHold*1e6, holdShare*100, st.Charge*1e6, formatL(st.Volume))
 	}
 
 	// The batch.

@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"sort"
 
+	"sepcost/costing"
 	"sepcost/scale"
 )
 
@@ -88,9 +89,11 @@ func writeDecision(g *grid, st *styles, r *scale.Report, m money, row, lastCol i
 	}
 	sort.Strings(infeasible) // a map has no order; the workbook must not change between runs
 	for _, meth := range infeasible {
-		g.text(row, 1, "Not feasible", st.bold)
+		reason := d.Infeasible[meth]
+		status := costing.StatusOf(false, reason)
+		g.text(row, 1, capitalize(status.Words()), st.bold)
 		g.text(row, 2, capitalize(meth), st.text)
-		g.set(row, 3, cell{value: d.Infeasible[meth], style: st.text, spill: true})
+		g.set(row, 3, cell{value: costing.Detail(reason), style: st.text, spill: true})
 		row++
 	}
 	g.set(row, 1, cell{value: "The decision, cost drivers and break-even prices were worked out with the prices as read; " +
