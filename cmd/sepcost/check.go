@@ -63,6 +63,11 @@ func runCheck(_ context.Context, opts *checkOptions, stdout io.Writer) error {
 			problems = append(problems, err)
 		}
 	}
+	if plan != nil && t != nil {
+		if t, err = plan.Prices(t); err != nil {
+			problems = append(problems, err)
+		}
+	}
 	var results [][]costing.Result
 	if plan != nil && t != nil {
 		results, err = plan.Run(sc.MassesKg, t)
@@ -75,7 +80,7 @@ func runCheck(_ context.Context, opts *checkOptions, stdout io.Writer) error {
 		n += printProblems(stdout, p)
 	}
 	if n > 0 {
-		fmt.Fprintf(stdout, "\n%d problem(s) to fix.\n", n)
+		fmt.Fprintf(stdout, "\n%s to fix.\n", plural(n, "problem", "problems"))
 		return errCheckFailed
 	}
 	fmt.Fprintf(stdout, "%s: scenario %q reads cleanly (%d batch masses, methods: %v)\n", opts.scenario, sc.Name, len(sc.MassesKg), plan.MethodNames())
@@ -121,6 +126,23 @@ func printProblems(w io.Writer, err error) int {
 		}
 		return len(pe)
 	}
+	if j, ok := err.(interface{ Unwrap() []error }); ok {
+		// errors.Join of several problems (the ledger's): count each.
+		n := 0
+		for _, e := range j.Unwrap() {
+			n += printProblems(w, e)
+		}
+		return n
+	}
 	fmt.Fprintln(w, err.Error())
 	return 1
+}
+
+// plural writes a count with the noun in the right number: "1 problem",
+// "6 problems".
+func plural(n int, one, many string) string {
+	if n == 1 {
+		return "1 " + one
+	}
+	return fmt.Sprintf("%d %s", n, many)
 }

@@ -111,5 +111,8 @@ func buildReport(sc *scenario.Scenario, t *prices.Table, masses []float64) (*sca
 	if err != nil {
 		return nil, err
 	}
+	if t, err = plan.Prices(t); err != nil {
+		return nil, err
+	}
 	return scale.Estimate(plan, t, masses)
 }

@@ -95,6 +95,9 @@ func loadPlan(scenarioPath, pricesPath string) (*costing.Plan, *prices.Table, er
 	if err != nil {
 		return nil, nil, err
 	}
+	if t, err = plan.Prices(t); err != nil {
+		return nil, nil, err
+	}
 	return plan, t, nil
 }
 

@@ -19,6 +19,10 @@ type Item struct {
 	Source   string          // supplier, quote or catalogue reference
 	Date     string          // date of the price, as written (YYYY-MM-DD)
 	Line     int             // line number in the file, 1-based
+
+	// Set by Resolve, not read from the file:
+	Written string  // the name as written when Resolve renamed it to a solvent's canonical name ("heptane" for n-heptane)
+	Density float64 // kg/m³ of the solvent an item priced per mass names, so that a volume of it can be priced; 0 otherwise
 }
 
 // Table is a price table with a single currency.

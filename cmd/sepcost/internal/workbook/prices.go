@@ -15,7 +15,7 @@ func buildPrices(g *grid, st *styles, r *scale.Report) {
 	g.freeze(1, 1)
 	for i, it := range r.Prices.Items {
 		row := i + 2
-		g.text(row, 1, it.Name, st.text)
+		g.text(row, 1, it.Label(), st.text)
 		g.text(row, 2, it.Unit, st.text)
 		g.num(row, priceCol, it.Price.InexactFloat64(), st.priceStyle(it.Price))
 		// The price's number format carries the currency code
