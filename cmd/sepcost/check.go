@@ -18,6 +18,7 @@ import (
 type checkOptions struct {
 	scenario string
 	prices   string
+	sheet    string
 }
 
 func newCheckCommand() *cobra.Command {
@@ -35,7 +36,8 @@ The exit code is 1 when anything must be fixed.`,
 			return runCheck(cmd.Context(), opts, cmd.OutOrStdout())
 		},
 	}
-	cmd.Flags().StringVar(&opts.prices, "prices", "", "price table CSV (default: prices.csv beside the scenario)")
+	cmd.Flags().StringVar(&opts.prices, "prices", "", "price table, CSV or .xlsx (default: prices.csv beside the scenario)")
+	addPricesSheetFlag(cmd, &opts.sheet)
 	return cmd
 }
 
@@ -48,7 +50,7 @@ func runCheck(_ context.Context, opts *checkOptions, stdout io.Writer) error {
 	if err != nil {
 		problems = append(problems, err)
 	}
-	t, err := loadPrices(opts.prices, opts.scenario)
+	t, err := loadPrices(opts.prices, opts.sheet, opts.scenario)
 	var ue usageError
 	if errors.As(err, &ue) {
 		return err

@@ -234,3 +234,17 @@ func TestFormatAndExtensionAgree(t *testing.T) {
 		t.Error("demo --format text wrote sepcost-demo.xlsx")
 	}
 }
+
+// --prices-sheet names a sheet of an .xlsx price table; given with a CSV
+// table it is a usage error rather than silently ignored.
+func TestPricesSheetNeedsWorkbook(t *testing.T) {
+	dir := t.TempDir()
+	if _, _, err := runCLI(t, "init", filepath.Join(dir, "case")); err != nil {
+		t.Fatal(err)
+	}
+	sc := filepath.Join(dir, "case", "scenario.yaml")
+	_, _, err := runCLI(t, "check", sc, "--prices-sheet", "Prices")
+	if exitCode(err) != 2 || !strings.Contains(err.Error(), ".xlsx") {
+		t.Errorf("exit %d (%v), want 2 saying the sheet needs an .xlsx table", exitCode(err), err)
+	}
+}

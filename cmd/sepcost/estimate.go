@@ -13,6 +13,7 @@ import (
 type estimateOptions struct {
 	scenario string
 	prices   string
+	sheet    string
 	masses   massList
 	out      string
 	format   string
@@ -38,7 +39,8 @@ the file's extension (.xlsx, .json, .csv) unless --format says otherwise.`,
 		},
 	}
 	f := cmd.Flags()
-	f.StringVar(&opts.prices, "prices", "", "price table CSV (default: prices.csv beside the scenario)")
+	f.StringVar(&opts.prices, "prices", "", "price table, CSV or .xlsx (default: prices.csv beside the scenario)")
+	addPricesSheetFlag(cmd, &opts.sheet)
 	f.Var(&opts.masses, "mass", `crude batch masses with units, e.g. "250mg,20g,2kg" (default: the scenario's masses)`)
 	addOutputFlags(cmd, &opts.out, &opts.format, &opts.force)
 	addDrawFlags(cmd, &opts.draws, &opts.seed)
@@ -68,7 +70,7 @@ func runEstimate(_ context.Context, opts *estimateOptions, stdout, stderr io.Wri
 	if err != nil {
 		return err
 	}
-	plan, t, err := loadPlan(opts.scenario, opts.prices)
+	plan, t, err := loadPlan(opts.scenario, opts.prices, opts.sheet)
 	if err != nil {
 		return err
 	}

@@ -8,6 +8,9 @@ import (
 	"io/fs"
 	"os"
 	"path/filepath"
+	"strings"
+
+	"github.com/spf13/cobra"
 
 	"sepcost/cmd/sepcost/internal/plain"
 	"sepcost/cmd/sepcost/internal/workbook"
@@ -38,14 +41,29 @@ func loadScenario(path string) (*scenario.Scenario, error) {
 }
 
 // loadPrices reads --prices, or else prices.csv beside the scenario (the
-// layout `sepcost init` writes); the report names the file used.
-func loadPrices(path, scenarioPath string) (*prices.Table, error) {
+// layout `sepcost init` writes); the report names the file used. A file
+// named .xlsx is read from its sheet named by --prices-sheet (default: the
+// first sheet), with the same checks as a CSV table.
+func loadPrices(path, sheet, scenarioPath string) (*prices.Table, error) {
 	if path == "" {
 		guess := filepath.Join(filepath.Dir(scenarioPath), "prices.csv")
 		if _, err := os.Stat(guess); err != nil {
 			return nil, usageError{fmt.Errorf("no price table: give --prices FILE (`sepcost init` writes an example), or put prices.csv beside %s", scenarioPath)}
 		}
 		path = guess
+	}
+	xlsx := strings.EqualFold(filepath.Ext(path), ".xlsx")
+	if sheet != "" && !xlsx {
+		return nil, usageError{fmt.Errorf("--prices-sheet %q: only a price table in an .xlsx workbook has sheets, and %s is not one", sheet, path)}
+	}
+	if xlsx {
+		f, err := os.Open(path)
+		if err != nil {
+			_, err = openInput(path, "price workbook")
+			return nil, err
+		}
+		defer f.Close()
+		return workbook.ReadPrices(f, path, sheet)
 	}
 	data, err := openInput(path, "price table")
 	if err != nil {
@@ -82,12 +100,12 @@ func deliver(r *scale.Report, format, out string, force bool, stdout, stderr io.
 }
 
 // loadPlan reads a scenario and its price table and prepares the plan.
-func loadPlan(scenarioPath, pricesPath string) (*costing.Plan, *prices.Table, error) {
+func loadPlan(scenarioPath, pricesPath, pricesSheet string) (*costing.Plan, *prices.Table, error) {
 	sc, err := loadScenario(scenarioPath)
 	if err != nil {
 		return nil, nil, err
 	}
-	t, err := loadPrices(pricesPath, scenarioPath)
+	t, err := loadPrices(pricesPath, pricesSheet, scenarioPath)
 	if err != nil {
 		return nil, nil, err
 	}
@@ -119,4 +137,9 @@ func writeOut(buf *bytes.Buffer, out string, force bool, stdout, stderr io.Write
 		fmt.Fprintf(stderr, "wrote %s\n", out)
 	}
 	return nil
+}
+
+// addPricesSheetFlag adds --prices-sheet, the sheet of an .xlsx price table.
+func addPricesSheetFlag(cmd *cobra.Command, sheet *string) {
+	cmd.Flags().StringVar(sheet, "prices-sheet", "", "the sheet that holds the price table when --prices is an .xlsx workbook (default: its first sheet)")
 }

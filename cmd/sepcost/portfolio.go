@@ -17,6 +17,7 @@ import (
 type portfolioOptions struct {
 	plan   string
 	prices string
+	sheet  string
 	out    string
 	format string
 	force  bool
@@ -40,7 +41,8 @@ purchases by solvent and hours; totals reconcile to the cent.`,
 			return runPortfolio(cmd.Context(), opts, cmd.OutOrStdout(), cmd.ErrOrStderr())
 		},
 	}
-	cmd.Flags().StringVar(&opts.prices, "prices", "", "price table CSV (default: prices.csv beside the plan)")
+	cmd.Flags().StringVar(&opts.prices, "prices", "", "price table, CSV or .xlsx (default: prices.csv beside the plan)")
+	addPricesSheetFlag(cmd, &opts.sheet)
 	addOutputFlags(cmd, &opts.out, &opts.format, &opts.force)
 	return cmd
 }
@@ -58,7 +60,7 @@ func runPortfolio(_ context.Context, opts *portfolioOptions, stdout, stderr io.W
 	if err != nil {
 		return err
 	}
-	t, err := loadPrices(opts.prices, opts.plan)
+	t, err := loadPrices(opts.prices, opts.sheet, opts.plan)
 	if err != nil {
 		return err
 	}

@@ -14,6 +14,7 @@ import (
 type sweepOptions struct {
 	scenario string
 	prices   string
+	sheet    string
 	from, to string
 	points   int
 	out      string
@@ -41,7 +42,8 @@ method, the margin, the largest cost drivers and the prices that would flip it.`
 		},
 	}
 	f := cmd.Flags()
-	f.StringVar(&opts.prices, "prices", "", "price table CSV (default: prices.csv beside the scenario)")
+	f.StringVar(&opts.prices, "prices", "", "price table, CSV or .xlsx (default: prices.csv beside the scenario)")
+	addPricesSheetFlag(cmd, &opts.sheet)
 	f.StringVar(&opts.from, "from", "100mg", "smallest crude batch mass, with its unit")
 	f.StringVar(&opts.to, "to", "10kg", "largest crude batch mass, with its unit")
 	f.IntVar(&opts.points, "points", 30, "number of log-spaced masses (2 to 10000)")
@@ -70,7 +72,7 @@ func runSweep(_ context.Context, opts *sweepOptions, stdout, stderr io.Writer) e
 	if err != nil {
 		return usageError{err}
 	}
-	plan, t, err := loadPlan(opts.scenario, opts.prices)
+	plan, t, err := loadPlan(opts.scenario, opts.prices, opts.sheet)
 	if err != nil {
 		return err
 	}

@@ -15,6 +15,7 @@ import (
 type wasteOptions struct {
 	scenario string
 	prices   string
+	sheet    string
 	masses   massList
 	out      string
 	format   string
@@ -39,7 +40,8 @@ local rules; the codes are suggestions to start from.`,
 			return runWaste(cmd.Context(), opts, cmd.OutOrStdout(), cmd.ErrOrStderr())
 		},
 	}
-	cmd.Flags().StringVar(&opts.prices, "prices", "", "price table CSV (default: prices.csv beside the scenario)")
+	cmd.Flags().StringVar(&opts.prices, "prices", "", "price table, CSV or .xlsx (default: prices.csv beside the scenario)")
+	addPricesSheetFlag(cmd, &opts.sheet)
 	cmd.Flags().Var(&opts.masses, "mass", `crude batch masses with units, e.g. "2kg" (default: the scenario's masses)`)
 	addOutputFlags(cmd, &opts.out, &opts.format, &opts.force)
 	return cmd
@@ -50,7 +52,7 @@ func runWaste(_ context.Context, opts *wasteOptions, stdout, stderr io.Writer) e
 	if err != nil {
 		return err
 	}
-	plan, t, err := loadPlan(opts.scenario, opts.prices)
+	plan, t, err := loadPlan(opts.scenario, opts.prices, opts.sheet)
 	if err != nil {
 		return err
 	}
