@@ -159,12 +159,8 @@ func writeScaleUp(f *excelize.File, st *styles, r *scale.Report, m money, method
 	// Printed landscape, one page wide: the three charts side by side.
 	// The sheet properties are written when the stream starts, so they
 	// come first.
-	fit, landscape, wide, tall := true, "landscape", 1, 0
-	if err := f.SetSheetProps(sheetScaleUp, &excelize.SheetPropsOptions{FitToPage: &fit}); err != nil {
-		return fmt.Errorf("workbook: sheet %s: %w", sheetScaleUp, err)
-	}
-	if err := f.SetPageLayout(sheetScaleUp, &excelize.PageLayoutOptions{Orientation: &landscape, FitToWidth: &wide, FitToHeight: &tall}); err != nil {
-		return fmt.Errorf("workbook: sheet %s: %w", sheetScaleUp, err)
+	if err := pageSetup(f, sheetScaleUp, r.Title); err != nil {
+		return err
 	}
 	sw, err := f.NewStreamWriter(sheetScaleUp)
 	if err != nil {

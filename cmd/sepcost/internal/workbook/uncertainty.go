@@ -57,7 +57,6 @@ const (
 // (dimensionless, σ ≥ 0); about two draws in three fall between them.
 func buildUncertainty(g *grid, st *styles, r *scale.Report) {
 	u := r.Uncertainty
-	g.printWide = true
 	g.widths[uLabel] = 46
 	for c := uP10; c <= uLast; c++ {
 		g.minWidths[c] = 13

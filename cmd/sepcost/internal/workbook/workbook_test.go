@@ -346,6 +346,9 @@ func TestCalcCellValue(t *testing.T) {
 // writer caches. LibreOffice keeps cached values as written (DESIGN §9),
 // hence the variant without them.
 func TestLibreOfficeRecalculation(t *testing.T) {
+	if testing.Short() {
+		t.Skip("-short: LibreOffice recalculation skipped")
+	}
 	soffice, err := exec.LookPath("soffice")
 	if err != nil {
 		if os.Getenv("CI") != "" {

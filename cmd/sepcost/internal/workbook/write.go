@@ -208,7 +208,7 @@ func build(r *scale.Report, opt Options, record bool) (*excelize.File, *layout, 
 	}
 	grids = append(grids, sources)
 	for _, g := range grids {
-		if err := g.flush(f, st, opt.OmitCachedValues); err != nil {
+		if err := g.flush(f, st, opt.OmitCachedValues, r.Title); err != nil {
 			return nil, nil, err
 		}
 	}

@@ -1,0 +1,108 @@
+package workbook
+
+import (
+	"context"
+	"os"
+	"os/exec"
+	"path/filepath"
+	"sort"
+	"strings"
+	"testing"
+	"time"
+
+	"sepcost/scale"
+)
+
+// tool finds a program the print test needs; CI must have it.
+func tool(t *testing.T, name, pkg string) string {
+	t.Helper()
+	p, err := exec.LookPath(name)
+	if err != nil {
+		if os.Getenv("CI") != "" {
+			t.Fatalf("%s (Debian package %s) is not on PATH; CI needs it", name, pkg)
+		}
+		t.Skipf("%s not on PATH", name)
+	}
+	return p
+}
+
+// printedPages prints each report to PDF with LibreOffice and counts the
+// pages of each sheet, read from the sheet name that heads every page
+// (pageSetup's header). It returns report → sheet → pages.
+func printedPages(t *testing.T, reports map[string]*scale.Report) map[string]map[string]int {
+	t.Helper()
+	soffice := tool(t, "soffice", "libreoffice-calc-nogui")
+	pdftotext := tool(t, "pdftotext", "poppler-utils")
+	dir := t.TempDir()
+	var files []string
+	sheets := map[string][]string{}
+	for name, r := range reports {
+		b, _ := render(t, r, Options{})
+		p := filepath.Join(dir, name+".xlsx")
+		if err := os.WriteFile(p, b, 0o644); err != nil {
+			t.Fatal(err)
+		}
+		files = append(files, p)
+		sheets[name] = open(t, b).GetSheetList()
+	}
+	ctx, cancel := context.WithTimeout(context.Background(), 4*time.Minute)
+	defer cancel()
+	args := append([]string{"-env:UserInstallation=file://" + filepath.ToSlash(filepath.Join(dir, "profile")),
+		"--headless", "--convert-to", "pdf", "--outdir", dir}, files...)
+	if msg, err := exec.CommandContext(ctx, soffice, args...).CombinedOutput(); err != nil {
+		t.Fatalf("soffice: %v\n%s", err, msg)
+	}
+	out := map[string]map[string]int{}
+	for name := range reports {
+		txt, err := exec.CommandContext(ctx, pdftotext, "-layout", filepath.Join(dir, name+".pdf"), "-").Output()
+		if err != nil {
+			t.Fatalf("%s: pdftotext: %v", name, err)
+		}
+		// Longest names first, so that "Scale-up" is not taken for a
+		// shorter name it begins with.
+		names := append([]string(nil), sheets[name]...)
+		sort.Slice(names, func(i, j int) bool { return len(names[i]) > len(names[j]) })
+		out[name] = map[string]int{}
+		for k, page := range strings.Split(strings.TrimRight(string(txt), "\f"), "\f") {
+			head := strings.TrimSpace(page)
+			found := false
+			for _, s := range names {
+				if strings.HasPrefix(head, s) {
+					out[name][s]++
+					found = true
+					break
+				}
+			}
+			if !found {
+				t.Errorf("%s: page %d is headed by no sheet name: %.60q", name, k+1, head)
+			}
+		}
+	}
+	return out
+}
+
+// TestPrintedPages prints the demos and a sweep to PDF and checks that
+// each sheet prints on few enough pages to hand in: the Summary on one
+// page, no sheet on more than a handful. The limits are this project's
+// choice of what a reader will page through (common practice, no source).
+func TestPrintedPages(t *testing.T) {
+	if testing.Short() {
+		t.Skip("-short: printing to PDF skipped")
+	}
+	pages := printedPages(t, map[string]*scale.Report{"demo": demoReport(t), "demo-liquid": liquidDemoReport(t), "sweep": sweepReport()})
+	limit := map[string]int{sheetSummary: 1, sheetSources: 12}
+	for name, per := range pages {
+		total := 0
+		for sheet, n := range per {
+			total += n
+			max, ok := limit[sheet]
+			if !ok {
+				max = 4
+			}
+			if n > max {
+				t.Errorf("%s: sheet %s prints on %d pages; at most %d", name, sheet, n, max)
+			}
+		}
+		t.Logf("%s: %d pages: %v", name, total, per)
+	}
+}
