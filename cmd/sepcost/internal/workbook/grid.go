@@ -42,6 +42,12 @@ type grid struct {
 	minWidths  map[int]float64 // widths the content may widen but not narrow
 	maxWidths  map[int]float64 // widths the content may narrow but not widen (wrapped text)
 	titleRows  int             // rows repeated atop every printed page; 0: the frozen rows
+	onePage    bool            // print on one page, wide and tall
+	printCols  int             // columns printed (the print area), 0 for all
+	printRows  int             // rows printed, with printCols
+	// extra runs once the sheet's StreamWriter exists and the column
+	// widths are known, before any row is written (charts are added here).
+	extra func(f *excelize.File, widths map[int]float64) error
 }
 
 func newGrid(name string) *grid {
@@ -209,7 +215,7 @@ func (g *grid) fitWidths(st *styles) map[int]float64 {
 func (g *grid) flush(f *excelize.File, st *styles, omit bool, title string) error {
 	// Before the StreamWriter: it copies the sheet's page setup and
 	// properties as they stand when it is made.
-	if err := pageSetup(f, g.name, title); err != nil {
+	if err := pageSetup(f, g.name, title, g.onePage); err != nil {
 		return err
 	}
 	titles := g.titleRows
@@ -226,6 +232,11 @@ func (g *grid) flush(f *excelize.File, st *styles, omit bool, title string) erro
 	widths := g.fitWidths(st)
 	if err := setWidths(sw, g.name, widths); err != nil {
 		return err
+	}
+	if g.extra != nil {
+		if err := g.extra(f, widths); err != nil {
+			return err
+		}
 	}
 	if g.freezeRows > 0 || g.freezeCols > 0 {
 		if err := sw.SetPanes(g.panes()); err != nil {
@@ -288,19 +299,28 @@ func (g *grid) flush(f *excelize.File, st *styles, omit bool, title string) erro
 	if err := sw.Flush(); err != nil {
 		return fmt.Errorf("workbook: sheet %s: %w", g.name, err)
 	}
+	if g.printCols > 0 {
+		dn := excelize.DefinedName{Name: "_xlnm.Print_Area", RefersTo: sheetRef(g.name, absName(1, 1)+":"+absName(g.printCols, g.printRows)), Scope: g.name}
+		if err := f.SetDefinedName(&dn); err != nil {
+			return fmt.Errorf("workbook: sheet %s: print area: %w", g.name, err)
+		}
+	}
 	return nil
 }
 
 // pageSetup sets a sheet to print in landscape on A4, scaled to fit one
-// page wide and as many pages down as it needs, so that a wide table
+// page wide and as many pages down as it needs (one page with onePage), so that a wide table
 // prints whole rather than split into column strips on separate pages;
 // every page is headed by the sheet's name and the report's title and
 // numbered "page n of m" (the &A, &P and &N fields of the header and
 // footer syntax, ECMA-376 Part 1, §18.3.1.46, from memory). Call it before
 // the sheet's StreamWriter is made: the writer copies the page setup as it
 // stands then.
-func pageSetup(f *excelize.File, sheet, title string) error {
+func pageSetup(f *excelize.File, sheet, title string, onePage bool) error {
 	landscape, one, down, fit, a4 := "landscape", 1, 0, true, 9
+	if onePage {
+		down = 1
+	}
 	if err := f.SetPageLayout(sheet, &excelize.PageLayoutOptions{Orientation: &landscape, FitToWidth: &one, FitToHeight: &down, Size: &a4}); err != nil {
 		return fmt.Errorf("workbook: sheet %s: page layout: %w", sheet, err)
 	}

@@ -6,9 +6,12 @@ import (
 	"os/exec"
 	"path/filepath"
 	"sort"
+	"strconv"
 	"strings"
 	"testing"
 	"time"
+
+	"github.com/xuri/excelize/v2"
 
 	"sepcost/scale"
 )
@@ -104,5 +107,71 @@ func TestPrintedPages(t *testing.T) {
 			}
 		}
 		t.Logf("%s: %d pages: %v", name, total, per)
+	}
+}
+
+// TestPriceEditMovesDecision edits a price in the demo workbook (written
+// without cached values), lets LibreOffice recalculate, and reads the
+// recommendation: its cells are formulas on the costs per gram, so making
+// the crystallization solvent a thousand times dearer must hand the
+// decision at 2 kg to chromatography. Source of the expectation: the
+// demo's own figures: crystallization at 2 kg uses about 16 L of ethanol
+// (Summary table), at 1,000 × the example price the solvent alone costs
+// far more than chromatography's 42.59 EUR/g × about 1,560 g.
+func TestPriceEditMovesDecision(t *testing.T) {
+	if testing.Short() {
+		t.Skip("-short: LibreOffice recalculation skipped")
+	}
+	soffice := tool(t, "soffice", "libreoffice-calc-nogui")
+	b, _ := render(t, demoReport(t), Options{OmitCachedValues: true})
+	f := open(t, b)
+	rows, err := f.GetRows(sheetPrices)
+	if err != nil {
+		t.Fatal(err)
+	}
+	edited := false
+	for k, row := range rows {
+		if len(row) > priceCol && row[0] == "ethanol" {
+			old, _ := f.GetCellValue(sheetPrices, cellName(priceCol, k+1), excelize.Options{RawCellValue: true})
+			p, _ := strconv.ParseFloat(old, 64)
+			if err := f.SetCellFloat(sheetPrices, cellName(priceCol, k+1), p*1000, -1, 64); err != nil {
+				t.Fatal(err)
+			}
+			edited = true
+		}
+	}
+	if !edited {
+		t.Fatal("no ethanol price on the Prices sheet")
+	}
+	dir := t.TempDir()
+	in := filepath.Join(dir, "edited.xlsx")
+	if err := f.SaveAs(in); err != nil {
+		t.Fatal(err)
+	}
+	out := filepath.Join(dir, "out")
+	ctx, cancel := context.WithTimeout(context.Background(), 2*time.Minute)
+	defer cancel()
+	cmd := exec.CommandContext(ctx, soffice, "-env:UserInstallation=file://"+filepath.ToSlash(filepath.Join(dir, "profile")),
+		"--headless", "--convert-to", "xlsx", "--outdir", out, in)
+	if msg, err := cmd.CombinedOutput(); err != nil {
+		t.Fatalf("soffice: %v\n%s", err, msg)
+	}
+	conv, err := os.ReadFile(filepath.Join(out, "edited.xlsx"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	lo := open(t, conv)
+	summary, _ := lo.GetRows(sheetSummary)
+	got := map[string][]string{}
+	for _, row := range summary {
+		if len(row) > 1 {
+			got[row[0]] = row
+		}
+	}
+	if rec := got["Recommended"]; len(rec) < 2 || rec[1] != "Chromatography" {
+		t.Errorf("after the edit the recommendation is %q, want Chromatography", rec)
+	}
+	if ru := got["Runner-up"]; len(ru) < 2 || ru[1] != "Crystallization" {
+		t.Errorf("after the edit the runner-up is %q, want Crystallization", ru)
 	}
 }

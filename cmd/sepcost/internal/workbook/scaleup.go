@@ -159,7 +159,7 @@ func writeScaleUp(f *excelize.File, st *styles, r *scale.Report, m money, method
 	// Printed landscape, one page wide: the three charts side by side.
 	// The sheet properties are written when the stream starts, so they
 	// come first.
-	if err := pageSetup(f, sheetScaleUp, r.Title); err != nil {
+	if err := pageSetup(f, sheetScaleUp, r.Title, false); err != nil {
 		return err
 	}
 	sw, err := f.NewStreamWriter(sheetScaleUp)

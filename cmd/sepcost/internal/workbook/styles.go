@@ -33,6 +33,9 @@ type styles struct {
 	headerRight                        int // the header of a column of numbers, aligned with them
 	headerIndent, wrapIndent           int // header and wrapped text set off from numbers on their left
 	kgFine                             int // kg with up to six decimals, for batches of milligrams
+	days                               int // working days, "2.5 working days of 8 h"
+	textIndent                         int // words beside a figure, set off from it
+	wrapSmall                          int // wrapped text in a smaller font (cautions)
 	minPlaces, maxPlaces               int32
 	meta                               map[int]fmtMeta
 }
@@ -61,7 +64,10 @@ func newStyles(f *excelize.File, m money) (*styles, error) {
 	top := []excelize.Border{{Type: "top", Color: "000000", Style: 1}}
 	str := func(s string) *string { return &s }
 	moneyFmt := currencyFormat(m.currency, m.places, "")
-	perGramFmt := currencyFormat(m.currency, m.places+2, "/g")
+	// Cost per gram to about three significant figures: whole units from
+	// 100, the minor unit from 1, four places below (a rate, not an amount
+	// paid, so not held to the minor unit).
+	perGramFmt := fmt.Sprintf(`[>=100]#,##0" %[1]s/g";[>=1]#,##0.00" %[1]s/g";0.0000" %[1]s/g"`, m.currency)
 	suffix := len(m.currency) + 1
 	defs := []struct {
 		id   *int
@@ -85,7 +91,7 @@ func newStyles(f *excelize.File, m money) (*styles, error) {
 		{&st.moneyBold, excelize.Style{CustomNumFmt: str(moneyFmt), Font: &excelize.Font{Bold: true}, Border: top},
 			fmtMeta{int(m.places), true, suffix}},
 		{&st.perGram, excelize.Style{CustomNumFmt: str(perGramFmt), Alignment: &excelize.Alignment{Vertical: "top"}},
-			fmtMeta{int(m.places) + 2, true, suffix + 2}},
+			fmtMeta{2, true, suffix + 2}},
 		{&st.hours, excelize.Style{CustomNumFmt: str("0.00"), Alignment: &excelize.Alignment{Vertical: "top"}}, fmtMeta{places: 2}},
 		{&st.hoursBold, excelize.Style{CustomNumFmt: str("0.00"), Font: &excelize.Font{Bold: true}, Border: top}, fmtMeta{places: 2}},
 		{&st.kg, excelize.Style{CustomNumFmt: str("#,##0.000"), Alignment: &excelize.Alignment{Vertical: "top"}}, fmtMeta{3, true, 0}},
@@ -100,6 +106,9 @@ func newStyles(f *excelize.File, m money) (*styles, error) {
 			Alignment: &excelize.Alignment{WrapText: true, Vertical: "bottom", Horizontal: "left", Indent: 1}}, fmtMeta{places: -1}},
 		{&st.wrapIndent, excelize.Style{Alignment: &excelize.Alignment{WrapText: true, Vertical: "top", Horizontal: "left", Indent: 1}}, fmtMeta{places: -1}},
 		{&st.kgFine, excelize.Style{CustomNumFmt: str("[<1]0.000###;#,##0.000"), Alignment: &excelize.Alignment{Vertical: "top"}}, fmtMeta{6, true, 0}},
+		{&st.days, excelize.Style{CustomNumFmt: str(`0.0" working days of 8 h"`), Alignment: &excelize.Alignment{Vertical: "top", Horizontal: "left", Indent: 1}}, fmtMeta{1, false, 22}},
+		{&st.textIndent, excelize.Style{Alignment: &excelize.Alignment{Vertical: "top", Horizontal: "left", Indent: 1}}, fmtMeta{places: -1}},
+		{&st.wrapSmall, excelize.Style{Font: &excelize.Font{Size: 9}, Alignment: &excelize.Alignment{WrapText: true, Vertical: "top"}}, fmtMeta{places: -1}},
 		{&st.ruleNumber, excelize.Style{Alignment: &excelize.Alignment{Horizontal: "left", Vertical: "top"}}, fmtMeta{places: -1}},
 	}
 	for _, d := range defs {

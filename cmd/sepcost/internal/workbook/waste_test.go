@@ -420,7 +420,7 @@ func TestUncertaintySheet(t *testing.T) {
 	r.Uncertainty = handUncertainty()
 	b, _ := render(t, r, Options{})
 	f := open(t, b)
-	want := "Summary,Inputs,Prices,Chromatography,Crystallization,Waste,Uncertainty,Sources"
+	want := "Summary,Decision,Inputs,Prices,Chromatography,Crystallization,Waste,Uncertainty,Sources"
 	if got := strings.Join(f.GetSheetList(), ","); got != want {
 		t.Fatalf("sheets %s, want %s", got, want)
 	}
@@ -492,7 +492,7 @@ func TestUncertaintyWins(t *testing.T) {
 	}}
 	b, _ := render(t, r, Options{})
 	f := open(t, b)
-	want := "Summary,Inputs,Prices,Chromatography,Crystallization,Scale-up,Waste,Uncertainty,Sources"
+	want := "Summary,Decision,Inputs,Prices,Chromatography,Crystallization,Scale-up,Waste,Uncertainty,Sources"
 	if got := strings.Join(f.GetSheetList(), ","); got != want {
 		t.Fatalf("sheets %s, want %s", got, want)
 	}

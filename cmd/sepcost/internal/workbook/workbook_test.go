@@ -500,11 +500,11 @@ func TestSheetsAndMarks(t *testing.T) {
 	r := twoMethodReport()
 	b, _ := render(t, r, Options{})
 	f := open(t, b)
-	want := []string{"Summary", "Inputs", "Prices", "Chromatography", "Crystallization", "Waste", "Sources"}
+	want := []string{"Summary", "Decision", "Inputs", "Prices", "Chromatography", "Crystallization", "Waste", "Sources"}
 	if got := f.GetSheetList(); strings.Join(got, ",") != strings.Join(want, ",") {
 		t.Fatalf("sheets %v, want %v", got, want)
 	}
-	for _, s := range want {
+	for _, s := range want[2:] { // Summary and Decision open at the top, unfrozen
 		p, err := f.GetPanes(s)
 		if err != nil || !p.Freeze {
 			t.Errorf("%s: no frozen panes (%v)", s, err)
@@ -523,8 +523,8 @@ func TestSheetsAndMarks(t *testing.T) {
 		if len(row) >= 10 && row[len(row)-1] == "cheapest" {
 			marks[row[0]] = row[1]
 		}
-		if len(row) >= 3 && row[0] == "0.25 g" && row[1] == "Crystallization" && !strings.HasPrefix(row[2], "not feasible: below 1 g") {
-			t.Errorf("infeasible row shows %q, not the reason", row[2])
+		if len(row) >= 4 && row[0] == "0.25 g" && row[1] == "Crystallization" && (row[2] != "not feasible" || !strings.HasPrefix(row[3], "below 1 g")) {
+			t.Errorf("infeasible row shows %q, %q, not the status and the reason", row[2], row[3])
 		}
 	}
 	wantMarks := map[string]string{"0.25 g": "Chromatography", "20 g": "Chromatography", "2 kg": "Crystallization"}

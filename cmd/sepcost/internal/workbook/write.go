@@ -96,7 +96,7 @@ func Write(w io.Writer, r *scale.Report, opt Options) error {
 type checkCell struct {
 	sheet, ref string
 	want       decimal.Decimal
-	kind       string // "unit price", "line", "subtotal", "total", "summary total", "disposal", "scale-up total"
+	kind       string // "unit price", "line", "subtotal", "total", "summary total", "batch cost", "disposal", "scale-up total"
 }
 
 // layout records where the writer put the money cells.
@@ -150,7 +150,7 @@ func build(r *scale.Report, opt Options, record bool) (*excelize.File, *layout, 
 	}
 	details := detailSheets(r)
 
-	order := []string{sheetSummary, sheetInputs, sheetPrices}
+	order := []string{sheetSummary, sheetDecision, sheetInputs, sheetPrices}
 	if details {
 		order = append(order, names...)
 	}
@@ -189,14 +189,19 @@ func build(r *scale.Report, opt Options, record bool) (*excelize.File, *layout, 
 		grids = append(grids, g)
 	}
 	summary := newGrid(sheetSummary)
-	buildSummary(summary, st, r, m, methods, details, lay)
+	plan := buildSummary(summary, st, r, m, methods, details, lay)
+	summary.extra = func(f *excelize.File, widths map[int]float64) error {
+		return summaryChart(f, plan, widths, m.currency)
+	}
+	decision := newGrid(sheetDecision)
+	buildDecisionSheet(decision, st, r, m, lay)
 	inputs := newGrid(sheetInputs)
 	buildInputs(inputs, st, r)
 	prices := newGrid(sheetPrices)
 	buildPrices(prices, st, r)
 	waste := newGrid(sheetWaste)
 	buildWaste(waste, st, r, m, details, lay)
-	grids = append(grids, summary, inputs, prices, waste)
+	grids = append(grids, summary, decision, inputs, prices, waste)
 	if r.Uncertainty != nil {
 		unc := newGrid(sheetUncertainty)
 		buildUncertainty(unc, st, r)
@@ -254,7 +259,7 @@ func validate(r *scale.Report) (money, error) {
 		}
 	}
 	seen := map[string]bool{}
-	for _, name := range []string{sheetSummary, sheetInputs, sheetPrices, sheetScaleUp, sheetWaste, sheetUncertainty, sheetSources} {
+	for _, name := range []string{sheetSummary, sheetDecision, sheetInputs, sheetPrices, sheetScaleUp, sheetWaste, sheetUncertainty, sheetSources} {
 		seen[strings.ToLower(name)] = true
 	}
 	for _, meth := range r.Methods {
