@@ -43,7 +43,7 @@ func TestSettings(t *testing.T) {
 		t.Fatalf("want 2 problems, got %v", err)
 	}
 	msg := err.Error()
-	for _, w := range []string{"s.yaml:9: settings.chromatography.bed_hieght", "valid settings:", "chromatography.bed_height", "s.yaml:10:", "is length", "density"} {
+	for _, w := range []string{"s.yaml:9: settings.chromatography.bed_hieght", `did you mean "chromatography.bed_height"?`, "valid settings of chromatography:", "s.yaml:10:", "is length", "density"} {
 		if !strings.Contains(msg, w) {
 			t.Errorf("error lacks %q:\n%s", w, msg)
 		}
