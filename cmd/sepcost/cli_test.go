@@ -227,7 +227,7 @@ func TestFormatAndExtensionAgree(t *testing.T) {
 		t.Error("demo --format json wrote sepcost-demo.xlsx")
 	}
 	out, _, err := runCLI(t, "demo", "--format", "text")
-	if err != nil || !strings.Contains(out, "Decision") {
+	if err != nil || !strings.Contains(out, "Recommendation at") {
 		t.Errorf("demo --format text: %v; output starts %.80q", err, out)
 	}
 	if _, err := os.Stat(filepath.Join(dir, "sepcost-demo.xlsx")); err == nil {
