@@ -107,16 +107,10 @@ func Sample(p *costing.Plan, t *prices.Table, targetKg float64, draws int, seed 
 		}
 	}
 	u := &Uncertainty{TargetKg: targetKg, Draws: draws, Seed: seed}
-	cheapest := make([]int, len(names))
+	wins := make([]int, len(names))
 	for _, row := range perG {
-		best := -1
-		for j, v := range row {
-			if !math.IsNaN(v) && (best < 0 || v < row[best]) {
-				best = j
-			}
-		}
-		if best >= 0 {
-			cheapest[best]++
+		if best := cheapest(row); best >= 0 {
+			wins[best]++
 		}
 	}
 	for j, name := range names {
@@ -126,7 +120,7 @@ func Sample(p *costing.Plan, t *prices.Table, targetKg float64, draws int, seed 
 				vals = append(vals, row[j])
 			}
 		}
-		b := Band{Method: name, P10: math.NaN(), P50: math.NaN(), P90: math.NaN(), Feasible: float64(len(vals)) / float64(draws), Cheapest: float64(cheapest[j]) / float64(draws)}
+		b := Band{Method: name, P10: math.NaN(), P50: math.NaN(), P90: math.NaN(), Feasible: float64(len(vals)) / float64(draws), Cheapest: float64(wins[j]) / float64(draws)}
 		if len(vals) > 0 {
 			sort.Float64s(vals)
 			b.P10, b.P50, b.P90 = quantile(vals, 0.1), quantile(vals, 0.5), quantile(vals, 0.9)
@@ -153,26 +147,41 @@ func quantile(sorted []float64, q float64) float64 {
 func drawCoefficients(c source.Set, rng *rand.Rand) source.Set {
 	out := c.Clone()
 	for _, k := range c.Keys() {
-		co := c[k]
-		sigma, ok := Spread[co.Mark]
-		if !ok || co.Dim == units.Temperature || co.SI == 0 {
+		if !perturbable(c[k]) {
 			continue
 		}
-		z := sigma * rng.NormFloat64()
-		switch {
-		case co.Dim == units.None && co.SI == 1:
-			continue // a whole share (e.g. fully attended) stays whole
-		case co.Dim == units.None && co.SI < 1:
-			// A share or fraction: the factor acts on its odds, so the
-			// draw stays inside (0, 1).
-			odds := co.SI / (1 - co.SI) * math.Exp(z)
-			co.SI = odds / (1 + odds)
-		default:
-			co.SI *= math.Exp(z)
-		}
-		out[k] = co
+		out[k], _ = perturb(c[k], rng.NormFloat64())
 	}
 	return out
+}
+
+// perturbable reports whether a coefficient is drawn at all: it has a
+// spread for its mark, is not a temperature and not zero.
+func perturbable(co source.Coefficient) bool {
+	_, ok := Spread[co.Mark]
+	return ok && co.Dim != units.Temperature && co.SI != 0
+}
+
+// perturb moves a coefficient z standard deviations (σ = Spread of its
+// mark) on the log scale: a plain share or fraction below 1 on its odds,
+// so that it stays in (0, 1), anything else by the factor exp(z σ).
+// Temperatures (not scale quantities), zeros, whole shares and marks
+// without a spread are left alone (ok false).
+func perturb(co source.Coefficient, z float64) (source.Coefficient, bool) {
+	if !perturbable(co) {
+		return co, false
+	}
+	sigma := Spread[co.Mark]
+	switch {
+	case co.Dim == units.None && co.SI == 1:
+		return co, false // a whole share (e.g. fully attended) stays whole
+	case co.Dim == units.None && co.SI < 1:
+		odds := co.SI / (1 - co.SI) * math.Exp(sigma*z)
+		co.SI = odds / (1 + odds)
+	default:
+		co.SI *= math.Exp(sigma * z)
+	}
+	return co, true
 }
 
 // drawPrices copies a price table with each price multiplied by a

@@ -42,12 +42,44 @@ type jsonReport struct {
 	Uncertainty *jsonUncertainty `json:"uncertainty,omitempty"`
 	Batches     []jsonBatch      `json:"batches"`
 	Crossovers  []jsonCrossover  `json:"crossovers"`
+	Pairwise    []jsonCrossover  `json:"pairwise_crossings"`
+	Warnings    []jsonWarning    `json:"warnings"`
+	Assumed     []jsonAssumed    `json:"assumptions"`
 	Notes       []jsonNote       `json:"notes"`
 	Cautions    []string         `json:"cautions"`
 }
 
+// jsonAssumed is a default the user did not set that moves a method's cost
+// per gram at the target mass by more than scale.AssumptionSwing between
+// its low and high plausible values (null cost: not feasible there).
+type jsonAssumed struct {
+	Method    string   `json:"method"`
+	Key       string   `json:"setting"`
+	Label     string   `json:"label"`
+	Unit      string   `json:"unit"`
+	Default   float64  `json:"default"`
+	Low       float64  `json:"plausible_low"`
+	High      float64  `json:"plausible_high"`
+	PerGram   *float64 `json:"cost_per_g_default"`
+	PerGramLo *float64 `json:"cost_per_g_low"`
+	PerGramHi *float64 `json:"cost_per_g_high"`
+	Flips     bool     `json:"changes_decision"`
+	Mark      string   `json:"mark"`
+	Source    string   `json:"source"`
+}
+
+// jsonWarning is one warning of the models with the masses it was raised
+// at (the text is its wording at the first).
+type jsonWarning struct {
+	Method   string    `json:"method"`
+	Level    string    `json:"level"`
+	Text     string    `json:"text"`
+	MassesKg []float64 `json:"crude_kg"`
+}
+
 type jsonDecision struct {
 	TargetKg    float64        `json:"target_kg"`
+	TargetFrom  string         `json:"target_from"`
 	Winner      string         `json:"method"`
 	WinnerPerG  *float64       `json:"cost_per_g"`
 	RunnerUp    string         `json:"runner_up"`
@@ -104,11 +136,16 @@ type jsonCrossover struct {
 	CheaperBelow string  `json:"cheaper_below"`
 	CheaperAbove string  `json:"cheaper_above"`
 	Step         bool    `json:"at_equipment_step"`
+	Kind         string  `json:"kind"`
+	Detail       string  `json:"detail,omitempty"`
+	LoKg         float64 `json:"bracket_lo_kg"`
+	HiKg         float64 `json:"bracket_hi_kg"`
 }
 
 type jsonBatch struct {
-	CrudeKg float64      `json:"crude_kg"`
-	Methods []jsonMethod `json:"methods"`
+	CrudeKg  float64      `json:"crude_kg"`
+	Cheapest string       `json:"cheapest"` // per gram of purified product, among the feasible methods; "" when none
+	Methods  []jsonMethod `json:"methods"`
 }
 
 type jsonMethod struct {
@@ -186,21 +223,38 @@ func notes(ns []usage.Note) []jsonNote {
 // JSON writes the report as indented JSON (the contract above).
 func JSON(w io.Writer, r *scale.Report) error {
 	out := jsonReport{Version: JSONVersion, Title: r.Title, Scenario: r.ScenarioFile, Prices: r.PricesFile, Currency: r.Prices.Currency,
-		TargetKg: r.TargetKg, Cautions: r.Cautions, Notes: notes(r.Notes), Crossovers: []jsonCrossover{}}
+		TargetKg: r.TargetKg, Cautions: r.Cautions, Notes: notes(r.Notes), Crossovers: []jsonCrossover{}, Pairwise: []jsonCrossover{},
+		Warnings: []jsonWarning{}, Assumed: []jsonAssumed{}}
 	if out.Cautions == nil {
 		out.Cautions = []string{}
 	}
 	for i, m := range r.MassesKg {
 		b := jsonBatch{CrudeKg: m}
+		if k := r.CheapestAt(i); k >= 0 {
+			b.Cheapest = r.Methods[k]
+		}
 		for j, name := range r.Methods {
 			b.Methods = append(b.Methods, jsonResult(name, r.Results[i][j]))
 		}
 		out.Batches = append(out.Batches, b)
 	}
 	out.Decision = decisionJSON(r.Decision)
+	if out.Decision != nil {
+		out.Decision.TargetFrom = r.TargetWhy
+	}
 	out.Uncertainty = uncertaintyJSON(r)
 	for _, c := range r.Crossovers {
-		out.Crossovers = append(out.Crossovers, jsonCrossover{c.MassKg, c.CheaperBelow, c.CheaperAbove, c.Step})
+		out.Crossovers = append(out.Crossovers, jsonCrossover{c.MassKg, c.CheaperBelow, c.CheaperAbove, c.Step, c.Kind, c.Detail, c.LoKg, c.HiKg})
+	}
+	for _, c := range r.Pairwise {
+		out.Pairwise = append(out.Pairwise, jsonCrossover{c.MassKg, c.CheaperBelow, c.CheaperAbove, c.Step, c.Kind, c.Detail, c.LoKg, c.HiKg})
+	}
+	for _, a := range r.Assumptions {
+		out.Assumed = append(out.Assumed, jsonAssumed{a.Method, a.Key, a.Label, a.Unit, a.Default, a.Low, a.High,
+			number(a.PerGram), number(a.PerGramLo), number(a.PerGramHi), a.Flips, string(a.Mark), a.Source})
+	}
+	for _, w := range r.Warnings {
+		out.Warnings = append(out.Warnings, jsonWarning{w.Method, string(w.Level), w.Text, w.MassesKg})
 	}
 	enc := json.NewEncoder(w)
 	enc.SetIndent("", "  ")

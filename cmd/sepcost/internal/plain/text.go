@@ -33,8 +33,9 @@ func Text(w io.Writer, r *scale.Report) error {
 	ew.printf("scenario: %s   prices: %s (%s)\n", r.ScenarioFile, r.PricesFile, r.Prices.Currency)
 	textDecision(ew, r)
 	textWarnings(ew, r)
+	assumptions(ew, r)
 	if r.IsSweep {
-		textCrossovers(ew, r)
+		crossovers(ew, r)
 		ew.printf("\nBy batch mass and method:\n")
 		if err := sweepTable(ew, r); err != nil {
 			return err
@@ -69,7 +70,11 @@ func textDecision(ew *errWriter, r *scale.Report) {
 		return
 	}
 	cur := r.Prices.Currency
-	ew.printf("\nRecommendation at %s of crude:\n", scenario.FormatMass(d.TargetKg))
+	why := ""
+	if r.TargetWhy != "" {
+		why = " (" + r.TargetWhy + ")"
+	}
+	ew.printf("\nRecommendation at %s of crude%s:\n", scenario.FormatMass(d.TargetKg), why)
 	tw := tabwriter.NewWriter(ew, 0, 0, 2, ' ', 0)
 	if d.Winner == "" {
 		fmt.Fprintf(tw, "  recommended\tnone: no method is feasible at this mass\n")
@@ -138,51 +143,58 @@ func winner(r *scale.Report, d *scale.Decision) *scale.Result {
 	return nil
 }
 
-// textWarnings writes the report's warnings and the models' warnings at
-// the target mass, each once.
+// textWarnings writes every warning and caution of the models, once per
+// method and wording, with the masses it was raised at.
 func textWarnings(ew *errWriter, r *scale.Report) {
-	seen := map[string]bool{}
-	var list []string
-	add := func(prefix string, n usage.Note) {
-		if n.Level == usage.Warning && !seen[n.Text] {
-			seen[n.Text] = true
-			list = append(list, prefix+n.Text)
-		}
-	}
-	for _, n := range r.Notes {
-		add("", n)
-	}
-	for i, kg := range r.MassesKg {
-		if diff := kg - r.TargetKg; diff > 1e-9*kg || diff < -1e-9*kg {
-			continue
-		}
-		for j, m := range r.Methods {
-			for _, n := range r.Results[i][j].Usage.Notes {
-				add(m+": ", n)
-			}
-		}
-	}
-	if len(list) == 0 {
+	if len(r.Warnings) == 0 {
 		return
 	}
-	ew.printf("\nWarnings at %s:\n", scenario.FormatMass(r.TargetKg))
-	for _, s := range list {
-		ew.printf("  - %s\n", s)
+	ew.printf("\nWarnings:\n")
+	for _, w := range r.Warnings {
+		ew.printf("  %s: %s\n", w.Level, w.Line())
 	}
 }
 
-// textCrossovers writes the masses where the cheapest method changes.
-func textCrossovers(ew *errWriter, r *scale.Report) {
-	ew.printf("\nCrossovers (cost per gram of purified product):\n")
+// assumptions prints the defaults the user did not set that move a
+// method's cost at the target mass by more than scale.AssumptionSwing.
+func assumptions(ew *errWriter, r *scale.Report) {
+	if len(r.Assumptions) == 0 {
+		return
+	}
+	ew.printf("\nAssumptions: defaults not set in the scenario that move a cost per gram at %s by more than %.0f %% (set them under settings: when you know better):\n",
+		scenario.FormatMass(r.TargetKg), scale.AssumptionSwing*100)
+	for _, a := range r.Assumptions {
+		ew.printf("  - %s\n", a.Words())
+	}
+}
+
+// crossovers prints where the decision changes, then, as a secondary
+// list, where any two methods change places.
+func crossovers(ew *errWriter, r *scale.Report) {
+	from, to := scenario.FormatMass(r.MassesKg[0]), scenario.FormatMass(r.MassesKg[len(r.MassesKg)-1])
+	ew.printf("\nWhere the cheapest method changes (cost per gram of purified product):\n")
 	if len(r.Crossovers) == 0 {
-		ew.printf("  none in %s to %s: the cost order of the methods does not change\n", scenario.FormatMass(r.MassesKg[0]), scenario.FormatMass(r.MassesKg[len(r.MassesKg)-1]))
+		ew.printf("  nowhere in %s to %s: the same method is cheapest throughout\n", from, to)
+	}
+	orNone := func(s string) string {
+		if s == "" {
+			return "no feasible method"
+		}
+		return s
 	}
 	for _, c := range r.Crossovers {
-		kind := "smooth crossing"
-		if c.Step {
-			kind = "at an equipment step"
+		ew.printf("  %s: %s below, %s above (%s", scenario.FormatMass(c.MassKg), orNone(c.CheaperBelow), orNone(c.CheaperAbove), c.Kind)
+		if c.Detail != "" {
+			ew.printf("; %s", c.Detail)
 		}
-		ew.printf("  %s: %s cheaper below, %s cheaper above (%s)\n", scenario.FormatMass(c.MassKg), c.CheaperBelow, c.CheaperAbove, kind)
+		ew.printf(")\n")
+	}
+	if len(r.Pairwise) == 0 {
+		return
+	}
+	ew.printf("\nWhere two methods change places, cheapest overall or not (secondary):\n")
+	for _, c := range r.Pairwise {
+		ew.printf("  %s: %s cheaper below, %s cheaper above (%s)\n", scenario.FormatMass(c.MassKg), c.CheaperBelow, c.CheaperAbove, c.Kind)
 	}
 }
 
@@ -221,8 +233,10 @@ func textDetails(ew *errWriter, r *scale.Report) error {
 			if err := tw.Flush(); err != nil {
 				return err
 			}
+			// Warnings at every mass; the models' notes on what they
+			// assumed at the decision's mass.
 			for _, n := range u.Notes {
-				if n.Level != usage.Info {
+				if n.Level != usage.Info || m == r.TargetKg {
 					ew.printf("  %s: %s\n", n.Level, n.Text)
 				}
 			}

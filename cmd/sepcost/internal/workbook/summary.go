@@ -76,6 +76,7 @@ func buildSummary(g *grid, st *styles, r *scale.Report, m money, methods []metho
 	writeRecommendation(g, st, r, m, row, tab, lastCol, lay)
 	plan := chartPlan{top: end + 1, rows: summaryChartRows, lastCol: lastCol}
 	row = end + 1 + summaryChartRows + 1
+	row = writeAssumptions(g, st, r, row, lastCol)
 	row = summaryWarnings(g, st, r, row, lastCol)
 	row = summaryCautions(g, st, r, row, lastCol)
 	plan.data = chartData(g, st, r, tab, lastCol+2)
@@ -187,13 +188,12 @@ func writeSummaryTable(g *grid, st *styles, r *scale.Report, methods []methodOut
 		}
 		if cheapest && len(feasible) > 0 {
 			rng := cellName(pgCol, first) + ":" + cellName(pgCol, row-1)
-			low := methods[feasible[0]].mass[i].perGram.v
-			for _, j := range feasible {
-				low = min(low, methods[j].mass[i].perGram.v)
-			}
+			// Cheapest per gram of purified product, the one definition
+			// every output uses (scale.Cheapest).
+			best := r.CheapestAt(i)
 			for _, j := range feasible {
 				mark := ""
-				if methods[j].mass[i].perGram.v == low {
+				if j == best {
 					mark = "cheapest"
 				}
 				at := first + j
@@ -244,7 +244,11 @@ func writeRecommendation(g *grid, st *styles, r *scale.Report, m money, row int,
 	if d != nil && d.TargetKg > 0 && finite(d.TargetKg) {
 		target = d.TargetKg
 	}
-	g.set(row, 1, cell{value: "Recommendation at " + massLabel(target) + " of crude", style: st.heading, spill: true})
+	heading := "Recommendation at " + massLabel(target) + " of crude"
+	if r.TargetWhy != "" {
+		heading += " (" + r.TargetWhy + ")"
+	}
+	g.set(row, 1, cell{value: heading, style: st.heading, spill: true})
 	row++
 	if d == nil {
 		g.set(row, 1, cell{value: "No decision was made for this report.", style: st.note, spill: true})
@@ -451,33 +455,20 @@ func wrapped(g *grid, st *styles, row int, text string, lastCol int) {
 	g.merge(row, 1, lastCol)
 }
 
-// summaryWarnings writes the warnings that bear on the decision: the
-// report's own and the models' at the target mass, each once; it returns
-// the next free row.
+// summaryWarnings writes every warning of the models, once per method
+// and wording with the masses it was raised at (scale.Warning), and the
+// report's own warnings; it returns the next free row.
 func summaryWarnings(g *grid, st *styles, r *scale.Report, row, lastCol int) int {
-	seen := map[string]bool{}
 	var list []string
-	add := func(prefix string, n usage.Note) {
-		if n.Level != usage.Warning || seen[n.Text] {
-			return
-		}
-		seen[n.Text] = true
-		list = append(list, prefix+n.Text)
-	}
 	for _, n := range r.Notes {
-		add("", n)
-	}
-	for i, kg := range r.MassesKg {
-		if !sameMass(kg, r.TargetKg) {
-			continue
-		}
-		for j, meth := range r.Methods {
-			for _, n := range r.Results[i][j].Usage.Notes {
-				add(capitalize(meth)+": ", n)
-			}
+		if n.Level == usage.Warning {
+			list = append(list, n.Text)
 		}
 	}
-	g.set(row, 1, cell{value: "Warnings at " + massLabel(r.TargetKg), style: st.heading, spill: true})
+	for _, w := range r.Warnings {
+		list = append(list, capitalize(w.Line()))
+	}
+	g.set(row, 1, cell{value: "Warnings", style: st.heading, spill: true})
 	row++
 	if len(list) == 0 {
 		g.set(row, 1, cell{value: "None. Notes of every kind are on the Decision sheet and the method sheets.", style: st.note, spill: true})
@@ -485,6 +476,27 @@ func summaryWarnings(g *grid, st *styles, r *scale.Report, row, lastCol int) int
 	}
 	for _, s := range list {
 		wrapped(g, st, row, s, lastCol)
+		row++
+	}
+	return row + 1
+}
+
+// writeAssumptions lists the defaults the user did not set that move a
+// method's cost per gram at the target mass by more than
+// scale.AssumptionSwing between their low and high plausible values; row
+// is the next free row; it returns the next free row.
+func writeAssumptions(g *grid, st *styles, r *scale.Report, row, lastCol int) int {
+	if len(r.Assumptions) == 0 {
+		return row
+	}
+	g.set(row, 1, cell{value: "Assumptions the cost rests on", style: st.heading, spill: true})
+	row++
+	wrapped(g, st, row, fmt.Sprintf("Defaults not set in the scenario that move a method's cost per gram at %s by more than %.0f %% between their "+
+		"low and high plausible values (P10 and P90 of the spread their source is given, as on the Uncertainty sheet), each changed alone. "+
+		"Measure them or set them under settings: in the scenario.", massLabel(r.TargetKg), scale.AssumptionSwing*100), lastCol)
+	row++
+	for _, a := range r.Assumptions {
+		wrapped(g, st, row, capitalize(a.Words()), lastCol)
 		row++
 	}
 	return row + 1
