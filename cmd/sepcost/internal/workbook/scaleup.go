@@ -311,7 +311,7 @@ func writeScaleUp(f *excelize.File, st *styles, r *scale.Report, m money, method
 			rw.num(suElapsed, row.HoursElapsed, st.hours, false)
 			rw.num(suAttended, row.HoursAttended, st.hours, true)
 			if row.Equipment != "" {
-				rw.text(suEquipment, row.Equipment, st.text)
+				rw.text(suEquipment, row.Equipment, st.textIndent) // set off from the hours on its left
 			}
 			if err := rw.write(sw); err != nil {
 				return err

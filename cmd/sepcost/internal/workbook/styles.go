@@ -58,6 +58,10 @@ func currencyFormat(code string, places int32, per string) string {
 	return n + ` "` + code + per + `"`
 }
 
+// sig3 shows a mass or volume to about three significant figures:
+// "2,732", "14.03", "0.363", "0.002".
+const sig3 = "[>=100]#,##0;[>=1]#,##0.0#;0.00##"
+
 func newStyles(f *excelize.File, m money) (*styles, error) {
 	st := &styles{meta: map[int]fmtMeta{}}
 	bottom := []excelize.Border{{Type: "bottom", Color: "000000", Style: 1}}
@@ -85,7 +89,10 @@ func newStyles(f *excelize.File, m money) (*styles, error) {
 		{&st.wrap, excelize.Style{Alignment: &excelize.Alignment{WrapText: true, Vertical: "top"}}, fmtMeta{places: -1}},
 		{&st.note, excelize.Style{Font: &excelize.Font{Italic: true}}, fmtMeta{places: -1}},
 		{&st.general, excelize.Style{Alignment: &excelize.Alignment{Vertical: "top"}}, fmtMeta{places: -1}},
-		{&st.figure, excelize.Style{CustomNumFmt: str("#,##0.###"), Alignment: &excelize.Alignment{Vertical: "top"}}, fmtMeta{3, true, 0}},
+		// Physical figures to about three significant figures: whole
+		// numbers from 100, up to three decimals from 1, up to six below
+		// ("517,147", "42.6", "0.000691"); never "99999.999999969".
+		{&st.figure, excelize.Style{CustomNumFmt: str("[>=100]#,##0;[>=1]#,##0.0##;0.000###"), Alignment: &excelize.Alignment{Vertical: "top"}}, fmtMeta{3, true, 0}},
 		{&st.generalBold, excelize.Style{Font: &excelize.Font{Bold: true}, Border: top}, fmtMeta{places: -1}},
 		{&st.money, excelize.Style{CustomNumFmt: str(moneyFmt), Alignment: &excelize.Alignment{Vertical: "top"}}, fmtMeta{int(m.places), true, suffix}},
 		{&st.moneyBold, excelize.Style{CustomNumFmt: str(moneyFmt), Font: &excelize.Font{Bold: true}, Border: top},
@@ -94,9 +101,9 @@ func newStyles(f *excelize.File, m money) (*styles, error) {
 			fmtMeta{2, true, suffix + 2}},
 		{&st.hours, excelize.Style{CustomNumFmt: str("0.00"), Alignment: &excelize.Alignment{Vertical: "top"}}, fmtMeta{places: 2}},
 		{&st.hoursBold, excelize.Style{CustomNumFmt: str("0.00"), Font: &excelize.Font{Bold: true}, Border: top}, fmtMeta{places: 2}},
-		{&st.kg, excelize.Style{CustomNumFmt: str("#,##0.000"), Alignment: &excelize.Alignment{Vertical: "top"}}, fmtMeta{3, true, 0}},
+		{&st.kg, excelize.Style{CustomNumFmt: str(sig3), Alignment: &excelize.Alignment{Vertical: "top"}}, fmtMeta{3, true, 0}},
 		{&st.kgBold, excelize.Style{CustomNumFmt: str("#,##0.000"), Font: &excelize.Font{Bold: true}, Border: top}, fmtMeta{3, true, 0}},
-		{&st.litres, excelize.Style{CustomNumFmt: str("#,##0.000"), Alignment: &excelize.Alignment{Vertical: "top"}}, fmtMeta{3, true, 0}},
+		{&st.litres, excelize.Style{CustomNumFmt: str(sig3), Alignment: &excelize.Alignment{Vertical: "top"}}, fmtMeta{3, true, 0}},
 		{&st.percent, excelize.Style{CustomNumFmt: str("0.0%"), Alignment: &excelize.Alignment{Vertical: "top"}}, fmtMeta{1, false, 1}},
 		{&st.factor, excelize.Style{CustomNumFmt: str(`#,##0.00"×"`), Alignment: &excelize.Alignment{Vertical: "top"}}, fmtMeta{2, true, 1}},
 		{&st.ratio, excelize.Style{CustomNumFmt: str("#,##0.00"), Alignment: &excelize.Alignment{Vertical: "top"}}, fmtMeta{2, true, 0}},

@@ -518,7 +518,17 @@ func TestRowHeightLimit(t *testing.T) {
 	r.Coefficients[0].Source = strings.Repeat("a long explanation ", 2000)
 	b, _ := render(t, r, Options{})
 	f := open(t, b)
-	h, err := f.GetRowHeight(sheetSources, 2)
+	rows, _ := f.GetRows(sheetSources)
+	at := 0
+	for k, row := range rows {
+		if len(row) > 5 && strings.Contains(row[5], "a long explanation") {
+			at = k + 1
+		}
+	}
+	if at == 0 {
+		t.Fatal("the long source is not on the Sources sheet")
+	}
+	h, err := f.GetRowHeight(sheetSources, at)
 	if err != nil {
 		t.Fatal(err)
 	}
