@@ -14,7 +14,7 @@ const (
 	srcLabel            // what it is
 	srcValue            // value in its display unit
 	srcUnit
-	srcMark // confirmed, derived, from memory, ...
+	srcMark   // confirmed, derived, from memory, ...
 	srcSource // its source, numbered at first use
 )
 
