@@ -1,6 +1,7 @@
 package workbook
 
 import (
+	"bytes"
 	"context"
 	"os"
 	"os/exec"
@@ -11,6 +12,7 @@ import (
 	"testing"
 	"time"
 
+	"github.com/shopspring/decimal"
 	"github.com/xuri/excelize/v2"
 
 	"sepcost/scale"
@@ -173,5 +175,41 @@ func TestPriceEditMovesDecision(t *testing.T) {
 	}
 	if ru := got["Runner-up"]; len(ru) < 2 || ru[1] != "Crystallization" {
 		t.Errorf("after the edit the runner-up is %q, want Crystallization", ru)
+	}
+}
+
+// chartCount is the number of chart parts in a written workbook.
+func chartCount(t *testing.T, b []byte) int {
+	t.Helper()
+	return len(chartParts(open(t, b)))
+}
+
+// Every workbook the tool writes has a chart: the report (cost per gram
+// against mass on the Summary, plus Scale-up's for a sweep), the waste
+// forecast (waste by stream) and the year's plan (cost by method).
+func TestEveryWorkbookHasAChart(t *testing.T) {
+	r := demoReport(t)
+	b, _ := render(t, r, Options{})
+	if n := chartCount(t, b); n < 1 {
+		t.Errorf("report workbook: %d charts", n)
+	}
+	var w bytes.Buffer
+	if err := WriteWaste(&w, r); err != nil {
+		t.Fatal(err)
+	}
+	if n := chartCount(t, w.Bytes()); n != 1 {
+		t.Errorf("waste workbook: %d charts, want 1", n)
+	}
+	pf := &scale.Portfolio{File: "plan.csv", Currency: "EUR", Places: 2,
+		ByMethod: map[string]decimal.Decimal{"chromatography": decimal.RequireFromString("1200.50"), "crystallization": decimal.RequireFromString("830.00")}}
+	w.Reset()
+	if err := WritePortfolio(&w, pf); err != nil {
+		t.Fatal(err)
+	}
+	if n := chartCount(t, w.Bytes()); n != 1 {
+		t.Errorf("portfolio workbook: %d charts, want 1", n)
+	}
+	if n := chartCount(t, func() []byte { b, _ := render(t, sweepReport(), Options{}); return b }()); n < 4 {
+		t.Errorf("sweep workbook: %d charts, want the Summary's and Scale-up's three", n)
 	}
 }
