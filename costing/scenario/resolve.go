@@ -98,7 +98,7 @@ func resolve(c *collector, raw *rawScenario, root *yaml.Node) *Scenario {
 			if v <= 0 || (s.Purity > 0 && v > 1-s.Purity+1e-9) {
 				c.add(raw.Crude.NearestImpurity.Line, "crude.nearest_impurity", "%s must be above 0 and at most 1 − purity (%.3g)", raw.Crude.NearestImpurity.Value, 1-s.Purity)
 			}
-			s.NearestImpurity = v
+			s.NearestImpurity, s.NearestGiven = v, true
 			echo("crude.nearest_impurity", raw.Crude.NearestImpurity, fmt.Sprintf("%.3g %% of the crude runs next to the product", v*100))
 		}
 	} else if s.Purity > 0 {

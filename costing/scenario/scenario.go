@@ -74,6 +74,7 @@ type Scenario struct {
 	TargetKg        float64   // the batch mass the decision is made at
 	Purity          float64   // mass fraction of product in the crude
 	NearestImpurity float64   // mass fraction of the crude that is the nearest-running impurity
+	NearestGiven    bool      // crude.nearest_impurity was written (else NearestImpurity is 1 − Purity)
 	Chromatography  *Chromatography
 	Crystallization *Crystallization // nil when the scenario has no crystallization section
 	Distillation    *Distillation    // nil when the scenario has no distillation section

@@ -25,6 +25,7 @@ type cell struct {
 	style   int
 	wrap    bool // wrapped text: sets the row height, counts at most maxWidth for the column
 	spill   bool // text that may run over empty neighbours: not used to fit widths
+	small   bool // wrapped text in the 9 pt font (wrapSmall): more characters to a line
 }
 
 type merge struct{ row, first, last int }
@@ -275,6 +276,9 @@ func (g *grid) flush(f *excelize.File, st *styles, omit bool, title string) erro
 					for k := m.first; k <= m.last; k++ {
 						w += widths[k]
 					}
+				}
+				if c.small {
+					w *= 11.0 / 9 // characters scale with the font size
 				}
 				if n := wrappedLines(s, w); n > lines {
 					lines = n

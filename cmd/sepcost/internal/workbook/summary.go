@@ -512,7 +512,7 @@ func summaryCautions(g *grid, st *styles, r *scale.Report, row, lastCol int) int
 		return row + 1
 	}
 	for _, c := range r.Cautions {
-		g.set(row, 1, cell{value: strings.TrimSpace(c), style: st.wrapSmall, wrap: true})
+		g.set(row, 1, cell{value: strings.TrimSpace(c), style: st.wrapSmall, wrap: true, small: true})
 		for k := 2; k <= lastCol; k++ {
 			g.blank(row, k, st.wrapSmall)
 		}
