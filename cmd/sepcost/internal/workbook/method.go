@@ -378,7 +378,7 @@ func (ms *methodSheet) ledger() error {
 	for i, res := range ms.res {
 		c := blockCol(i) + 1
 		if !ms.feasible(i) {
-			g.text(totalRow, c, "not feasible", st.bold)
+			g.text(totalRow, c, res.Status().Words(), st.bold)
 			continue
 		}
 		total := res.Ledger.Total
