@@ -347,7 +347,7 @@ func (ms *methodSheet) ledger() error {
 					continue
 				}
 				q, c := blockCol(i), blockCol(i)+1
-				g.num(row, q, line.Qty.InexactFloat64(), st.general)
+				g.num(row, q, line.Qty.InexactFloat64(), st.figure) // the cell keeps every priced digit; the format shows about three significant figures
 				f := fmt.Sprintf("ROUND(%s*%s,%d)", cellName(q, row), absName(colUnitPrice, row), places)
 				g.formula(row, c, f, line.Amount.InexactFloat64(), st.money)
 				ms.lay.add(ms.name, cellName(c, row), line.Amount, "line")
