@@ -8,11 +8,11 @@ import (
 	"sepcost/costing/usage"
 )
 
-// unusedPrices is a note listing the price-table lines that no ledger of
+// UnusedPrices is a note listing the price-table lines that no ledger of
 // the report uses, or nil when every line is used. A line priced for an
 // item under a name no model demands (a misspelling, or a solvent's name
 // the solvent table does not know) shows here instead of going unnoticed.
-func unusedPrices(t *prices.Table, res [][]Result) *usage.Note {
+func UnusedPrices(t *prices.Table, res [][]Result) *usage.Note {
 	used := make([]bool, len(t.Items))
 	for _, row := range res {
 		for _, r := range row {

@@ -18,12 +18,12 @@ func TestUnusedPrices(t *testing.T) {
 		{Name: "n-hexane", Written: "hexanes", Line: 3, Price: decimal.NewFromInt(9)},
 	}}
 	res := [][]Result{{{Ledger: ledger.Ledger{Lines: []ledger.Line{{PriceRow: 0}}}}}}
-	n := unusedPrices(tab, res)
+	n := UnusedPrices(tab, res)
 	if n == nil || !strings.Contains(n.Text, "1 line of p.csv is") || !strings.Contains(n.Text, "hexanes (read as n-hexane) (line 3)") {
 		t.Errorf("note %+v", n)
 	}
 	res[0][0].Ledger.Lines = append(res[0][0].Ledger.Lines, ledger.Line{PriceRow: 1})
-	if n := unusedPrices(tab, res); n != nil {
+	if n := UnusedPrices(tab, res); n != nil {
 		t.Errorf("every line used, but a note: %+v", n)
 	}
 }

@@ -13,6 +13,7 @@ import (
 	"sepcost/costing/prices"
 	"sepcost/costing/scenario"
 	"sepcost/costing/usage"
+	"sepcost/scale"
 )
 
 type checkOptions struct {
@@ -105,6 +106,9 @@ func runCheck(_ context.Context, opts *checkOptions, stdout io.Writer) error {
 				}
 			}
 		}
+	}
+	if n := scale.UnusedPrices(t, results); n != nil {
+		fmt.Fprintf(stdout, "note: %s\n", n.Text)
 	}
 	if warned == 0 {
 		fmt.Fprintln(stdout, "no model warnings")

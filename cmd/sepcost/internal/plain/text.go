@@ -144,14 +144,19 @@ func winner(r *scale.Report, d *scale.Decision) *scale.Result {
 }
 
 // textWarnings writes every warning and caution of the models, once per
-// method and wording, with the masses it was raised at.
+// method and wording, with the masses it was raised at, then the report's
+// notes.
 func textWarnings(ew *errWriter, r *scale.Report) {
-	if len(r.Warnings) == 0 {
+	if len(r.Warnings)+len(r.Notes) == 0 {
 		return
 	}
-	ew.printf("\nWarnings:\n")
+	ew.printf("\nWarnings and notes:\n")
 	for _, w := range r.Warnings {
 		ew.printf("  %s: %s\n", w.Level, w.Line())
+	}
+	// The report's own notes: the scenario's, and price lines no method used.
+	for _, n := range r.Notes {
+		ew.printf("  %s: %s\n", n.Level, n.Text)
 	}
 }
 
