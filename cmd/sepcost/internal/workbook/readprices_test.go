@@ -158,3 +158,34 @@ func TestPriceWorkbookProblems(t *testing.T) {
 		t.Errorf("not a workbook: %v", err)
 	}
 }
+
+// A sheet of more rows than a price list has is refused with the limit
+// named, before its rows are checked.
+func TestPriceWorkbookRowLimit(t *testing.T) {
+	f := excelize.NewFile()
+	sw, err := f.NewStreamWriter("Sheet1")
+	if err != nil {
+		t.Fatal(err)
+	}
+	if err := sw.SetRow("A1", []any{"item", "unit", "price", "currency", "category", "source", "date"}); err != nil {
+		t.Fatal(err)
+	}
+	for r := 2; r <= MaxPriceRows+1; r++ {
+		ref, _ := excelize.CoordinatesToCellName(1, r)
+		if err := sw.SetRow(ref, []any{"item " + strconv.Itoa(r), "kg", 1, "EUR", "", "", ""}); err != nil {
+			t.Fatal(err)
+		}
+	}
+	if err := sw.Flush(); err != nil {
+		t.Fatal(err)
+	}
+	var buf bytes.Buffer
+	if err := f.Write(&buf); err != nil {
+		t.Fatal(err)
+	}
+	f.Close()
+	_, err = ReadPrices(bytes.NewReader(buf.Bytes()), "big.xlsx", "")
+	if err == nil || !strings.Contains(err.Error(), "more than 10000 rows") {
+		t.Errorf("row limit: %v", err)
+	}
+}
