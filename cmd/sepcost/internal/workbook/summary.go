@@ -287,7 +287,13 @@ func writeRecommendation(g *grid, st *styles, r *scale.Report, m money, row int,
 		lay.add(sheetSummary, cellName(2, row), w.Ledger.Total, "batch cost")
 	}
 	f.put(g, row, 2, f.pick(tab.col[smTotal], 1, ""), total, st.money)
-	words(row, 3, "for "+massLabel(target)+" of crude, materials, labour and disposal")
+	if w := winnerResult(r, d); w == nil && tab.first == 0 && d.Winner != "" {
+		// A sweep whose masses miss the target: the decision was costed
+		// there, but its batch figures are not among the rows.
+		words(row, 3, massLabel(target)+" is not among the masses costed here; the Decision sheet explains the choice")
+	} else {
+		words(row, 3, "for "+massLabel(target)+" of crude, materials, labour and disposal")
+	}
 	row++
 
 	label(row, "Elapsed time")
