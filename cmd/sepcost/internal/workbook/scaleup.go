@@ -38,11 +38,11 @@ const (
 const (
 	suTitleRow  = 1
 	suChartRow  = 5   // charts' top row
-	suChartW    = 480 // chart width, px
-	suChartH    = 300 // chart height, px: 15 rows of the default 20 px
+	suChartW    = 560 // chart width, px
+	suChartH    = 340 // chart height, px: 17 rows of the default 20 px
 	suChartGap  = 16  // px between charts
-	suNoteRow   = 22  // above the header: what the quantity columns are
-	suHeaderRow = 23
+	suNoteRow   = 24  // above the header: what the quantity columns are
+	suHeaderRow = 25
 	suFirstRow  = suHeaderRow + 1
 	suHeaderMax = 16.0 // header cells wrap beyond this many characters
 	pxPerChar   = 8.0  // excelize's column width to pixels (convertColWidthToPixels)
@@ -144,7 +144,7 @@ func writeScaleUp(f *excelize.File, st *styles, r *scale.Report, m money, method
 			k := first + i
 			rw.reset(k)
 			rw.num(suMass, row.CrudeKg*1000, st.figure, false)
-			rw.text(suMethod, methods[j].sheet, st.text)
+			rw.text(suMethod, methods[j].sheet, st.textIndent) // set off from the mass on its left
 			if !row.Feasible {
 				rw.text(suFeasible, notFeasible(row.Reason), st.text)
 				if err := rw.write(sw); err != nil {
