@@ -85,7 +85,7 @@ func formatFor(flag, out string) (string, error) {
 		return "", usageError{fmt.Errorf("--format %q: write xlsx, json, csv or text", flag)}
 	}
 	if known && byExt != f {
-		return "", usageError{fmt.Errorf("--format %s but -o %s names a %s file: make them agree (for example -o %s)",
+		return "", usageError{fmt.Errorf("--format %s but -o %s has the extension of %s: make them agree (for example -o %s)",
 			f, out, byExt, strings.TrimSuffix(out, filepath.Ext(out))+formatExt[f])}
 	}
 	if f == "xlsx" && (out == "" || out == "-") {
