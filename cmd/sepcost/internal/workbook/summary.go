@@ -244,7 +244,10 @@ func writeRecommendation(g *grid, st *styles, r *scale.Report, m money, row int,
 	if d != nil && d.TargetKg > 0 && finite(d.TargetKg) {
 		target = d.TargetKg
 	}
-	heading := "Recommendation at " + massLabel(target) + " of crude"
+	heading := "Recommendation"
+	if target > 0 && finite(target) {
+		heading += " at " + massLabel(target) + " of crude"
+	}
 	if r.TargetWhy != "" {
 		heading += " (" + r.TargetWhy + ")"
 	}
