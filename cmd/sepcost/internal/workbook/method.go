@@ -232,7 +232,7 @@ func (ms *methodSheet) figures() error {
 		f0 := first[k.a]
 		g.text(ms.row, colTitle, f0.Label, st.text)
 		g.text(ms.row, colLabel, f0.Key, st.text)
-		g.text(ms.row, colUnit, f0.Unit, st.text)
+		g.text(ms.row, colUnit, unitLabel(f0.Unit), st.text)
 		for i, res := range ms.res {
 			if !ms.feasible(i) {
 				continue

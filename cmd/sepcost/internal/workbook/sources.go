@@ -68,7 +68,7 @@ func buildSources(g *grid, st *styles, r *scale.Report) error {
 		g.text(row, srcKey, c.Key, st.text)
 		g.set(row, srcLabel, cell{value: c.Label, style: st.wrapSmall, wrap: true, small: true})
 		g.num(row, srcValue, v, st.general)
-		g.text(row, srcUnit, c.Unit, st.text)
+		g.text(row, srcUnit, unitLabel(c.Unit), st.text)
 		g.text(row, srcMark, string(c.Mark), st.text)
 		g.set(row, srcSource, cell{value: src, style: st.wrapSmall, wrap: true, small: true})
 		row++
