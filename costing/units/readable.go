@@ -39,13 +39,11 @@ func Readable(v float64, unit string) string {
 	return s + " " + display(unit)
 }
 
-// display is the spelling of a unit in text: m³ for m3.
-func display(unit string) string {
-	if unit == "m3" {
-		return "m³"
-	}
-	return unit
-}
+// display is the spelling of a unit in text, powers as superscripts: m³
+// for m3, W/(m²·K) for W/(m^2·K).
+func display(unit string) string { return powers.Replace(unit) }
+
+var powers = strings.NewReplacer("^2", "²", "^3", "³", "m3", "m³", "m2", "m²")
 
 // scaleUnit moves v along its unit's ladder until it lies in [1, 1000), or
 // to the ladder's end.

@@ -26,6 +26,7 @@ func TestReadable(t *testing.T) {
 		{150, "°C", "150 °C"},
 		{25, "mm", "25 mm"},
 		{0, "g", "0 g"},
+		{200, "W/(m^2·K)", "200 W/(m²·K)"},
 	} {
 		if got := Readable(c.v, c.unit); got != c.want {
 			t.Errorf("Readable(%v, %q) = %q, want %q", c.v, c.unit, got, c.want)
