@@ -36,6 +36,7 @@ type styles struct {
 	days                               int // working days, "2.5 working days of 8 h"
 	textIndent                         int // words beside a figure, set off from it
 	wrapSmall                          int // wrapped text in a smaller font (cautions)
+	wrapNote                           int // wrapped italic text (a reason in a table)
 	minPlaces, maxPlaces               int32
 	meta                               map[int]fmtMeta
 }
@@ -115,6 +116,7 @@ func newStyles(f *excelize.File, m money) (*styles, error) {
 		{&st.kgFine, excelize.Style{CustomNumFmt: str("[<1]0.000###;#,##0.000"), Alignment: &excelize.Alignment{Vertical: "top"}}, fmtMeta{6, true, 0}},
 		{&st.days, excelize.Style{CustomNumFmt: str(`0.0" working days of 8 h"`), Alignment: &excelize.Alignment{Vertical: "top", Horizontal: "left", Indent: 1}}, fmtMeta{1, false, 22}},
 		{&st.textIndent, excelize.Style{Alignment: &excelize.Alignment{Vertical: "top", Horizontal: "left", Indent: 1}}, fmtMeta{places: -1}},
+		{&st.wrapNote, excelize.Style{Font: &excelize.Font{Italic: true}, Alignment: &excelize.Alignment{WrapText: true, Vertical: "top"}}, fmtMeta{places: -1}},
 		{&st.wrapSmall, excelize.Style{Font: &excelize.Font{Size: 9}, Alignment: &excelize.Alignment{WrapText: true, Vertical: "top"}}, fmtMeta{places: -1}},
 		{&st.ruleNumber, excelize.Style{Alignment: &excelize.Alignment{Horizontal: "left", Vertical: "top"}}, fmtMeta{places: -1}},
 	}

@@ -157,7 +157,13 @@ func writeSummaryTable(g *grid, st *styles, r *scale.Report, methods []methodOut
 			status := costing.StatusOf(mc.feasible, mc.reason)
 			g.text(row, smStatus, status.Words(), st.text)
 			if !mc.feasible {
-				g.set(row, smTotal, cell{value: costing.Detail(mc.reason), style: st.note, spill: true})
+				// The reason across the figures' columns, wrapped, so that
+				// a long one neither runs off the printed page nor widens it.
+				g.set(row, smTotal, cell{value: costing.Detail(mc.reason), style: st.wrapNote, wrap: true})
+				for c := smTotal + 1; c <= lastCol; c++ {
+					g.blank(row, c, st.wrapNote)
+				}
+				g.merge(row, smTotal, lastCol)
 				row++
 				continue
 			}
