@@ -2,10 +2,8 @@ package main
 
 import (
 	"bytes"
-	"errors"
 	"fmt"
 	"io"
-	"io/fs"
 	"os"
 	"path/filepath"
 	"strings"
@@ -20,20 +18,8 @@ import (
 	"sepcost/scale"
 )
 
-// openInput reads a user file, with an error that names it.
-func openInput(path, what string) ([]byte, error) {
-	data, err := os.ReadFile(path)
-	if errors.Is(err, fs.ErrNotExist) {
-		return nil, fmt.Errorf("%s: no such %s file", path, what)
-	}
-	if err != nil {
-		return nil, fmt.Errorf("%s: cannot read the %s file: %w", path, what, err)
-	}
-	return data, nil
-}
-
 func loadScenario(path string) (*scenario.Scenario, error) {
-	data, err := openInput(path, "scenario")
+	data, err := readInput(path, "scenario", scenario.MaxFileSize)
 	if err != nil {
 		return nil, err
 	}
@@ -57,15 +43,13 @@ func loadPrices(path, sheet, scenarioPath string) (*prices.Table, error) {
 		return nil, usageError{fmt.Errorf("--prices-sheet %q: only a price table in an .xlsx workbook has sheets, and %s is not one", sheet, path)}
 	}
 	if xlsx {
-		f, err := os.Open(path)
+		data, err := readInput(path, "price workbook", workbook.MaxPriceBookBytes)
 		if err != nil {
-			_, err = openInput(path, "price workbook")
 			return nil, err
 		}
-		defer f.Close()
-		return workbook.ReadPrices(f, path, sheet)
+		return workbook.ReadPrices(bytes.NewReader(data), path, sheet)
 	}
-	data, err := openInput(path, "price table")
+	data, err := readInput(path, "price table", prices.MaxFileSize)
 	if err != nil {
 		return nil, err
 	}
