@@ -55,6 +55,7 @@ func EstimateWith(p *costing.Plan, t *prices.Table, massesKg []float64, opt Opti
 		Results:      res,
 		Coefficients: p.Coefficients(),
 		Cautions:     p.Cautions(),
+		Equipment:    p.Equipment,
 	}
 	r.TargetKg, r.TargetWhy = sc.TargetKg, "target_mass in the scenario"
 	for _, in := range sc.Inputs {
@@ -85,11 +86,37 @@ func EstimateWith(p *costing.Plan, t *prices.Table, massesKg []float64, opt Opti
 		}
 		r.Decision.weigh(r.Uncertainty)
 	}
+	if sc.Campaign != nil {
+		sp := *sc.Campaign
+		if !sp.BatchGiven {
+			sp.BatchKg = r.TargetKg
+		}
+		if r.Campaign, err = RunCampaign(p, t, &sp); err != nil {
+			return nil, err
+		}
+		r.Coefficients = append(r.Coefficients, CampaignCoefficients()...)
+		r.Decision.onCampaign(r.Campaign)
+		if w, ok := r.Campaign.Cost(r.Campaign.Winner); ok {
+			// The contingency comes from the draws at the campaign's own
+			// batch mass.
+			u := r.Uncertainty
+			if u != nil && sp.BatchKg != u.TargetKg {
+				if u, err = Sample(p, t, sp.BatchKg, opt.Draws, opt.Seed, nil); err != nil {
+					return nil, err
+				}
+			}
+			r.Budget = NewBudget(w, u)
+			r.Budget.CapitalItems = r.Campaign.Capital[w.Method]
+		}
+	}
 	for _, in := range sc.Inputs {
 		r.Inputs = append(r.Inputs, Input(in))
 	}
 	if sc.Notes != "" {
 		r.Notes = append(r.Notes, usage.Note{Level: usage.Info, Text: sc.Notes})
+	}
+	if n := UnusedPrices(t, res); n != nil {
+		r.Notes = append(r.Notes, *n)
 	}
 	return r, nil
 }

@@ -17,10 +17,11 @@ import (
 type portfolioOptions struct {
 	plan      string
 	prices    string
-	equipment string
+	sheet     string
 	out       string
 	format    string
 	force     bool
+	equipment string
 }
 
 func newPortfolioCommand() *cobra.Command {
@@ -28,12 +29,16 @@ func newPortfolioCommand() *cobra.Command {
 	cmd := &cobra.Command{
 		Use:   "portfolio PLAN.csv",
 		Short: "Cost a year's plan of batches and roll up cost, waste, solvent and hours",
-		Long: `Reads a plan CSV with the header scenario,mass,runs and an optional method
-column: a scenario file (relative to the plan), a batch mass with its unit,
-how many times that batch is run, and optionally the method to force. Each
-row takes the cheapest feasible method at its mass unless forced. The
-roll-up gives cost per method, waste by class and by suggested code, solvent
-purchases by solvent and hours; totals reconcile to the cent.`,
+		Long: `Reads a plan CSV with the header scenario,mass,runs and the optional
+columns method, date and development: a scenario file (relative to the
+plan), a batch mass with its unit, how many times that batch is run,
+optionally the method to force, the planned date (YYYY-MM-DD, rolled up by
+quarter) and where one-time development costs are charged (scenario: once
+per scenario and method in the plan, the default; row: on this row; done:
+already developed). Each row is costed as a campaign of its runs and takes
+the method cheapest per gram over that campaign unless forced. The roll-up
+gives cost per method and quarter, waste by class and by suggested code,
+solvent purchases by solvent and hours; totals reconcile to the cent.`,
 		Example: `  sepcost portfolio plan.csv --prices prices.csv -o year.xlsx`,
 		Args:    oneFile("plan file (CSV)", "plan.csv --prices prices.csv"),
 		RunE: func(cmd *cobra.Command, args []string) error {
@@ -41,7 +46,8 @@ purchases by solvent and hours; totals reconcile to the cent.`,
 			return runPortfolio(cmd.Context(), opts, cmd.OutOrStdout(), cmd.ErrOrStderr())
 		},
 	}
-	cmd.Flags().StringVar(&opts.prices, "prices", "", "price table CSV (default: prices.csv beside the plan)")
+	cmd.Flags().StringVar(&opts.prices, "prices", "", "price table, CSV or .xlsx (default: prices.csv beside the plan)")
+	addPricesSheetFlag(cmd, &opts.sheet)
 	cmd.Flags().StringVar(&opts.equipment, "equipment", "", "site equipment table CSV (default: equipment.csv beside the plan if there is one, else the built-in table)")
 	addOutputFlags(cmd, &opts.out, &opts.format, &opts.force)
 	return cmd
@@ -60,7 +66,7 @@ func runPortfolio(_ context.Context, opts *portfolioOptions, stdout, stderr io.W
 	if err != nil {
 		return err
 	}
-	t, err := loadPrices(opts.prices, opts.plan)
+	t, err := loadPrices(opts.prices, opts.sheet, opts.plan)
 	if err != nil {
 		return err
 	}

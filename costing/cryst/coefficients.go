@@ -99,7 +99,7 @@ func Defaults() []source.Coefficient {
 		c(KeyExtrapolation, "distance outside the measured solubility range that draws a warning", 10, units.Temperature, "K", "ln S curves in 1/T (large heat capacity of solution), so a van 't Hoff line is a guess beyond a few kelvin", source.CommonPractice),
 		c(KeyDilution, "solvent per product above which the crystallization is called dilute", 50e-3, units.SpecificVolume, "mL/g", "beyond about 50 volumes (mL per g) a crystallization is impractically dilute", source.CommonPractice),
 		c(KeySolidCp, "heat capacity of the organic solid", 1293, SpecificHeatCapacity, "J/(g K)", "naphthalene, 39.601 cal/(mol·K) at 298.15 K (McCullough et al. 1957, in the NIST Chemistry WebBook) ÷ 128.17 g/mol; organic solids lie at about 1.0–1.5 J/(g·K)", source.Derived),
-		c(KeyRoomT, "room temperature (start of heating, cooling-water limit)", 293.15, units.Temperature, "C", "", source.CommonPractice),
+		c(KeyRoomT, "room temperature (start of heating, cooling-water limit)", 293.15, units.Temperature, "°C", "", source.CommonPractice),
 		c(KeyHeatApproach, "jacket or bath above the dissolution temperature while heating", 20, units.Temperature, "K", "", source.CommonPractice),
 		c(KeyCoolApproach, "jacket or bath below the isolation temperature while cooling", 10, units.Temperature, "K", "", source.CommonPractice),
 		c(KeyMaxCoolingRate, "fastest controlled cooling ramp", 30.0/h, CoolingRate, "K/h", "0.1–1 K/min, to grow filterable crystals rather than crash them out", source.CommonPractice),
@@ -127,8 +127,8 @@ func Defaults() []source.Coefficient {
 		c(KeyEvapAttended, "share of evaporation time a person attends", 0.25, units.None, "", "", source.CommonPractice),
 		c(KeyCropTime, "time to cool, age and filter a second crop", 1.5*h, units.Time, "h", "", source.CommonPractice),
 		c(KeyCropAttended, "share of second-crop time a person attends", 0.5, units.None, "", "", source.CommonPractice),
-		c(KeyScreeningTime, "one-time solvent screening and development", 8*h, units.Time, "h", "a solvent screen in a dozen tubes and one or two trial crystallizations: about a day", source.CommonPractice),
-		c(KeyScreeningMass, "one-time crude used in screening", 2e-3, units.Mass, "g", "a dozen tubes of 50–100 mg and a gram-scale trial", source.CommonPractice),
+		c(KeyScreeningTime, "one-time development of the crystallization", 40*h, units.Time, "h", "developing a crystallization to run at kilogram scale (solvent screen, solubility curve, seeding, filtration and drying trials, polymorph check) commonly takes one to several weeks of a chemist's time; one working week is taken, the short end (a bench-only trial is about a day: set 8 h)", source.CommonPractice),
+		c(KeyScreeningMass, "one-time crude used in development", 20e-3, units.Mass, "g", "a dozen screening tubes of 50–100 mg, a solubility curve and a few trial crystallizations of 2–5 g", source.CommonPractice),
 	}
 	out = append(out, scaleDefaults()...)
 	for i, v := range DefaultFlasksM3 {

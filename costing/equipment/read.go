@@ -17,11 +17,6 @@ import (
 // writes them; a file may order them freely (any letter case), naming all.
 var Columns = []string{"item", "kind", "size", "throughput", "max_load", "hourly_rate", "ownership", "price", "currency", "service_life", "source"}
 
-// MaxFileSize is the largest equipment table read (1 MiB): a site lists
-// hundreds of items, not millions; a larger file is refused before it is
-// read.
-const MaxFileSize = 1 << 20
-
 // Ownership values.
 const (
 	OwnedWord = "owned"
@@ -75,6 +70,10 @@ func (es Errors) Unwrap() []error {
 	}
 	return out
 }
+
+// MaxFileSize caps an equipment table: a site lists tens of items, so 1 MiB
+// is far beyond any real table and keeps a wrong file from filling memory.
+const MaxFileSize = 1 << 20
 
 // Read reads an equipment table written as CSV from r; file names it in
 // messages. Lines starting with '#' are comments. The header names the

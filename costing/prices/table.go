@@ -19,6 +19,26 @@ type Item struct {
 	Source   string          // supplier, quote or catalogue reference
 	Date     string          // date of the price, as written (YYYY-MM-DD)
 	Line     int             // line number in the file, 1-based
+	// From is the purchase from which this line's price applies, as written
+	// ("200 L"); empty for the first band (from zero). FromSI is the same in
+	// SI units of Per.Dim. An item may have several lines, one per band.
+	From   string
+	FromSI float64
+
+	// Set by Resolve, not read from the file:
+	Written string  // the name as written when Resolve renamed it to a solvent's canonical name ("heptane" for n-heptane)
+	Density float64 // kg/m³ of the solvent an item priced per mass names, so that a volume of it can be priced; 0 otherwise
+}
+
+// Banded reports whether the item has more than one price line.
+func (t *Table) Banded(name string) bool {
+	n := 0
+	for i := range t.Items {
+		if sameName(t.Items[i].Name, name) {
+			n++
+		}
+	}
+	return n > 1
 }
 
 // Table is a price table with a single currency.

@@ -126,6 +126,10 @@ func resolve(c *collector, raw *rawScenario, root *yaml.Node) *Scenario {
 		s.Distillation = c.distillation(raw.Distillation, s, root, echo)
 	}
 
+	if raw.Campaign != nil {
+		s.Campaign = c.campaign(raw.Campaign, s, root, echo)
+	}
+
 	// Settings: checked against the models' coefficient tables later (costing.Prepare).
 	keys := make([]string, 0, len(raw.Settings))
 	for k := range raw.Settings {

@@ -80,6 +80,7 @@ type Scenario struct {
 	Chromatography  *Chromatography
 	Crystallization *Crystallization // nil when the scenario has no crystallization section
 	Distillation    *Distillation    // nil when the scenario has no distillation section
+	Campaign        *Campaign        // nil when the scenario has no campaign section
 	Settings        []Setting
 	Solvents        *solvent.Book
 	Notes           string

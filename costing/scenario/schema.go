@@ -13,6 +13,7 @@ type rawScenario struct {
 	Chromatography  *rawChrom         `yaml:"chromatography"`
 	Crystallization *rawCryst         `yaml:"crystallization"`
 	Distillation    *rawDistil        `yaml:"distillation"`
+	Campaign        *rawCampaign      `yaml:"campaign"`
 	Settings        map[string]Text   `yaml:"settings"`
 	Solvents        []rawSolvent      `yaml:"solvents"`
 	Notes           Text              `yaml:"notes"`

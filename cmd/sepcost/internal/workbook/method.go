@@ -233,7 +233,7 @@ func (ms *methodSheet) figures() error {
 		f0 := first[k.a]
 		g.text(ms.row, colTitle, f0.Label, st.text)
 		g.text(ms.row, colLabel, f0.Key, st.text)
-		g.text(ms.row, colUnit, f0.Unit, st.text)
+		g.text(ms.row, colUnit, unitLabel(f0.Unit), st.text)
 		for i, res := range ms.res {
 			if !ms.feasible(i) {
 				continue
@@ -277,6 +277,7 @@ type ledgerRow struct {
 	group    usage.Group
 	unit     string
 	priceRow int
+	band     string // the price band, "" when the item has one price line
 }
 
 // ledger writes the bill of materials and costs, grouped in usage.Groups
@@ -294,7 +295,7 @@ func (ms *methodSheet) ledger() error {
 	ms.section("Bill of materials and costs", []string{"Item", "Label", "Unit", "Unit price"}, [2]string{"Qty", "Cost"})
 
 	byGroup := map[usage.Group][]*ledgerRow{}
-	rows := map[[2]any]*ledgerRow{}
+	rows := map[[3]any]*ledgerRow{}
 	lines := make([]map[*ledgerRow]ledger.Line, len(ms.res))
 	for i, res := range ms.res {
 		if !ms.feasible(i) {
@@ -308,10 +309,12 @@ func (ms *methodSheet) ledger() error {
 				kr[d.Group] = keyer{}
 			}
 			k := kr[d.Group].key(d.Item, d.Label)
-			id := [2]any{d.Group, k}
+			// A price band is a price row of its own: a line priced from
+			// another band at another mass gets its own row.
+			id := [3]any{d.Group, k, line.PriceRow}
 			lr := rows[id]
 			if lr == nil {
-				lr = &ledgerRow{key: k, group: d.Group, unit: line.Unit, priceRow: line.PriceRow}
+				lr = &ledgerRow{key: k, group: d.Group, unit: line.Unit, priceRow: line.PriceRow, band: line.Band}
 				rows[id] = lr
 				byGroup[d.Group] = append(byGroup[d.Group], lr)
 			}
@@ -337,7 +340,11 @@ func (ms *methodSheet) ledger() error {
 		for _, lr := range list {
 			row := ms.row
 			g.text(row, colTitle, lr.key.a, st.text)
-			g.text(row, colLabel, lr.key.b, st.text)
+			label := lr.key.b
+			if lr.band != "" {
+				label += " (price band " + lr.band + ")"
+			}
+			g.text(row, colLabel, label, st.text)
 			g.text(row, colUnit, lr.unit, st.text)
 			price := ms.r.Prices.Items[lr.priceRow].Price
 			g.formula(row, colUnitPrice, priceRef(lr.priceRow), price.InexactFloat64(), st.priceStyle(price))
@@ -348,7 +355,7 @@ func (ms *methodSheet) ledger() error {
 					continue
 				}
 				q, c := blockCol(i), blockCol(i)+1
-				g.num(row, q, line.Qty.InexactFloat64(), st.general)
+				g.num(row, q, line.Qty.InexactFloat64(), st.figure) // the cell keeps every priced digit; the format shows about three significant figures
 				f := fmt.Sprintf("ROUND(%s*%s,%d)", cellName(q, row), absName(colUnitPrice, row), places)
 				g.formula(row, c, f, line.Amount.InexactFloat64(), st.money)
 				ms.lay.add(ms.name, cellName(c, row), line.Amount, "line")
@@ -379,7 +386,7 @@ func (ms *methodSheet) ledger() error {
 	for i, res := range ms.res {
 		c := blockCol(i) + 1
 		if !ms.feasible(i) {
-			g.text(totalRow, c, "not feasible", st.bold)
+			g.text(totalRow, c, res.Status().Words(), st.bold)
 			continue
 		}
 		total := res.Ledger.Total

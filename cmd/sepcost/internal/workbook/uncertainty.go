@@ -6,6 +6,7 @@ import (
 	"sort"
 	"strconv"
 
+	"sepcost/costing"
 	"sepcost/costing/source"
 	"sepcost/scale"
 )
@@ -56,7 +57,6 @@ const (
 // (dimensionless, σ ≥ 0); about two draws in three fall between them.
 func buildUncertainty(g *grid, st *styles, r *scale.Report) {
 	u := r.Uncertainty
-	g.printWide = true
 	g.widths[uLabel] = 46
 	for c := uP10; c <= uLast; c++ {
 		g.minWidths[c] = 13
@@ -92,10 +92,21 @@ func buildUncertainty(g *grid, st *styles, r *scale.Report) {
 			g.num(row, uP90, b.P90, st.perGram)
 		} else {
 			// No cost in any draw: words in place of the three quantiles,
-			// with the reason where the decision records one.
+			// with the reason where the decision records one. A method the
+			// scenario does not describe was never drawn: its shares are
+			// not 0 % but not applicable.
 			text := "not feasible in any draw"
-			if d := r.Decision; d != nil && d.Infeasible[b.Method] != "" {
-				text = notFeasible(d.Infeasible[b.Method])
+			reason := ""
+			if d := r.Decision; d != nil {
+				reason = d.Infeasible[b.Method]
+			}
+			if reason != "" {
+				text = notFeasible(reason)
+			}
+			if costing.StatusOf(false, reason) == costing.StatusNotAssessed {
+				mergedCell(g, row, uP10, uCheapest, cell{value: text, style: st.wrap, wrap: true})
+				row++
+				continue
 			}
 			mergedCell(g, row, uP10, uP90, cell{value: text, style: st.wrap, wrap: true})
 		}

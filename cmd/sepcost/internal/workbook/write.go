@@ -96,7 +96,7 @@ func Write(w io.Writer, r *scale.Report, opt Options) error {
 type checkCell struct {
 	sheet, ref string
 	want       decimal.Decimal
-	kind       string // "unit price", "line", "subtotal", "total", "summary total", "disposal", "scale-up total"
+	kind       string // "unit price", "line", "subtotal", "total", "summary total", "batch cost", "disposal", "scale-up total"
 }
 
 // layout records where the writer put the money cells.
@@ -150,7 +150,14 @@ func build(r *scale.Report, opt Options, record bool) (*excelize.File, *layout, 
 	}
 	details := detailSheets(r)
 
-	order := []string{sheetSummary, sheetInputs, sheetPrices}
+	order := []string{sheetSummary, sheetDecision}
+	if r.Budget != nil && r.Campaign != nil {
+		order = append(order, sheetBudget)
+	}
+	order = append(order, sheetInputs, sheetPrices)
+	if r.Budget != nil && r.Campaign != nil && r.Equipment != nil {
+		order = append(order, sheetEquipment)
+	}
 	if details {
 		order = append(order, names...)
 	}
@@ -189,14 +196,29 @@ func build(r *scale.Report, opt Options, record bool) (*excelize.File, *layout, 
 		grids = append(grids, g)
 	}
 	summary := newGrid(sheetSummary)
-	buildSummary(summary, st, r, m, methods, details, lay)
+	plan := buildSummary(summary, st, r, m, methods, details, lay)
+	summary.extra = func(f *excelize.File, widths map[int]float64) error {
+		return summaryChart(f, plan, widths, m.currency)
+	}
+	decision := newGrid(sheetDecision)
+	buildDecisionSheet(decision, st, r, m, lay)
 	inputs := newGrid(sheetInputs)
 	buildInputs(inputs, st, r)
 	prices := newGrid(sheetPrices)
 	buildPrices(prices, st, r)
 	waste := newGrid(sheetWaste)
 	buildWaste(waste, st, r, m, details, lay)
-	grids = append(grids, summary, inputs, prices, waste)
+	grids = append(grids, summary, decision, inputs, prices, waste)
+	if r.Budget != nil && r.Campaign != nil {
+		budget := newGrid(sheetBudget)
+		buildBudget(budget, st, r, m, lay)
+		grids = append(grids, budget)
+		if r.Equipment != nil {
+			eq := newGrid(sheetEquipment)
+			buildEquipment(eq, st, r)
+			grids = append(grids, eq)
+		}
+	}
 	if r.Uncertainty != nil {
 		unc := newGrid(sheetUncertainty)
 		buildUncertainty(unc, st, r)
@@ -208,7 +230,7 @@ func build(r *scale.Report, opt Options, record bool) (*excelize.File, *layout, 
 	}
 	grids = append(grids, sources)
 	for _, g := range grids {
-		if err := g.flush(f, st, opt.OmitCachedValues); err != nil {
+		if err := g.flush(f, st, opt.OmitCachedValues, r.Title); err != nil {
 			return nil, nil, err
 		}
 	}
@@ -254,7 +276,7 @@ func validate(r *scale.Report) (money, error) {
 		}
 	}
 	seen := map[string]bool{}
-	for _, name := range []string{sheetSummary, sheetInputs, sheetPrices, sheetScaleUp, sheetWaste, sheetUncertainty, sheetSources} {
+	for _, name := range []string{sheetSummary, sheetDecision, sheetBudget, sheetInputs, sheetPrices, sheetEquipment, sheetScaleUp, sheetWaste, sheetUncertainty, sheetSources} {
 		seen[strings.ToLower(name)] = true
 	}
 	for _, meth := range r.Methods {
