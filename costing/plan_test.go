@@ -34,7 +34,7 @@ func TestSettings(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	if c := p.Coef[chrom.KeyBedDensity]; c.SI != 450 || c.Mark != "scenario" {
+	if c := p.Coef.Of(chrom.KeyBedDensity); c.SI != 450 || c.Mark != "scenario" {
 		t.Errorf("bed density = %+v", c)
 	}
 	_, err = Prepare(load(t, base+"settings:\n  chromatography.bed_hieght: \"12 cm\"\n  chromatography.bed_density: \"12 cm\"\n"))
