@@ -70,7 +70,13 @@ func Prepare(sc *scenario.Scenario) (*Plan, error) {
 			if calibrated[s.Key] != later {
 				continue
 			}
-			if err := coef.Override(s.Key, s.Value, s.Written); err != nil {
+			err := coef.Override(s.Key, s.Value, s.Written)
+			if c, ok := coef.Lookup(s.Key); err == nil && ok && s.Range.Half > 0 && !(c.InRange(s.Range.Lo()) && c.InRange(s.Range.Hi())) {
+				lo, hi := c, c
+				lo.SI, hi.SI = c.Lo, c.Hi
+				err = fmt.Errorf("%q reaches outside the range %s accepts: %.4g to %.4g %s", s.Written, s.Key, lo.Display(), hi.Display(), c.Unit)
+			}
+			if err != nil {
 				problems = append(problems, &scenario.Problem{File: sc.File, Line: s.Line, Field: "settings." + s.Key, Msg: err.Error()})
 			}
 		}

@@ -2,6 +2,7 @@ package costing
 
 import (
 	"errors"
+	"math"
 	"strings"
 	"testing"
 
@@ -74,5 +75,17 @@ func TestCautions(t *testing.T) {
 	}
 	if strings.Contains(all, "Halogenated") {
 		t.Errorf("no halogenated solvent here")
+	}
+}
+
+// A setting written with a range takes its midpoint (each limit is checked
+// against the coefficient's physical range as a single value would be).
+func TestSettingRange(t *testing.T) {
+	p, err := Prepare(load(t, base+"settings:\n  chromatography.bed_density: \"0.40–0.50 g/mL\"\n"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	if c := p.Coef.Of(chrom.KeyBedDensity); math.Abs(c.SI-450) > 1e-9 {
+		t.Errorf("bed density = %g kg/m³, want the midpoint 450", c.SI)
 	}
 }
