@@ -21,6 +21,18 @@ import (
 // seven must be named in the header row.
 var Columns = []string{"item", "unit", "price", "currency", "category", "source", "date"}
 
+// Optional are columns a table may add; old tables without them keep
+// working. spread is the share either way the price may move before it is
+// paid ("15 %" or 0.15), read as the half-width of a rectangular
+// distribution like a range in a scenario; empty or absent means
+// DefaultSpread.
+var Optional = []string{"spread"}
+
+// DefaultSpread is the half-width, as a share of the price, given to a
+// price without a spread: catalogue prices and quotes move by some tenths
+// within a budget year (common practice, no source).
+const DefaultSpread = 0.15
+
 // required are the columns that may not be left empty on any row;
 // category, source and date may be.
 var required = map[string]bool{"item": true, "unit": true, "price": true, "currency": true}
@@ -172,6 +184,10 @@ func Read(r io.Reader, file string) (*Table, error) {
 		if it.Date != "" {
 			checkDate(it.Date, line, add)
 		}
+		if v := get("spread"); v != "" {
+			it.Spread, _ = checkSpread(v, line, add)
+			it.HasSpread = true
+		}
 		if _, ok := col["item"]; ok {
 			key := nameKey(it.Name)
 			if first, dup := firstLine[key]; dup {
@@ -221,7 +237,7 @@ var emptyHint = map[string]string{
 func readHeader(header []string, line int, add func(int, string, string, ...any)) (col map[string]int, ok bool) {
 	valid := strings.Join(Columns, ", ")
 	known := map[string]bool{}
-	for _, c := range Columns {
+	for _, c := range append(append([]string(nil), Columns...), Optional...) {
 		known[c] = true
 	}
 	names := make([]string, len(header))
@@ -288,6 +304,25 @@ func checkRest(rec []string, col map[string]int, line int, add func(int, string,
 	if v, ok := get("date"); ok {
 		checkDate(v, line, add)
 	}
+	if v, ok := get("spread"); ok {
+		checkSpread(v, line, add)
+	}
+}
+
+// checkSpread reads a price spread: a share from 0 to below 1, as a plain
+// number or a percentage.
+func checkSpread(s string, line int, add func(int, string, string, ...any)) (float64, bool) {
+	const hint = `write the share either way the price may move, from 0 to below 100 %, e.g. "15 %" or 0.15`
+	r, err := units.ParsePlainRange(s)
+	if err != nil || r.Half != 0 {
+		add(line, "spread", "%q is not a share; %s", s, hint)
+		return 0, false
+	}
+	if !(r.Nominal >= 0 && r.Nominal < 1) {
+		add(line, "spread", "%q is outside the valid range; %s", s, hint)
+		return 0, false
+	}
+	return r.Nominal, true
 }
 
 // checkUnit parses a price unit and checks that it is per mass, volume,

@@ -19,6 +19,18 @@ type Item struct {
 	Source   string          // supplier, quote or catalogue reference
 	Date     string          // date of the price, as written (YYYY-MM-DD)
 	Line     int             // line number in the file, 1-based
+	// Spread is the share either way the price may move (the half-width of
+	// a rectangular distribution), when HasSpread; else DefaultSpread.
+	Spread    float64
+	HasSpread bool
+}
+
+// PriceSpread is the item's spread, written or DefaultSpread.
+func (it Item) PriceSpread() float64 {
+	if it.HasSpread {
+		return it.Spread
+	}
+	return DefaultSpread
 }
 
 // Table is a price table with a single currency.
