@@ -106,6 +106,26 @@ func newPlan(sc *scenario.Scenario, coef source.Set) *Plan {
 // sample the models' uncertainty).
 func (p *Plan) WithCoefficients(coef source.Set) *Plan { return newPlan(p.Scenario, coef) }
 
+// With is the plan on a drawn scenario and coefficient set (a Monte Carlo
+// draw: scenario.Scenario.With, source.Set.WithValues).
+func (p *Plan) With(sc *scenario.Scenario, coef source.Set) *Plan { return newPlan(sc, coef) }
+
+// PerGramLean is method j's cost per gram of purified product at one mass
+// priced with float rates: the lean path for Monte Carlo draws (no
+// decimal ledger, no green metrics). NaN when the method is not feasible or
+// recovers nothing.
+func (p *Plan) PerGramLean(j int, crudeKg float64, r *ledger.Rates) (float64, error) {
+	u := p.Methods[j].Run(crudeKg)
+	if !u.Feasible || u.ProductOutKg <= 0 {
+		return math.NaN(), nil
+	}
+	total, err := r.Total(u)
+	if err != nil {
+		return 0, err
+	}
+	return total / (u.ProductOutKg * 1000), nil
+}
+
 // add registers a method. A method the scenario does not describe stays in
 // the plan as "not assessed", with the reason, so that no report silently
 // drops it.

@@ -56,7 +56,7 @@ func EstimateWith(p *costing.Plan, t *prices.Table, massesKg []float64, opt Opti
 		return nil, err
 	}
 	if opt.Draws > 0 {
-		if r.Uncertainty, err = Sample(p, t, sc.TargetKg, opt.Draws, opt.Seed, opt.Progress); err != nil {
+		if r.Uncertainty, err = SampleAcross(p, t, sc.TargetKg, massesKg, opt.Draws, opt.Seed, opt.Progress); err != nil {
 			return nil, err
 		}
 		r.Decision.weigh(r.Uncertainty)

@@ -162,7 +162,7 @@ func buildUncertainty(g *grid, st *styles, r *scale.Report) {
 	for _, mk := range others {
 		spread("Coefficients marked "+mk, scale.Spread[source.Mark(mk)])
 	}
-	spread("Every price in the price table", scale.PriceSpread)
+	// prices: see the inputs table
 	row++
 	wrapped(g, st, row, "These spreads are this project's choices (common practice, no source): a value seen in a published table is "+
 		"known to a few per cent, one from memory to some 15 %, a habit of the trade to a quarter; quotes and catalogue prices "+
