@@ -263,49 +263,85 @@ func crossings(names []string, masses []float64, at func(m int) [][]float64) []C
 }
 
 // weighInputs ranks the inputs by rank correlation with cost per gram at
-// the target mass and by the value of perfect information (voi.go).
+// the target mass and by the value of perfect information (voi.go). Each
+// input's draws are ordered once, for its ranks and its bins; the inputs
+// are weighed on all cores, each into its own slot.
 func (u *Uncertainty) weighInputs(p *costing.Plan, r *ledger.Rates, x []float64, perG [][]float64) {
 	nI, draws := len(u.Inputs), len(perG)
 	u.Leading = leading(p, r, u.TargetKg)
-	col := func(j int) []float64 {
-		out := make([]float64, draws)
-		for k := range out {
-			out[k] = perG[k][j]
+	var ys [][]float64 // cost per gram of each method, then the leading two's difference
+	for j := range p.Methods {
+		col := make([]float64, draws)
+		for k := range col {
+			col[k] = perG[k][j]
 		}
-		return out
+		ys = append(ys, col)
 	}
-	var diff []float64
 	if u.Leading[1] >= 0 {
-		diff = make([]float64, draws)
+		diff := make([]float64, draws)
 		for k := range diff {
 			diff[k] = perG[k][u.Leading[0]] - perG[k][u.Leading[1]]
+		}
+		ys = append(ys, diff)
+	}
+	ry := make([][]float64, len(ys)) // ranks of a column with no NaN, else nil
+	for c, y := range ys {
+		if !hasNaN(y) {
+			ry[c] = ranks(y)
 		}
 	}
 	nb := netBenefit(perG, u.ProductG)
 	u.EVPI = evpi(nb.rows)
-	xi := make([]float64, draws)
-	xk := make([]float64, len(nb.rows))
-	for i := range nI {
+	sens := make([]Sensitivity, nI)
+	worth := make([]float64, nI)
+	_ = run(nI, nil, func(i int) error {
+		xi := make([]float64, draws)
 		for k := range xi {
 			xi[k] = x[k*nI+i]
 		}
-		s := Sensitivity{Input: i, Decision: math.NaN()}
-		for j := range perG[0] {
-			s.Rho = append(s.Rho, spearman(xi, col(j)))
+		order := argsort(xi)
+		rx := ranksOrdered(xi, order)
+		rho := make([]float64, len(ys))
+		for c, y := range ys {
+			if ry[c] != nil {
+				rho[c] = pearson(rx, ry[c])
+			} else {
+				rho[c] = spearman(xi, y)
+			}
 		}
-		if diff != nil {
-			s.Decision = spearman(xi, diff)
+		s := Sensitivity{Input: i, Rho: rho[:len(p.Methods)], Decision: math.NaN()}
+		if len(ys) > len(p.Methods) {
+			s.Decision = rho[len(p.Methods)]
 		}
-		u.Sensitivity = append(u.Sensitivity, s)
-		for n, k := range nb.draw {
-			xk[n] = xi[k]
+		sens[i] = s
+		if len(nb.draw) == draws {
+			worth[i] = evppiOrdered(xi, nb.rows, order)
+		} else {
+			xk := make([]float64, len(nb.draw))
+			for n, k := range nb.draw {
+				xk[n] = xi[k]
+			}
+			worth[i] = evppi(xk, nb.rows)
 		}
-		if v := math.Min(evppi(xk, nb.rows), u.EVPI); v > 0 {
+		return nil
+	})
+	u.Sensitivity = sens
+	for i, v := range worth {
+		if v = math.Min(v, u.EVPI); v > 0 {
 			u.Worth = append(u.Worth, Worth{Input: i, Value: v})
 		}
 	}
 	sort.SliceStable(u.Sensitivity, func(a, b int) bool { return strength(u.Sensitivity[a]) > strength(u.Sensitivity[b]) })
 	sort.SliceStable(u.Worth, func(a, b int) bool { return u.Worth[a].Value > u.Worth[b].Value })
+}
+
+func hasNaN(v []float64) bool {
+	for _, x := range v {
+		if math.IsNaN(x) {
+			return true
+		}
+	}
+	return false
 }
 
 // strength is the rank correlation that orders the sensitivity table: with

@@ -1,8 +1,9 @@
 package scale
 
 import (
+	"cmp"
 	"math"
-	"sort"
+	"slices"
 )
 
 // Value of information and sensitivity, computed from one set of Monte
@@ -58,12 +59,13 @@ func evppi(x []float64, nb [][]float64) float64 {
 	if n == 0 || len(x) != n {
 		return 0
 	}
+	return evppiOrdered(x, nb, argsort(x))
+}
+
+// evppiOrdered is evppi with the draws' order on x given (argsort).
+func evppiOrdered(x []float64, nb [][]float64, idx []int) float64 {
+	n := len(nb)
 	J := len(nb[0])
-	idx := make([]int, n)
-	for i := range idx {
-		idx[i] = i
-	}
-	sort.SliceStable(idx, func(a, b int) bool { return x[idx[a]] < x[idx[b]] })
 	bins := binEdges(x, idx)
 	total := make([]float64, J)
 	sumMax := 0.0
@@ -136,13 +138,26 @@ func spearman(x, y []float64) float64 {
 	return pearson(ranks(xs), ranks(ys))
 }
 
-// ranks gives 1-based ranks, ties their mean rank.
-func ranks(v []float64) []float64 {
+// argsort is the order of the indices of v by value, ties by index.
+func argsort(v []float64) []int {
 	idx := make([]int, len(v))
 	for i := range idx {
 		idx[i] = i
 	}
-	sort.SliceStable(idx, func(a, b int) bool { return v[idx[a]] < v[idx[b]] })
+	slices.SortFunc(idx, func(a, b int) int {
+		if c := cmp.Compare(v[a], v[b]); c != 0 {
+			return c
+		}
+		return a - b
+	})
+	return idx
+}
+
+// ranks gives 1-based ranks, ties their mean rank.
+func ranks(v []float64) []float64 { return ranksOrdered(v, argsort(v)) }
+
+// ranksOrdered is ranks with the order of v given (argsort).
+func ranksOrdered(v []float64, idx []int) []float64 {
 	r := make([]float64, len(v))
 	for i := 0; i < len(idx); {
 		j := i
