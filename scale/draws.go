@@ -251,7 +251,7 @@ func (d *design) addPrices(t *prices.Table, used map[int]bool) {
 			continue
 		}
 		basis := fmt.Sprintf("written in the price table (%s line %d)", t.File, it.Line)
-		if !it.HasSpread {
+		if it.Spread == nil {
 			basis = fmt.Sprintf("default ±%.0f %% (a quoted or catalogue price; common practice, no source)", prices.DefaultSpread*100)
 		}
 		p := it.Price.InexactFloat64()

@@ -56,10 +56,13 @@ func EstimateWith(p *costing.Plan, t *prices.Table, massesKg []float64, opt Opti
 		return nil, err
 	}
 	if opt.Draws > 0 {
-		if r.Uncertainty, err = SampleAcross(p, t, sc.TargetKg, massesKg, opt.Draws, opt.Seed, opt.Progress); err != nil {
+		if r.Uncertainty, err = SampleAcross(p, t, sc.TargetKg, Thin(massesKg, MaxBandMasses), opt.Draws, opt.Seed, opt.Progress); err != nil {
 			return nil, err
 		}
 		r.Decision.weigh(r.Uncertainty)
+		if r.Decision.Winner != "" && r.Decision.RunnerUp != "" {
+			r.Decision.Explanation = append(r.Decision.Explanation, r.Uncertainty.AdviceLines(3)...)
+		}
 	}
 	for _, in := range sc.Inputs {
 		r.Inputs = append(r.Inputs, Input(in))

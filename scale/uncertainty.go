@@ -65,6 +65,25 @@ type Uncertainty struct {
 	Leading     [2]int  // the two methods cheapest at the nominal values (−1 when absent)
 }
 
+// MaxBandMasses bounds the masses the bands are drawn at: a sweep of 200
+// masses gets its bands at 50 of them, evenly spread, which a chart on a
+// logarithmic axis cannot tell from all 200 and which keeps the draws to
+// a second or two (common practice, no source).
+const MaxBandMasses = 50
+
+// Thin keeps at most n of the ascending masses, the first and the last
+// among them, evenly spaced by position.
+func Thin(masses []float64, n int) []float64 {
+	if len(masses) <= n || n < 2 {
+		return masses
+	}
+	out := make([]float64, n)
+	for k := range out {
+		out[k] = masses[k*(len(masses)-1)/(n-1)]
+	}
+	return out
+}
+
 // Sample draws at the target mass only (see SampleAcross).
 func Sample(p *costing.Plan, t *prices.Table, targetKg float64, draws int, seed uint64, progress func(done int)) (*Uncertainty, error) {
 	return SampleAcross(p, t, targetKg, nil, draws, seed, progress)
@@ -327,7 +346,8 @@ func (u *Uncertainty) weighInputs(p *costing.Plan, r *ledger.Rates, x []float64,
 	})
 	u.Sensitivity = sens
 	for i, v := range worth {
-		if v = math.Min(v, u.EVPI); v > 0 {
+		// Below a ten-thousandth of the whole value is rounding noise.
+		if v = math.Min(v, u.EVPI); v > 1e-4*u.EVPI {
 			u.Worth = append(u.Worth, Worth{Input: i, Value: v})
 		}
 	}

@@ -207,3 +207,16 @@ func TestSampleAcrossReproducible(t *testing.T) {
 		}
 	}
 }
+
+// Thin keeps the ends and spreads the rest evenly: 0..9 thinned to 4 is
+// 0, 3, 6, 9 (positions k·9/3, hand computation).
+func TestThin(t *testing.T) {
+	v := []float64{0, 1, 2, 3, 4, 5, 6, 7, 8, 9}
+	got := Thin(v, 4)
+	if len(got) != 4 || got[0] != 0 || got[1] != 3 || got[2] != 6 || got[3] != 9 {
+		t.Errorf("Thin = %v", got)
+	}
+	if len(Thin(v, 20)) != 10 {
+		t.Error("Thin must keep a short list whole")
+	}
+}

@@ -170,7 +170,7 @@ func Read(r io.Reader, file string) (*Table, error) {
 			Category: get("category"),
 			Source:   get("source"),
 			Date:     get("date"),
-			Line:     line,
+			Line:     line, Spread: readSpread(get("spread"), line, add),
 		}
 		if _, ok := col["unit"]; ok {
 			it.Per, _ = checkUnit(it.Unit, line, add)
@@ -183,10 +183,6 @@ func Read(r io.Reader, file string) (*Table, error) {
 		}
 		if it.Date != "" {
 			checkDate(it.Date, line, add)
-		}
-		if v := get("spread"); v != "" {
-			it.Spread, _ = checkSpread(v, line, add)
-			it.HasSpread = true
 		}
 		if _, ok := col["item"]; ok {
 			key := nameKey(it.Name)
@@ -307,6 +303,15 @@ func checkRest(rec []string, col map[string]int, line int, add func(int, string,
 	if v, ok := get("spread"); ok {
 		checkSpread(v, line, add)
 	}
+}
+
+// readSpread reads an optional spread cell; nil for an empty one.
+func readSpread(s string, line int, add func(int, string, string, ...any)) *float64 {
+	if s == "" {
+		return nil
+	}
+	v, _ := checkSpread(s, line, add)
+	return &v
 }
 
 // checkSpread reads a price spread: a share from 0 to below 1, as a plain

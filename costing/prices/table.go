@@ -20,15 +20,14 @@ type Item struct {
 	Date     string          // date of the price, as written (YYYY-MM-DD)
 	Line     int             // line number in the file, 1-based
 	// Spread is the share either way the price may move (the half-width of
-	// a rectangular distribution), when HasSpread; else DefaultSpread.
-	Spread    float64
-	HasSpread bool
+	// a rectangular distribution) as written; nil for DefaultSpread.
+	Spread *float64
 }
 
 // PriceSpread is the item's spread, written or DefaultSpread.
 func (it Item) PriceSpread() float64 {
-	if it.HasSpread {
-		return it.Spread
+	if it.Spread != nil {
+		return *it.Spread
 	}
 	return DefaultSpread
 }

@@ -41,6 +41,13 @@ type grid struct {
 	minWidths  map[int]float64 // widths the content may widen but not narrow
 	maxWidths  map[int]float64 // widths the content may narrow but not widen (wrapped text)
 	printWide  bool            // print in landscape, scaled to one page wide
+	chart      []gridChart     // charts anchored on the sheet (X axis: crude mass, log scale)
+}
+
+// gridChart is a chart anchored at a cell of a grid's sheet.
+type gridChart struct {
+	cell  string
+	chart *excelize.Chart
 }
 
 func newGrid(name string) *grid {
@@ -225,6 +232,18 @@ func (g *grid) flush(f *excelize.File, st *styles, omit bool) error {
 		if err := sw.SetPanes(g.panes()); err != nil {
 			return fmt.Errorf("workbook: sheet %s: panes: %w", g.name, err)
 		}
+	}
+	// Charts before the rows and before Flush (DESIGN §9).
+	var parts []string
+	for _, c := range g.chart {
+		part, err := addChartOn(f, g.name, c.cell, c.chart)
+		if err != nil {
+			return fmt.Errorf("workbook: sheet %s: chart: %w", g.name, err)
+		}
+		parts = append(parts, part)
+	}
+	if err := logXAxes(f, parts); err != nil {
+		return fmt.Errorf("workbook: sheet %s: %w", g.name, err)
 	}
 	for row := 1; row <= g.maxRow; row++ {
 		cols := g.cells[row]

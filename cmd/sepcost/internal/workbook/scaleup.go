@@ -85,7 +85,7 @@ type qtyCol struct {
 // The sheet is written straight to excelize's StreamWriter in two passes
 // over the rows, the first for the column widths, so that the memory used
 // does not grow with the number of masses beyond the report itself.
-func writeScaleUp(f *excelize.File, st *styles, r *scale.Report, m money, methods []methodOut, details bool, lay *layout, omit bool) error {
+func writeScaleUp(f *excelize.File, st *styles, r *scale.Report, m money, methods []methodOut, details bool, bands *bandRefs, lay *layout, omit bool) error {
 	rows := r.Rows()
 	nm := len(r.Methods)
 	if len(rows) != len(r.MassesKg)*nm {
@@ -206,6 +206,10 @@ func writeScaleUp(f *excelize.File, st *styles, r *scale.Report, m money, method
 			col++
 		}
 		ch := sp.chart(r, block, series, points[sp.col], positive[sp.col])
+		if sp.col == suPerGram {
+			// The P10–P90 band of the Monte Carlo draws (Uncertainty sheet).
+			ch.Series = append(ch.Series, bands.series()...)
+		}
 		ch.Format.OffsetX = offset - px
 		part, err := addChart(f, cellName(col, suChartRow), ch)
 		if err != nil {
