@@ -3,6 +3,7 @@ package scale
 import (
 	"math"
 	"math/rand/v2"
+	"time"
 
 	"testing"
 
@@ -50,6 +51,7 @@ func BenchmarkSample400(b *testing.B) {
 func BenchmarkDraws10k(b *testing.B) {
 	p, pt := plan(b, templates.Scenario)
 	b.ReportAllocs()
+	defer reportCPU(b, cpuTime())
 	for b.Loop() {
 		if _, err := Sample(p, pt, p.Scenario.TargetKg, 10000, 1, nil); err != nil {
 			b.Fatal(err)
@@ -63,6 +65,7 @@ func BenchmarkBands50x1000(b *testing.B) {
 	p, pt := plan(b, templates.Scenario)
 	masses, _ := LogSpace(1e-4, 10, 50)
 	b.ReportAllocs()
+	defer reportCPU(b, cpuTime())
 	for b.Loop() {
 		if _, err := SampleAcross(p, pt, p.Scenario.TargetKg, masses, 1000, 1, nil); err != nil {
 			b.Fatal(err)
@@ -88,8 +91,17 @@ func BenchmarkValueOfInformation(b *testing.B) {
 	}
 	r := ledger.NewRates(pt)
 	b.ResetTimer()
+	defer reportCPU(b, cpuTime())
 	for b.Loop() {
 		v := &Uncertainty{TargetKg: u.TargetKg, Inputs: d.inputs, ProductG: u.ProductG}
 		v.weighInputs(p, r, x, perG)
+	}
+}
+
+// reportCPU adds the processor time per operation, all threads together:
+// on a shared machine it varies much less than the clock time.
+func reportCPU(b *testing.B, start time.Duration) {
+	if b.N > 0 && start > 0 {
+		b.ReportMetric((cpuTime()-start).Seconds()/float64(b.N), "cpu-s/op")
 	}
 }
