@@ -291,3 +291,18 @@ func (r Result) PerGram() float64 {
 	}
 	return r.Ledger.Total.InexactFloat64() / (r.Usage.ProductOutKg * 1000)
 }
+
+// WithSetting is the plan as if the scenario's settings also set key to
+// si (in the coefficient's SI unit): the coefficients are settled again,
+// calibrations included, exactly as for a setting written in the file.
+func (p *Plan) WithSetting(key string, si float64) (*Plan, error) {
+	co, ok := p.Coef.Lookup(key)
+	if !ok {
+		return nil, fmt.Errorf("unknown model setting %q", key)
+	}
+	sc := *p.Scenario
+	co.SI = si
+	sc.Settings = append(append([]scenario.Setting(nil), p.Scenario.Settings...),
+		scenario.Setting{Key: key, Value: units.Quantity{SI: si, Dim: co.Dim}, Written: co.String()})
+	return Prepare(&sc)
+}

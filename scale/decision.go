@@ -61,32 +61,36 @@ type Decision struct {
 func Decide(p *costing.Plan, t *prices.Table, targetKg float64) (*Decision, error) {
 	d := &Decision{TargetKg: targetKg, Infeasible: map[string]string{}}
 	type cand struct {
-		j    int
 		name string
 		res  costing.Result
 		perG float64
 	}
-	var cands []cand
-	for j, name := range p.MethodNames() {
+	names := p.MethodNames()
+	all := make([]cand, len(names))
+	perG := make([]float64, len(names))
+	for j, name := range names {
 		r, err := p.RunOne(j, targetKg, t)
 		if err != nil {
 			return nil, err
 		}
-		pg := r.PerGram()
-		if math.IsNaN(pg) {
+		all[j], perG[j] = cand{name, r, r.PerGram()}, r.PerGram()
+		if math.IsNaN(perG[j]) {
 			d.Infeasible[name] = r.Usage.Reason
 			continue
 		}
-		cands = append(cands, cand{j, name, r, pg})
 		d.Drivers = append(d.Drivers, topDrivers(name, r, 3)...)
 	}
 	mass := scenario.FormatMass(targetKg)
 	cur := t.Currency
+	// The one definition of cheapest (cheapest.go): per gram of purified product.
+	var cands []cand
+	for _, j := range rank(perG) {
+		cands = append(cands, all[j])
+	}
 	if len(cands) == 0 {
 		d.Explanation = append(d.Explanation, fmt.Sprintf("At %s of crude no method is feasible.", mass))
 		return d, nil
 	}
-	sort.SliceStable(cands, func(a, b int) bool { return cands[a].perG < cands[b].perG })
 	w := cands[0]
 	d.Winner, d.WinnerPerG = w.name, w.perG
 	if len(cands) == 1 {

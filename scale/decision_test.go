@@ -83,13 +83,13 @@ func TestDemoCrossover(t *testing.T) {
 	step := math.Log(fine[1] / fine[0])
 	for _, m := range changes {
 		ok := false
-		for _, c := range r.Crossovers {
+		for _, c := range r.Pairwise {
 			if c.A == "chromatography" && c.B == "crystallization" && math.Abs(math.Log(c.MassKg/m)) <= step*1.01 {
 				ok = true
 			}
 		}
 		if !ok {
-			t.Errorf("brute force finds a change near %g kg that the sweep missed (%+v)", m, r.Crossovers)
+			t.Errorf("brute force finds a change near %g kg that the sweep missed (%+v)", m, r.Pairwise)
 		}
 	}
 }

@@ -31,6 +31,28 @@ var Spread = map[source.Mark]float64{
 	source.Example:        0.25,
 }
 
+// perturbable reports whether a coefficient is drawn at all: it has a
+// spread for its mark, is not a temperature and not zero.
+func perturbable(co source.Coefficient) bool {
+	_, ok := Spread[co.Mark]
+	return ok && co.Dim != units.Temperature && co.SI != 0
+}
+
+// perturb moves a coefficient z standard deviations (σ = Spread of its
+// mark) on the log scale: a plain share or fraction below 1 on its odds,
+// so that it stays in (0, 1), anything else by the factor exp(z σ).
+// Temperatures (not scale quantities), zeros, whole shares and marks
+// without a spread are left alone (ok false). The Monte Carlo draws use
+// the same rule (factorValue).
+func perturb(co source.Coefficient, z float64) (source.Coefficient, bool) {
+	if !perturbable(co) || co.Dim == units.None && co.SI == 1 {
+		return co, false // a whole share (e.g. fully attended) stays whole
+	}
+	sigma := Spread[co.Mark]
+	co.SI = factorValue(co.SI, math.Exp(sigma*z), co.Dim == units.None && co.SI < 1)
+	return co, true
+}
+
 // RuleWeights are the weights of the two routes that size the silica
 // (preparative elution theory and Still's table), drawn as a discrete
 // alternative: equal, as nothing here says which to trust more when they

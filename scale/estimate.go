@@ -15,6 +15,11 @@ type Options struct {
 	Draws    int    // Monte Carlo draws at the target mass; 0 skips the sampling
 	Seed     uint64 // the same seed gives the same draws
 	Progress func(done int)
+	// TargetKg is the crude mass to decide at; 0 takes the scenario's
+	// (target_mass, else its largest mass). TargetWhy says where a
+	// non-zero TargetKg comes from, e.g. "--target".
+	TargetKg  float64
+	TargetWhy string
 }
 
 // DefaultOptions: 400 draws put the P10 and P90 within a few per cent of
@@ -45,18 +50,31 @@ func EstimateWith(p *costing.Plan, t *prices.Table, massesKg []float64, opt Opti
 		Coefficients: p.Coefficients(),
 		Cautions:     p.Cautions(),
 	}
-	r.TargetKg = sc.TargetKg
+	r.TargetKg, r.TargetWhy = sc.TargetKg, "target_mass in the scenario"
+	for _, in := range sc.Inputs {
+		if in.Field == "target_mass" && in.Written == "(not given)" {
+			r.TargetWhy = "the scenario's largest batch mass"
+		}
+	}
+	if opt.TargetKg > 0 {
+		r.TargetKg, r.TargetWhy = opt.TargetKg, opt.TargetWhy
+	}
 	r.Waste = wasteRows(p, massesKg, r.Methods, res)
+	r.Warnings = collectWarnings(r.Methods, massesKg, res)
 	r.Greenness = greenness(p)
 	r.WasteSector = sc.WasteSector.String()
 	r.Coefficients = append(r.Coefficients, waste.Sources()...)
 	r.Coefficients = append(r.Coefficients, green.Sources()...)
 	r.Coefficients = append(r.Coefficients, DecisionCoefficients()...)
-	if r.Decision, err = Decide(p, t, sc.TargetKg); err != nil {
+	if r.Decision, err = Decide(p, t, r.TargetKg); err != nil {
 		return nil, err
 	}
+	if r.Assumptions, err = FindAssumptions(p, t, r.TargetKg); err != nil {
+		return nil, err
+	}
+	markFlips(r.Assumptions, r.Decision)
 	if opt.Draws > 0 {
-		if r.Uncertainty, err = SampleAcross(p, t, sc.TargetKg, Thin(massesKg, MaxBandMasses), opt.Draws, opt.Seed, opt.Progress); err != nil {
+		if r.Uncertainty, err = SampleAcross(p, t, r.TargetKg, Thin(massesKg, MaxBandMasses), opt.Draws, opt.Seed, opt.Progress); err != nil {
 			return nil, err
 		}
 		r.Decision.weigh(r.Uncertainty)

@@ -34,7 +34,27 @@ func TestLogSpace(t *testing.T) {
 	}
 }
 
-// Crossovers found by bisection agree with a brute-force scan on a fine
+// synthetic turns cost curves (NaN: not feasible) into an evalFunc and its
+// grid on masses.
+func synthetic(curves []func(m float64) float64, masses []float64) (evalFunc, [][]point) {
+	eval := func(j int, m float64) (point, error) {
+		v := curves[j](m)
+		if math.IsNaN(v) {
+			return point{perG: v, reason: "too small"}, nil
+		}
+		return point{perG: v}, nil
+	}
+	grid := make([][]point, len(masses))
+	for i, m := range masses {
+		for j := range curves {
+			p, _ := eval(j, m)
+			grid[i] = append(grid[i], p)
+		}
+	}
+	return eval, grid
+}
+
+// Pairwise crossovers found by bisection agree with a brute-force scan on a fine
 // grid. Two synthetic cost curves with a known crossing: a = 50 + 5/m and
 // b = 20 + 40/m cross where 30 = 35/m, m = 7/6 kg (hand computation); and a
 // step curve c that jumps from 10 to 100 at m = 0.3 kg against a flat 50.
@@ -50,16 +70,10 @@ func TestCrossoverAgainstBruteForce(t *testing.T) {
 		},
 		func(m float64) float64 { return 50 },
 	}
-	cost := func(j int, m float64) (float64, error) { return curves[j](m), nil }
 	names := []string{"a", "b", "c", "d"}
 	masses, _ := LogSpace(1e-2, 100, 9)
-	grid := make([][]float64, len(masses))
-	for i, m := range masses {
-		for j := range curves {
-			grid[i] = append(grid[i], curves[j](m))
-		}
-	}
-	got, err := findCrossovers(names, masses, grid, cost)
+	eval, grid := synthetic(curves, masses)
+	got, err := findPairwise(names, masses, grid, eval)
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -120,4 +134,62 @@ func indexOf(list []string, s string) int {
 		}
 	}
 	return -1
+}
+
+// The decision's crossovers on synthetic curves whose changes are known by
+// hand: a = 50 + 5/m and b = 20 + 40/m cross at 7/6 kg (30 = 35/m, smooth);
+// c is not feasible below 2 kg, costs 10 from 2 kg (cheaper than b ≥ 20:
+// c becomes feasible and wins at 2 kg) and 30 from 20 kg, where b
+// (20 + 40/20 = 22) is cheaper again (an equipment step). On a coarse grid
+// (1, 10 kg) the cheapest goes a → c, with b cheapest in between: the
+// search must find both changes.
+func TestDecisionCrossovers(t *testing.T) {
+	curves := []func(m float64) float64{
+		func(m float64) float64 { return 50 + 5/m },
+		func(m float64) float64 { return 20 + 40/m },
+		func(m float64) float64 {
+			switch {
+			case m < 2:
+				return math.NaN()
+			case m < 20:
+				return 10
+			}
+			return 30
+		},
+	}
+	names := []string{"a", "b", "c"}
+	masses, _ := LogSpace(1e-2, 100, 5)
+	eval, grid := synthetic(curves, masses)
+	got, err := findDecisionCrossovers(names, masses, grid, eval)
+	if err != nil {
+		t.Fatal(err)
+	}
+	want := []struct {
+		kg          float64
+		below, kind string
+		above       string
+	}{{7.0 / 6, "a", Smooth, "b"}, {2, "b", Feasible, "c"}, {20, "c", Step, "b"}}
+	if len(got) != len(want) {
+		t.Fatalf("got %d changes, want %d: %+v", len(got), len(want), got)
+	}
+	for i, w := range want {
+		c := got[i]
+		if math.Abs(math.Log(c.MassKg/w.kg)) > CrossoverPrecision || c.CheaperBelow != w.below || c.CheaperAbove != w.above || c.Kind != w.kind {
+			t.Errorf("change %d: %+v, want %s → %s (%s) at %g kg", i, c, w.below, w.above, w.kind, w.kg)
+		}
+		// Derived: the bracket really holds the change.
+		at := func(m float64) string {
+			ps := make([]float64, len(curves))
+			for j, f := range curves {
+				ps[j] = f(m)
+			}
+			return names[cheapest(ps)]
+		}
+		if at(c.LoKg) != c.CheaperBelow || at(c.HiKg) != c.CheaperAbove || math.Log(c.HiKg/c.LoKg) > CrossoverPrecision {
+			t.Errorf("change %d: bracket %g–%g kg does not hold %s → %s", i, c.LoKg, c.HiKg, c.CheaperBelow, c.CheaperAbove)
+		}
+	}
+	if got[1].Detail == "" || !strings.Contains(got[1].Detail, "not feasible: too small") {
+		t.Errorf("feasibility change should give the reason below: %q", got[1].Detail)
+	}
 }

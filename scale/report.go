@@ -31,11 +31,15 @@ type Report struct {
 	Coefficients []source.Coefficient
 	Cautions     []string     // safety cautions that apply to this scenario
 	Notes        []usage.Note // scenario-wide notes and warnings
+	Warnings     []Warning    // every warning and caution of the models, by method and text, with the masses
 	TargetKg     float64      // the batch mass the decision is made at
+	TargetWhy    string       // where TargetKg comes from, e.g. "--target", "the largest mass given with --mass"
 	Decision     *Decision    // the recommendation at TargetKg
-	Crossovers   []Crossover  // masses where methods change places (sweeps only)
+	Crossovers   []Crossover  // masses where the cheapest feasible method changes (sweeps only)
+	Pairwise     []Crossover  // masses where two methods change places, cheapest or not (sweeps only; secondary)
 	IsSweep      bool         // the masses are a log-spaced curve
 	Uncertainty  *Uncertainty // Monte Carlo bands at TargetKg (nil when not sampled)
+	Assumptions  []Assumption // defaults the user did not set that move a method's cost at TargetKg by more than AssumptionSwing
 	Waste        []WasteRow   // every stream of every feasible result, classified
 	Greenness    []SolventGreenness
 	WasteSector  string // the EU List of Waste chapter used for the codes

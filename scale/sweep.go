@@ -6,8 +6,10 @@ import (
 )
 
 // Sweep runs every method across the masses (normally LogSpace), finds the
-// crossover masses between each pair of methods by bisection on the model,
-// and decides at the scenario's target mass.
+// masses where the decision changes (the cheapest feasible method per gram
+// of purified product) and, as a secondary table, where any two methods
+// change places, each by bisection on the models; and decides at the
+// scenario's target mass.
 func Sweep(p *costing.Plan, t *prices.Table, masses []float64) (*Report, error) {
 	return SweepWith(p, t, masses, DefaultOptions)
 }
@@ -19,13 +21,17 @@ func SweepWith(p *costing.Plan, t *prices.Table, masses []float64, opt Options) 
 		return nil, err
 	}
 	r.IsSweep = true
-	grid := make([][]float64, len(masses))
+	grid := make([][]point, len(masses))
 	for i := range masses {
-		grid[i] = make([]float64, len(r.Methods))
+		grid[i] = make([]point, len(r.Methods))
 		for j := range r.Methods {
-			grid[i][j] = r.Results[i][j].PerGram()
+			grid[i][j] = pointOf(r.Results[i][j])
 		}
 	}
-	r.Crossovers, err = findCrossovers(r.Methods, masses, grid, planCost(p, t))
+	eval := planEval(p, t)
+	if r.Crossovers, err = findDecisionCrossovers(r.Methods, masses, grid, eval); err != nil {
+		return nil, err
+	}
+	r.Pairwise, err = findPairwise(r.Methods, masses, grid, eval)
 	return r, err
 }

@@ -185,10 +185,10 @@ func run(draws int, progress func(int), f func(k int) error) error {
 // bands summarises cost per gram per method over the draws at one mass.
 func bands(names []string, perG [][]float64) []Band {
 	draws := len(perG)
-	cheapest := make([]int, len(names))
+	wins := make([]int, len(names))
 	for _, row := range perG {
-		if b := cheapestOf(row); b >= 0 {
-			cheapest[b]++
+		if b := cheapest(row); b >= 0 {
+			wins[b]++
 		}
 	}
 	out := make([]Band, len(names))
@@ -202,7 +202,7 @@ func bands(names []string, perG [][]float64) []Band {
 		}
 		b := Band{Method: name, P10: math.NaN(), P50: math.NaN(), P90: math.NaN()}
 		if draws > 0 {
-			b.Feasible, b.Cheapest = float64(len(vals))/float64(draws), float64(cheapest[j])/float64(draws)
+			b.Feasible, b.Cheapest = float64(len(vals))/float64(draws), float64(wins[j])/float64(draws)
 		}
 		if len(vals) > 0 {
 			sort.Float64s(vals)
@@ -211,17 +211,6 @@ func bands(names []string, perG [][]float64) []Band {
 		out[j] = b
 	}
 	return out
-}
-
-// cheapestOf is the index of the lowest number in row, or −1.
-func cheapestOf(row []float64) int {
-	best := -1
-	for j, v := range row {
-		if !math.IsNaN(v) && (best < 0 || v < row[best]) {
-			best = j
-		}
-	}
-	return best
 }
 
 // quantile is the linear-interpolation sample quantile (Hyndman and Fan
@@ -427,7 +416,7 @@ func netBenefit(perG [][]float64, grams float64) benefits {
 	}
 	var b benefits
 	for k, row := range perG {
-		best := cheapestOf(row)
+		best := cheapest(row)
 		if best < 0 {
 			continue
 		}

@@ -14,6 +14,7 @@ type estimateOptions struct {
 	scenario string
 	prices   string
 	masses   massList
+	target   string
 	out      string
 	format   string
 	force    bool
@@ -28,8 +29,11 @@ func newEstimateCommand() *cobra.Command {
 		Short: "Cost every applicable method at the given batch masses",
 		Long: `Runs every method the scenario describes at each batch mass and prices it with
 the price table. Without -o a summary is printed; with -o the format follows
-the file's extension (.xlsx, .json, .csv) unless --format says otherwise.`,
+the file's extension (.xlsx, .json, .csv) unless --format says otherwise.
+The decision is made at --target; without it at the largest --mass, else
+at the scenario's target_mass (else its largest mass).`,
 		Example: `  sepcost estimate mycase/scenario.yaml --prices mycase/prices.csv --mass 0.25g,20g,2kg -o plan.xlsx
+  sepcost estimate mycase/scenario.yaml --mass 85g,2kg --target 85g
   sepcost estimate mycase/scenario.yaml --format json`,
 		Args: cobra.ExactArgs(1),
 		RunE: func(cmd *cobra.Command, args []string) error {
@@ -40,6 +44,7 @@ the file's extension (.xlsx, .json, .csv) unless --format says otherwise.`,
 	f := cmd.Flags()
 	f.StringVar(&opts.prices, "prices", "", "price table CSV (default: prices.csv beside the scenario)")
 	f.Var(&opts.masses, "mass", `crude batch masses with units, e.g. "250mg,20g,2kg" (default: the scenario's masses)`)
+	addTargetFlag(cmd, &opts.target)
 	addOutputFlags(cmd, &opts.out, &opts.format, &opts.force)
 	addDrawFlags(cmd, &opts.draws, &opts.seed)
 	return cmd
@@ -68,12 +73,20 @@ func runEstimate(_ context.Context, opts *estimateOptions, stdout, stderr io.Wri
 	if err != nil {
 		return err
 	}
+	largest := 0.0
+	if opts.masses.set {
+		largest = opts.masses.kg[len(opts.masses.kg)-1]
+	}
+	target, why, err := targetMass(opts.target, largest, "--mass")
+	if err != nil {
+		return err
+	}
 	plan, t, err := loadPlan(opts.scenario, opts.prices)
 	if err != nil {
 		return err
 	}
 	masses := massesOr(opts.masses, plan.Scenario)
-	r, err := scale.EstimateWith(plan, t, masses, scale.Options{Draws: opts.draws, Seed: opts.seed, Progress: newProgress(stderr, opts.draws)})
+	r, err := scale.EstimateWith(plan, t, masses, scale.Options{Draws: opts.draws, Seed: opts.seed, Progress: newProgress(stderr, opts.draws), TargetKg: target, TargetWhy: why})
 	if err != nil {
 		return err
 	}

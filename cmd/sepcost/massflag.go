@@ -5,6 +5,8 @@ import (
 	"sort"
 	"strings"
 
+	"github.com/spf13/cobra"
+
 	"sepcost/costing/units"
 )
 
@@ -47,3 +49,29 @@ func (m *massList) Set(s string) error {
 }
 
 func (m *massList) Type() string { return "masses" }
+
+// addTargetFlag adds --target: the crude mass the decision is made at.
+func addTargetFlag(cmd *cobra.Command, target *string) {
+	cmd.Flags().StringVar(target, "target", "", `crude mass to decide at, with its unit, e.g. "2kg" (default: the largest mass asked for on the command line, else the scenario's target_mass, else its largest mass)`)
+}
+
+// targetMass settles the decision's mass: --target when given, else the
+// largest of the masses asked for on the command line (largest, with the
+// flag that gave it), else 0 (the scenario's). It returns the mass in kg
+// and where it comes from, in words.
+func targetMass(target string, largest float64, from string) (float64, string, error) {
+	if target != "" {
+		v, err := units.ParseAs(target, units.Mass)
+		if err != nil {
+			return 0, "", usageError{fmt.Errorf("--target %q: %v", target, err)}
+		}
+		if !(v > 0) {
+			return 0, "", usageError{fmt.Errorf("--target %q: a batch mass must be above zero", target)}
+		}
+		return v, "--target", nil
+	}
+	if largest > 0 {
+		return largest, "the largest mass given with " + from, nil
+	}
+	return 0, "", nil
+}

@@ -15,7 +15,9 @@ type sweepOptions struct {
 	scenario string
 	prices   string
 	from, to string
+	toGiven  bool // --to was given on the command line
 	points   int
+	target   string
 	out      string
 	format   string
 	force    bool
@@ -30,13 +32,16 @@ func newSweepCommand() *cobra.Command {
 		Short: "The scale-up curve: every method across batch masses, crossovers and the decision",
 		Long: `Runs every method the scenario describes at log-spaced batch masses, finds the
 masses where the cheapest method per gram of purified product changes (by
-bisection on the models), and decides at the scenario's target mass: the
-method, the margin, the largest cost drivers and the prices that would flip it.`,
+bisection on the models), and decides at the target mass: the method, the
+margin, the largest cost drivers and the prices that would flip it. The
+target is --target; without it --to when given, else the scenario's
+target_mass (else its largest mass).`,
 		Example: `  sepcost sweep scenario.yaml --prices prices.csv --from 100mg --to 10kg --points 40 -o sweep.xlsx
   sepcost sweep scenario.yaml --format csv > curve.csv`,
 		Args: cobra.ExactArgs(1),
 		RunE: func(cmd *cobra.Command, args []string) error {
 			opts.scenario = args[0]
+			opts.toGiven = cmd.Flags().Changed("to")
 			return runSweep(cmd.Context(), opts, cmd.OutOrStdout(), cmd.ErrOrStderr())
 		},
 	}
@@ -45,6 +50,7 @@ method, the margin, the largest cost drivers and the prices that would flip it.`
 	f.StringVar(&opts.from, "from", "100mg", "smallest crude batch mass, with its unit")
 	f.StringVar(&opts.to, "to", "10kg", "largest crude batch mass, with its unit")
 	f.IntVar(&opts.points, "points", 30, "number of log-spaced masses (2 to 10000)")
+	addTargetFlag(cmd, &opts.target)
 	addOutputFlags(cmd, &opts.out, &opts.format, &opts.force)
 	addDrawFlags(cmd, &opts.draws, &opts.seed)
 	return cmd
@@ -70,11 +76,19 @@ func runSweep(_ context.Context, opts *sweepOptions, stdout, stderr io.Writer) e
 	if err != nil {
 		return usageError{err}
 	}
+	largest := 0.0
+	if opts.toGiven {
+		largest = to
+	}
+	target, why, err := targetMass(opts.target, largest, "--to")
+	if err != nil {
+		return err
+	}
 	plan, t, err := loadPlan(opts.scenario, opts.prices)
 	if err != nil {
 		return err
 	}
-	r, err := scale.SweepWith(plan, t, masses, scale.Options{Draws: opts.draws, Seed: opts.seed, Progress: newProgress(stderr, opts.draws)})
+	r, err := scale.SweepWith(plan, t, masses, scale.Options{Draws: opts.draws, Seed: opts.seed, Progress: newProgress(stderr, opts.draws), TargetKg: target, TargetWhy: why})
 	if err != nil {
 		return err
 	}

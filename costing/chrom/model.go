@@ -108,7 +108,7 @@ func Run(sc *scenario.Scenario, coef source.Set, crudeKg float64) usage.Usage {
 	fig("cv_per_g", "column volume per gram of silica", v0PerKg, "mL/g")
 	fig("column_volume", "column volume", v0, "mL")
 	if col.Runs > 1 {
-		note(usage.Info, "The batch needs %.1f kg of silica, more than the largest column (%.0f mm) holds: %d runs of %s of crude each.", silicaNeeded, col.Diameter*1000, col.Runs, scenario.FormatMass(crudeRun))
+		note(usage.RepeatLevel(col.Runs), "The batch needs %.1f kg of silica, more than the largest column (%.0f mm) holds: %d runs of %s of crude each.%s", silicaNeeded, col.Diameter*1000, col.Runs, scenario.FormatMass(crudeRun), impractical(col.Runs, "column runs"))
 	}
 	if col.Silica > 1.2*silicaNeeded/runs {
 		note(usage.Info, "The narrowest column is packed to the shortest useful bed (%.0f cm): %.3g g of silica where %.3g g would do.", col.BedHeight*100, col.Silica*1000, silicaNeeded/runs*1000)
@@ -295,4 +295,13 @@ func mustSolvent(b *solvent.Book, id string) solvent.Solvent {
 		panic("chrom: solvent " + id + " was not checked by the scenario reader")
 	}
 	return s
+}
+
+// impractical adds, from usage.ManyRepeats repeats on, why the plan is
+// impractical as it stands.
+func impractical(n int, what string) string {
+	if n < usage.ManyRepeats {
+		return ""
+	}
+	return fmt.Sprintf(" %d %s are impractical as one batch: a larger column (process equipment) or another method would serve.", n, what)
 }

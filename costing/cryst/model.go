@@ -318,7 +318,7 @@ func Run(sc *scenario.Scenario, coef source.Set, crudeKg float64) usage.Usage {
 				if ves.Reactor {
 					fill = reactorFill
 				}
-				note(usage.Info, "The batch needs %.3g L of liquid, more than the largest vessel (%.4g L at %.0f %% fill) holds: %d batches run one after another.", liquidVol*1000, ves.Volume*1000, fill*100, ves.Batches)
+				note(usage.RepeatLevel(ves.Batches), "The batch needs %.3g L of liquid, more than the largest vessel (%.4g L at %.0f %% fill) holds: %d batches run one after another.", liquidVol*1000, ves.Volume*1000, fill*100, ves.Batches)
 			}
 		}
 		// Solvent bought: the charge plus the wash, less what the wet cake of
@@ -456,7 +456,7 @@ func Run(sc *scenario.Scenario, coef source.Set, crudeKg float64) usage.Usage {
 	fig("screening_hours", "one-time screening and development", screenS, "h")
 	fig("screening_material", "one-time crude used in screening", screenKg, "g")
 	if screenKg > crudeKg {
-		note(usage.Info, "Screening uses %s of crude, more than the batch itself (%s): at this scale the development cost dominates.", scenario.FormatMass(screenKg), scenario.FormatMass(crudeKg))
+		note(usage.Warning, "Screening uses %s of crude, more than the batch itself (%s): the plan is impractical at this scale, and the development cost dominates.", scenario.FormatMass(screenKg), scenario.FormatMass(crudeKg))
 	}
 
 	// Waste: mother liquors (with the second crop's concentrate), washes,

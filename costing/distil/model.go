@@ -243,7 +243,7 @@ func Run(sc *scenario.Scenario, coef source.Set, crudeKg float64) usage.Usage {
 	}
 	fig("charge_per_batch", "charge per batch", mBatch, "g")
 	if st.Batches > 1 {
-		note(usage.Info, "The charge (%.3g L) is more than the largest still (%.3g L at %.0f %% fill) holds: %d batches of %s.", crudeKg/rhoMix*1000, st.Volume*1000, fill*100, st.Batches, scenario.FormatMass(mBatch))
+		note(usage.RepeatLevel(st.Batches), "The charge (%.3g L) is more than the largest still (%.3g L at %.0f %% fill) holds: %d batches of %s.", crudeKg/rhoMix*1000, st.Volume*1000, fill*100, st.Batches, scenario.FormatMass(mBatch))
 	}
 	vHold := HoldupVolume(st.Volume, stages, get(KeyHoldupHead), get(KeyHoldupStage))
 	holdShare := vHold / st.Charge

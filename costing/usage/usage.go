@@ -133,6 +133,22 @@ const (
 	Caution Level = "caution"
 )
 
+// ManyRepeats is the number of runs or batches of one purification from
+// which the plan is impractical as a single batch (a campaign of repeated
+// columns or vessel loads, with the handling errors and time that brings):
+// a model reports it as a warning, not as information (common practice,
+// no source: a chemist schedules a handful of repeats, not dozens).
+const ManyRepeats = 10
+
+// RepeatLevel is the level of a note about n runs or batches: Warning from
+// ManyRepeats, Info below.
+func RepeatLevel(n int) Level {
+	if n >= ManyRepeats {
+		return Warning
+	}
+	return Info
+}
+
 // Note is an assumption used, a warning about the inputs, or a safety caution.
 type Note struct {
 	Level Level

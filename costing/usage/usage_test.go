@@ -35,3 +35,13 @@ func TestUsageHelpers(t *testing.T) {
 		t.Errorf("labels")
 	}
 }
+
+// A handful of repeats is information; from usage.ManyRepeats (10, common
+// practice, no source) runs or batches the plan is impractical: a warning.
+func TestRepeatLevel(t *testing.T) {
+	for n, want := range map[int]Level{1: Info, 9: Info, 10: Warning, 148: Warning} {
+		if got := RepeatLevel(n); got != want {
+			t.Errorf("RepeatLevel(%d) = %s, want %s", n, got, want)
+		}
+	}
+}

@@ -77,8 +77,9 @@ type euEntry struct {
 }
 
 // EU List of Waste entries used here; the same numbering and titles occur in
-// chapters 07 05 and 07 07 (from memory). All five are absolute hazardous
-// entries (marked *), without a non-hazardous mirror entry (from memory).
+// sub-chapters 07 05 and 07 07. All five are absolute hazardous entries
+// (marked *), without a non-hazardous mirror entry. Confirmed: read in a
+// reproduction of the Annex's list (see srcLoW).
 var (
 	euAqueous       = euEntry{"01", "aqueous washing liquids and mother liquors"}
 	euHalogenated   = euEntry{"03", "organic halogenated solvents, washing liquids and mother liquors"}
@@ -95,7 +96,7 @@ func (e euEntry) code(s Sector) Code {
 	}
 	c := s.Chapter() + " " + e.suffix + "*"
 	return Code{Scheme: SchemeEU, Code: c, Title: e.title,
-		Source: fmt.Sprintf("%s, chapter %s (%s), entry %s", srcLoW, s.Chapter(), chapter, c), Mark: mem}
+		Source: fmt.Sprintf("%s, chapter 07, sub-chapter %s (%s), entry %s (hazardous: marked with an asterisk, no mirror entry)", srcLoW, s.Chapter(), chapter, c), Mark: conf}
 }
 
 // listing is one of the F001–F005 spent-solvent listings.
@@ -225,8 +226,9 @@ const (
 	// to the same effect from memory).
 	AqueousWaterMin = 0.50
 	// TCLPRatio is the liquid-to-solid ratio of the TCLP extraction, L/kg
-	// (SW-846 Method 1311: 20 times the solid mass of extraction fluid, from
-	// memory).
+	// (SW-846 Method 1311, section 2.2: "an amount of extraction fluid equal
+	// to 20 times the weight of the solid phase", confirmed; taken as L/kg
+	// for an extraction fluid of about 1 kg/L).
 	TCLPRatio = 20.0
 )
 
@@ -263,15 +265,15 @@ func Sources() []source.Coefficient {
 		add("waste.us."+strings.ToLower(e.code), c.Code+" "+c.Title, e.level*1e-3, units.Density, "mg/L", c.Source, c.Mark)
 	}
 	add("waste.us.flash_limit", "D001 flash-point limit (a liquid flashing below it is ignitable)", FlashLimit,
-		units.Temperature, "C", src26121+", paragraph (a)(1): \"flash point less than 60 °C (140 °F)\"", conf)
+		units.Temperature, "C", src26121+", paragraph (a)(1): \"flash point less than 60 °C (140 °F)\"; paragraph (b): D001", conf)
 	add("waste.us.alcohol_limit", "D001 exclusion: aqueous solution with less than this alcohol by volume", AlcoholLimit,
-		units.None, "%", src26121+", paragraph (a)(1)", conf)
+		units.None, "%", src26121+", paragraph (a)(1): \"less than 24 percent alcohol by volume\"", conf)
 	add("waste.us.aqueous_water_min", "D001 exclusion: water by weight that makes a solution aqueous", AqueousWaterMin,
 		units.None, "%", "Ohio Adm. Code 3745-51-21(A)(1) (\"at least fifty per cent water by weight\"), mirroring the federal clarification of 40 CFR 261.21(a)(1) (federal wording from memory)", conf)
 	add("waste.us.mixture_threshold", "F001-F005: before-use total of F001, F002, F004 and F005 solvents that lists a spent blend", MixtureThreshold,
 		units.None, "%", src26131+" (\"a total of ten percent or more (by volume)\"); "+src1985, conf)
 	// 20 L/kg = 0.02 m³/kg.
 	add("waste.us.tclp_ratio", "TCLP extraction fluid per mass of solid (screening: total concentration/20 bounds the extract)", TCLPRatio*1e-3,
-		units.SpecificVolume, "L/kg", srcRule20, mem)
+		units.SpecificVolume, "L/kg", srcRule20, conf)
 	return out
 }

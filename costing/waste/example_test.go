@@ -25,7 +25,7 @@ func ExampleClassify() {
 		fmt.Printf("%-8s %-6s %s (%s)\n", k.Scheme, k.Code, k.Title, k.Mark)
 	}
 	// Output:
-	// EU LoW   07 05 03* organic halogenated solvents, washing liquids and mother liquors (from memory)
+	// EU LoW   07 05 03* organic halogenated solvents, washing liquids and mother liquors (confirmed)
 	// US EPA   F002   spent halogenated solvents (confirmed)
 	// US EPA   F003   spent non-halogenated solvents (listed for ignitability only) (confirmed)
 	// US EPA   D001   ignitable: liquid with a closed-cup flash point below 60 °C (confirmed)

@@ -20,11 +20,43 @@ type jsonReport struct {
 	Batches    []jsonBatch     `json:"batches"`
 	Decision   *jsonDecision   `json:"decision,omitempty"`
 	Crossovers []jsonCrossover `json:"crossovers,omitempty"`
+	Pairwise   []jsonCrossover `json:"pairwise_crossings,omitempty"`
+	Warnings   []jsonWarning   `json:"warnings"`
+	Assumed    []jsonAssumed   `json:"assumptions"`
 	Cautions   []string        `json:"cautions"`
+}
+
+// jsonAssumed is a default the user did not set that moves a method's cost
+// per gram at the target mass by more than scale.AssumptionSwing between
+// its low and high plausible values (null cost: not feasible there).
+type jsonAssumed struct {
+	Method    string   `json:"method"`
+	Key       string   `json:"setting"`
+	Label     string   `json:"label"`
+	Unit      string   `json:"unit"`
+	Default   float64  `json:"default"`
+	Low       float64  `json:"plausible_low"`
+	High      float64  `json:"plausible_high"`
+	PerGram   *float64 `json:"cost_per_g_default"`
+	PerGramLo *float64 `json:"cost_per_g_low"`
+	PerGramHi *float64 `json:"cost_per_g_high"`
+	Flips     bool     `json:"changes_decision"`
+	Mark      string   `json:"mark"`
+	Source    string   `json:"source"`
+}
+
+// jsonWarning is one warning of the models with the masses it was raised
+// at (the text is its wording at the first).
+type jsonWarning struct {
+	Method   string    `json:"method"`
+	Level    string    `json:"level"`
+	Text     string    `json:"text"`
+	MassesKg []float64 `json:"crude_kg"`
 }
 
 type jsonDecision struct {
 	TargetKg    float64           `json:"target_kg"`
+	TargetFrom  string            `json:"target_from,omitempty"`
 	Winner      string            `json:"method"`
 	RunnerUp    string            `json:"runner_up,omitempty"`
 	WinnerPerG  float64           `json:"cost_per_g"`
@@ -49,11 +81,16 @@ type jsonCrossover struct {
 	CheaperBelow string  `json:"cheaper_below"`
 	CheaperAbove string  `json:"cheaper_above"`
 	Step         bool    `json:"at_equipment_step"`
+	Kind         string  `json:"kind"`
+	Detail       string  `json:"detail,omitempty"`
+	LoKg         float64 `json:"bracket_lo_kg"`
+	HiKg         float64 `json:"bracket_hi_kg"`
 }
 
 type jsonBatch struct {
-	CrudeKg float64      `json:"crude_kg"`
-	Methods []jsonMethod `json:"methods"`
+	CrudeKg  float64      `json:"crude_kg"`
+	Cheapest string       `json:"cheapest,omitempty"` // per gram of purified product, among the feasible methods
+	Methods  []jsonMethod `json:"methods"`
 }
 
 type jsonMethod struct {
@@ -68,6 +105,7 @@ type jsonMethod struct {
 	Figures       []jsonFigure   `json:"figures"`
 	Lines         []jsonLine     `json:"ledger"`
 	Total         string         `json:"total"`
+	PerGram       *float64       `json:"cost_per_g,omitempty"` // absent when not feasible
 	Activities    []jsonActivity `json:"activities"`
 	Waste         []jsonStream   `json:"waste"`
 	Notes         []usage.Note   `json:"notes"`
@@ -109,12 +147,18 @@ func JSON(w io.Writer, r *scale.Report) error {
 	out := jsonReport{Title: r.Title, Scenario: r.ScenarioFile, Prices: r.PricesFile, Currency: r.Prices.Currency, Cautions: r.Cautions}
 	for i, m := range r.MassesKg {
 		b := jsonBatch{CrudeKg: m}
+		if k := r.CheapestAt(i); k >= 0 {
+			b.Cheapest = r.Methods[k]
+		}
 		for j, name := range r.Methods {
 			res := r.Results[i][j]
 			u := res.Usage
 			el, at := u.Hours()
 			jm := jsonMethod{Method: name, Feasible: u.Feasible, Reason: u.Reason, ProductInKg: u.ProductInKg, ProductOutKg: u.ProductOutKg,
 				HoursElapsed: el, HoursAttended: at, WasteKg: u.WasteKg(), Total: res.Ledger.Total.StringFixed(res.Ledger.Places), Notes: u.Notes}
+			if pg := res.PerGram(); !math.IsNaN(pg) {
+				jm.PerGram = &pg
+			}
 			for _, f := range u.Figures {
 				if v := f.Display(); !math.IsNaN(v) && !math.IsInf(v, 0) {
 					jm.Figures = append(jm.Figures, jsonFigure{f.Key, f.Label, v, f.Unit})
@@ -138,7 +182,7 @@ func JSON(w io.Writer, r *scale.Report) error {
 		out.Batches = append(out.Batches, b)
 	}
 	if d := r.Decision; d != nil {
-		jd := &jsonDecision{TargetKg: d.TargetKg, Winner: d.Winner, RunnerUp: d.RunnerUp, Margin: d.Margin, Tie: d.Tie, Infeasible: d.Infeasible, Explanation: d.Explanation}
+		jd := &jsonDecision{TargetKg: d.TargetKg, TargetFrom: r.TargetWhy, Winner: d.Winner, RunnerUp: d.RunnerUp, Margin: d.Margin, Tie: d.Tie, Infeasible: d.Infeasible, Explanation: d.Explanation}
 		if !math.IsNaN(d.WinnerPerG) {
 			jd.WinnerPerG = d.WinnerPerG
 		}
@@ -151,9 +195,29 @@ func JSON(w io.Writer, r *scale.Report) error {
 		out.Decision = jd
 	}
 	for _, c := range r.Crossovers {
-		out.Crossovers = append(out.Crossovers, jsonCrossover{c.MassKg, c.CheaperBelow, c.CheaperAbove, c.Step})
+		out.Crossovers = append(out.Crossovers, jsonCrossover{c.MassKg, c.CheaperBelow, c.CheaperAbove, c.Step, c.Kind, c.Detail, c.LoKg, c.HiKg})
+	}
+	for _, c := range r.Pairwise {
+		out.Pairwise = append(out.Pairwise, jsonCrossover{c.MassKg, c.CheaperBelow, c.CheaperAbove, c.Step, c.Kind, c.Detail, c.LoKg, c.HiKg})
+	}
+	out.Assumed = []jsonAssumed{}
+	for _, a := range r.Assumptions {
+		out.Assumed = append(out.Assumed, jsonAssumed{a.Method, a.Key, a.Label, a.Unit, a.Default, a.Low, a.High,
+			finiteOrNil(a.PerGram), finiteOrNil(a.PerGramLo), finiteOrNil(a.PerGramHi), a.Flips, string(a.Mark), a.Source})
+	}
+	out.Warnings = []jsonWarning{}
+	for _, w := range r.Warnings {
+		out.Warnings = append(out.Warnings, jsonWarning{w.Method, string(w.Level), w.Text, w.MassesKg})
 	}
 	enc := json.NewEncoder(w)
 	enc.SetIndent("", "  ")
 	return enc.Encode(out)
+}
+
+// finiteOrNil is nil for NaN and infinities (JSON has no NaN).
+func finiteOrNil(v float64) *float64 {
+	if math.IsNaN(v) || math.IsInf(v, 0) {
+		return nil
+	}
+	return &v
 }

@@ -55,12 +55,17 @@ func sweepTable(ew *errWriter, r *scale.Report) error {
 			fmt.Fprintf(tw, "%s\t%s\t—\t—\t\t\t\t\t%s\t\n", scenario.FormatMass(row.CrudeKg), row.Method, shorten(row.Reason, 50))
 			continue
 		}
-		fmt.Fprintf(tw, "%s\t%s\t%.2f\t%s\t%s\t%s\t%.1f\t%s\t%s\t\n", scenario.FormatMass(row.CrudeKg), row.Method, row.PerGram,
+		method := row.Method
+		if r.CheapestAt(row.Mass) == row.Col {
+			method += " *"
+		}
+		fmt.Fprintf(tw, "%s\t%s\t%.2f\t%s\t%s\t%s\t%.1f\t%s\t%s\t\n", scenario.FormatMass(row.CrudeKg), method, row.PerGram,
 			row.Total.StringFixed(2), num(row.SolventL), num(row.WasteKg), row.HoursElapsed, num(row.EFactor), row.Equipment)
 	}
 	if err := tw.Flush(); err != nil {
 		return err
 	}
+	ew.printf("* cheapest at that mass: the lowest cost per gram of purified product among the feasible methods\n")
 	for _, name := range r.Methods {
 		if why, ok := notAssessed[name]; ok {
 			ew.printf("%s: %s\n", name, why)

@@ -64,15 +64,21 @@ func Text(w io.Writer, r *scale.Report) error {
 			if err := tw.Flush(); err != nil {
 				return err
 			}
+			// Warnings at every mass; the models' notes on what they
+			// assumed at the decision's mass.
 			for _, n := range u.Notes {
-				if n.Level != usage.Info {
+				if n.Level != usage.Info || m == r.TargetKg {
 					ew.printf("  %s: %s\n", n.Level, n.Text)
 				}
 			}
 		}
 	}
 	if d := r.Decision; d != nil {
-		ew.printf("\nDecision at %s of crude:\n", scenario.FormatMass(d.TargetKg))
+		why := ""
+		if r.TargetWhy != "" {
+			why = " (" + r.TargetWhy + ")"
+		}
+		ew.printf("\nDecision at %s of crude%s:\n", scenario.FormatMass(d.TargetKg), why)
 		for _, line := range d.Explanation {
 			ew.printf("  %s\n", line)
 		}
@@ -80,17 +86,14 @@ func Text(w io.Writer, r *scale.Report) error {
 			ew.printf("  %s: %s is %.0f %% of the cost\n", dr.Method, dr.Item, dr.Share*100)
 		}
 	}
+	assumptions(ew, r)
 	if r.IsSweep {
-		ew.printf("\nCrossovers (cost per gram of purified product):\n")
-		if len(r.Crossovers) == 0 {
-			ew.printf("  none in %s to %s: the cost order of the methods does not change\n", scenario.FormatMass(r.MassesKg[0]), scenario.FormatMass(r.MassesKg[len(r.MassesKg)-1]))
+		crossovers(ew, r)
+		if len(r.Warnings) > 0 {
+			ew.printf("\nWarnings:\n")
 		}
-		for _, c := range r.Crossovers {
-			kind := "smooth crossing"
-			if c.Step {
-				kind = "at an equipment step"
-			}
-			ew.printf("  %s: %s cheaper below, %s cheaper above (%s)\n", scenario.FormatMass(c.MassKg), c.CheaperBelow, c.CheaperAbove, kind)
+		for _, w := range r.Warnings {
+			ew.printf("  %s: %s\n", w.Level, w.Line())
 		}
 	}
 	if len(r.Cautions) > 0 {
@@ -100,6 +103,49 @@ func Text(w io.Writer, r *scale.Report) error {
 		}
 	}
 	return ew.err
+}
+
+// assumptions prints the defaults the user did not set that move a
+// method's cost at the target mass by more than scale.AssumptionSwing.
+func assumptions(ew *errWriter, r *scale.Report) {
+	if len(r.Assumptions) == 0 {
+		return
+	}
+	ew.printf("\nAssumptions: defaults not set in the scenario that move a cost per gram at %s by more than %.0f %% (set them under settings: when you know better):\n",
+		scenario.FormatMass(r.TargetKg), scale.AssumptionSwing*100)
+	for _, a := range r.Assumptions {
+		ew.printf("  - %s\n", a.Words())
+	}
+}
+
+// crossovers prints where the decision changes, then, as a secondary
+// list, where any two methods change places.
+func crossovers(ew *errWriter, r *scale.Report) {
+	from, to := scenario.FormatMass(r.MassesKg[0]), scenario.FormatMass(r.MassesKg[len(r.MassesKg)-1])
+	ew.printf("\nWhere the cheapest method changes (cost per gram of purified product):\n")
+	if len(r.Crossovers) == 0 {
+		ew.printf("  nowhere in %s to %s: the same method is cheapest throughout\n", from, to)
+	}
+	orNone := func(s string) string {
+		if s == "" {
+			return "no feasible method"
+		}
+		return s
+	}
+	for _, c := range r.Crossovers {
+		ew.printf("  %s: %s below, %s above (%s", scenario.FormatMass(c.MassKg), orNone(c.CheaperBelow), orNone(c.CheaperAbove), c.Kind)
+		if c.Detail != "" {
+			ew.printf("; %s", c.Detail)
+		}
+		ew.printf(")\n")
+	}
+	if len(r.Pairwise) == 0 {
+		return
+	}
+	ew.printf("\nWhere two methods change places, cheapest overall or not (secondary):\n")
+	for _, c := range r.Pairwise {
+		ew.printf("  %s: %s cheaper below, %s cheaper above (%s)\n", scenario.FormatMass(c.MassKg), c.CheaperBelow, c.CheaperAbove, c.Kind)
+	}
 }
 
 // num prints a figure with about four significant digits.

@@ -31,7 +31,11 @@ func writeDecision(g *grid, st *styles, r *scale.Report, m money, row, lastCol i
 		target = r.TargetKg
 	}
 	row++
-	g.set(row, 1, cell{value: "Decision at " + massLabel(target) + " of crude", style: st.heading, spill: true})
+	heading := "Decision at " + massLabel(target) + " of crude"
+	if r.TargetWhy != "" {
+		heading += " (" + r.TargetWhy + ")"
+	}
+	g.set(row, 1, cell{value: heading, style: st.heading, spill: true})
 	row++
 	for _, line := range d.Explanation {
 		wrapped(g, st, row, line, lastCol)
@@ -161,47 +165,68 @@ func writeDecision(g *grid, st *styles, r *scale.Report, m money, row, lastCol i
 	return row
 }
 
-// writeCrossovers writes, after a blank row, the batch masses at which two
-// methods change places in cost per gram of purified product
-// (scale.Crossover: bracketed by bisection on the models to
-// scale.CrossoverPrecision in mass), with the cheaper method on each side
-// and whether the change is a smooth crossing or happens at an equipment
-// step. A sweep without crossovers says that the cost order does not
-// change in its range; an estimate at chosen masses has no such section.
-// row is the next free row; it returns the next free row.
+// writeCrossovers writes, after a blank row, the batch masses at which the
+// decision changes: the cheapest feasible method per gram of purified
+// product differs just below and just above (scale.Crossover: bracketed by
+// bisection on the models to scale.CrossoverPrecision in mass), with the
+// method on each side and the kind of change (smooth crossing, equipment
+// step, a method becoming feasible or not) in words. A secondary table
+// lists where any two methods change places. A sweep without changes says
+// so; an estimate at chosen masses has no such section. row is the next
+// free row; it returns the next free row.
 func writeCrossovers(g *grid, st *styles, r *scale.Report, row, lastCol int) int {
 	if !r.IsSweep && len(r.Crossovers) == 0 {
 		return row
 	}
 	row++
-	g.set(row, 1, cell{value: "Crossover masses", style: st.heading, spill: true})
+	g.set(row, 1, cell{value: "Where the cheapest method changes", style: st.heading, spill: true})
 	row++
 	if len(r.Crossovers) == 0 {
 		n := len(r.MassesKg)
-		text := fmt.Sprintf("From %s to %s the cost order of the methods per gram of purified product does not change: "+
-			"there is no crossover in this range.", massLabel(r.MassesKg[0]), massLabel(r.MassesKg[n-1]))
+		text := fmt.Sprintf("From %s to %s the same method is cheapest per gram of purified product throughout.",
+			massLabel(r.MassesKg[0]), massLabel(r.MassesKg[n-1]))
 		if len(r.Methods) < 2 {
 			text = "Only one method was costed, so no method overtakes another."
 		}
 		wrapped(g, st, row, text, lastCol)
-		return row + 1
+		row++
+	} else {
+		row = crossoverTable(g, st, r.Crossovers, row)
+		g.set(row, 1, cell{value: fmt.Sprintf("Cost per gram of purified product, the cheapest feasible method of all; each mass is bracketed by bisection on the models to %g %% in mass.",
+			scale.CrossoverPrecision*100), style: st.note, spill: true})
+		row++
 	}
+	if len(r.Pairwise) > 0 {
+		row++
+		g.set(row, 1, cell{value: "Where two methods change places (secondary: either may be dearer than a third)", style: st.bold, spill: true})
+		row++
+		row = crossoverTable(g, st, r.Pairwise, row)
+	}
+	return row
+}
+
+// crossoverTable writes one table of changes; it returns the next free row.
+func crossoverTable(g *grid, st *styles, cs []scale.Crossover, row int) int {
 	for c, h := range []string{"Crude mass", "Cheaper below", "Cheaper above", "Change"} {
 		g.text(row, c+1, h, st.header)
 	}
 	row++
-	for _, c := range r.Crossovers {
+	orNone := func(s string) string {
+		if s == "" {
+			return "no feasible method"
+		}
+		return capitalize(s)
+	}
+	for _, c := range cs {
 		g.text(row, 1, massLabel(c.MassKg), st.text)
-		g.text(row, 2, capitalize(c.CheaperBelow), st.text)
-		g.text(row, 3, capitalize(c.CheaperAbove), st.text)
-		kind := "smooth crossing"
-		if c.Step {
-			kind = "at an equipment step (a jump in cost: column size, vessel or number of runs)"
+		g.text(row, 2, orNone(c.CheaperBelow), st.text)
+		g.text(row, 3, orNone(c.CheaperAbove), st.text)
+		kind := c.Kind
+		if c.Detail != "" {
+			kind += ": " + c.Detail
 		}
 		g.set(row, 4, cell{value: kind, style: st.text, spill: true})
 		row++
 	}
-	g.set(row, 1, cell{value: fmt.Sprintf("Cost per gram of purified product; each mass is bracketed by bisection on the models to %g %% in mass.",
-		scale.CrossoverPrecision*100), style: st.note, spill: true})
-	return row + 1
+	return row
 }

@@ -4,8 +4,6 @@ import (
 	"fmt"
 	"strings"
 
-	"github.com/shopspring/decimal"
-
 	"sepcost/scale"
 )
 
@@ -34,6 +32,7 @@ func buildSummary(g *grid, st *styles, r *scale.Report, m money, methods []metho
 		}
 	}
 	cheapest := len(r.Methods) > 1
+	const perGramCol = 4 // "Cost per gram", the first of cols after the total
 	type column struct {
 		head string
 		get  func(massCells) numCell
@@ -62,6 +61,7 @@ func buildSummary(g *grid, st *styles, r *scale.Report, m money, methods []metho
 	if !details {
 		row := summaryOmitted(g, st, r, lastCol)
 		row = writeDecision(g, st, r, m, row, lastCol, lay)
+		row = writeAssumptions(g, st, r, row, lastCol)
 		row = writeCrossovers(g, st, r, row, lastCol)
 		summaryNotes(g, st, r, row, lastCol)
 		return
@@ -75,8 +75,6 @@ func buildSummary(g *grid, st *styles, r *scale.Report, m money, methods []metho
 	row := 8
 	for i, kg := range r.MassesKg {
 		var feasibleRows [][2]int // summary row, method index
-		var low decimal.Decimal
-		lowSet := false
 		for j := range r.Methods {
 			mc := methods[j].mass[i]
 			g.text(row, 1, massLabel(kg), st.text)
@@ -100,25 +98,27 @@ func buildSummary(g *grid, st *styles, r *scale.Report, m money, methods []metho
 					g.formula(row, 4+k, sheetRef(methods[j].sheet, nc.ref), nc.v, c.st)
 				}
 			}
-			feasibleRows = append(feasibleRows, [2]int{row, j})
-			if !lowSet || mc.total.LessThan(low) {
-				low, lowSet = mc.total, true
+			if mc.perGram.ok {
+				feasibleRows = append(feasibleRows, [2]int{row, j})
 			}
 			row++
 		}
 		if cheapest && len(feasibleRows) > 0 {
-			// A formula, so that the mark moves when a price is edited:
-			// IF(C8=MIN(C8,C9,...),"cheapest","").
+			// Cheapest per gram of purified product, the one definition
+			// every output uses (scale.Cheapest), as a formula on the
+			// cost-per-gram cells so that the mark moves when a price is
+			// edited: IF(D8=MIN(D8,D9,...),"cheapest","").
 			refs := make([]string, len(feasibleRows))
 			for k, fr := range feasibleRows {
-				refs[k] = cellName(3, fr[0])
+				refs[k] = cellName(perGramCol, fr[0])
 			}
+			best := r.CheapestAt(i)
 			for _, fr := range feasibleRows {
 				mark := ""
-				if methods[fr[1]].mass[i].total.Equal(low) {
+				if fr[1] == best {
 					mark = "cheapest"
 				}
-				f := "IF(" + cellName(3, fr[0]) + "=MIN(" + strings.Join(refs, ",") + "),\"cheapest\",\"\")"
+				f := "IF(" + cellName(perGramCol, fr[0]) + "=MIN(" + strings.Join(refs, ",") + "),\"cheapest\",\"\")"
 				g.formula(fr[0], lastCol, f, mark, st.bold)
 			}
 		}
@@ -129,8 +129,31 @@ func buildSummary(g *grid, st *styles, r *scale.Report, m money, methods []metho
 		row++
 	}
 	row = writeDecision(g, st, r, m, row, lastCol, lay)
+	row = writeAssumptions(g, st, r, row, lastCol)
 	row = writeCrossovers(g, st, r, row, lastCol)
 	summaryNotes(g, st, r, row, lastCol)
+}
+
+// writeAssumptions lists, after a blank row, the defaults the user did not
+// set that move a method's cost per gram at the target mass by more than
+// scale.AssumptionSwing between their low and high plausible values; row
+// is the next free row; it returns the next free row.
+func writeAssumptions(g *grid, st *styles, r *scale.Report, row, lastCol int) int {
+	if len(r.Assumptions) == 0 {
+		return row
+	}
+	row++
+	g.set(row, 1, cell{value: "Assumptions the cost rests on", style: st.heading, spill: true})
+	row++
+	wrapped(g, st, row, fmt.Sprintf("Defaults not set in the scenario that move a method's cost per gram at %s by more than %.0f %% between their "+
+		"low and high plausible values (P10 and P90 of the spread their source is given, as on the Uncertainty sheet), each changed alone. "+
+		"Measure them or set them under settings: in the scenario.", massLabel(r.TargetKg), scale.AssumptionSwing*100), lastCol)
+	row++
+	for _, a := range r.Assumptions {
+		wrapped(g, st, row, capitalize(a.Words()), lastCol)
+		row++
+	}
+	return row
 }
 
 // summaryOmitted writes, in place of the per-mass table of a sweep of many
@@ -177,13 +200,20 @@ func summaryNotes(g *grid, st *styles, r *scale.Report, row, lastCol int) {
 	row++
 	g.set(row, 1, cell{value: "Notes", style: st.heading, spill: true})
 	row++
-	if len(r.Notes) == 0 {
+	if len(r.Notes) == 0 && len(r.Warnings) == 0 {
 		g.set(row, 1, cell{value: "No notes.", style: st.note, spill: true})
 		row++
 	}
 	for _, n := range r.Notes {
 		g.text(row, 1, string(n.Level), st.text)
 		g.set(row, 2, cell{value: n.Text, style: st.text, spill: true})
+		row++
+	}
+	// Every warning of the models, once per method and wording, with
+	// the masses it was raised at.
+	for _, w := range r.Warnings {
+		g.text(row, 1, string(w.Level), st.text)
+		g.set(row, 2, cell{value: capitalize(w.Line()), style: st.text, spill: true})
 		row++
 	}
 

@@ -72,7 +72,7 @@ func sweepReport() *scale.Report {
 		},
 	}
 	r.Crossovers = []scale.Crossover{{A: "chromatography", B: "crystallization", MassKg: 0.055569,
-		CheaperBelow: "chromatography", CheaperAbove: "crystallization"}}
+		CheaperBelow: "chromatography", CheaperAbove: "crystallization", Kind: scale.Smooth}}
 	for i := range r.Results {
 		for j := range r.Results[i] {
 			u := &r.Results[i][j].Usage
@@ -132,7 +132,7 @@ func syntheticSweep(n, methods int) *scale.Report {
 			continue
 		}
 		c := scale.Crossover{A: "chromatography", B: "crystallization", MassKg: math.Sqrt(masses[i] * masses[i+1]),
-			CheaperBelow: "chromatography", CheaperAbove: "crystallization"}
+			CheaperBelow: "chromatography", CheaperAbove: "crystallization", Kind: scale.Smooth}
 		if d0 > 0 {
 			c.CheaperBelow, c.CheaperAbove = c.CheaperAbove, c.CheaperBelow
 		}
