@@ -68,6 +68,9 @@ func ParseRange(s string) (Range, Unit, error) {
 // lists example units for that dimension.
 func ParseRangeAs(s string, want Dim) (Range, error) {
 	r, u, err := ParseRange(s)
+	if err != nil && strings.Contains(err.Error(), rangeExample) {
+		return Range{}, err // the range itself is wrong, and the message shows how to write one
+	}
 	if err != nil {
 		return Range{}, fmt.Errorf("%w; write %s, or a range such as %s", err, Accepted(want), rangeExample)
 	}
