@@ -43,6 +43,16 @@ func (u *Uncertainty) AdviceLines(n int) []string {
 	return out
 }
 
+// Words says where two methods change places across the draws, e.g.
+// "chromatography and crystallization change places in 100 % of the draws:
+// chromatography is cheaper below; the crossover lies between 11.8 g and
+// 48.6 g of crude in eight draws of ten (P10–P90; median 28.3 g)".
+func (c CrossBand) Words() string {
+	return fmt.Sprintf("%s and %s change places in %s %% of the draws: %s is cheaper below; the crossover lies between %s and %s of crude "+
+		"in eight draws of ten (P10–P90; median %s)", c.A, c.B, strconv.FormatFloat(math.Round(c.Share*1000)/10, 'f', -1, 64), c.A,
+		massWords(c.P10), massWords(c.P90), massWords(c.P50))
+}
+
 // Money writes an amount with thousands separators and no more precision
 // than a planning figure needs: whole units from 100 up, else three
 // significant figures.

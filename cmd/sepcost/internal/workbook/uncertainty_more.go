@@ -171,9 +171,7 @@ func uncertaintyAcross(g *grid, st *styles, r *scale.Report, row int) (int, *ban
 		"plots the shares. A cell is empty where the method was feasible in no draw. The Scale-up chart of cost per gram draws the P10 and P90 as dashed lines around each method's curve.", uLast)
 	row++
 	for _, c := range u.Crossings {
-		wrapped(g, st, row, fmt.Sprintf("%s and %s change places in %s %% of the draws: below about %s of crude %s is cheaper; the crossover "+
-			"lies between %s and %s of crude in eight draws of ten (P10–P90; median %s).", capitalize(c.A), c.B, sigFigs(c.Share*100, 3),
-			massLabel(c.P50), c.A, massLabel(c.P10), massLabel(c.P90), massLabel(c.P50)), uLast)
+		wrapped(g, st, row, capitalize(c.Words())+".", uLast)
 		row++
 	}
 	return row, refs
