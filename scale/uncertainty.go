@@ -84,6 +84,12 @@ func Thin(masses []float64, n int) []float64 {
 	return out
 }
 
+// minCrossMasses is the fewest masses the crossover intervals are found
+// on: between three masses of an estimate, a hundredfold apart, an
+// interpolated crossing would say more than the masses do (common
+// practice, no source).
+const minCrossMasses = 8
+
 // Sample draws at the target mass only (see SampleAcross).
 func Sample(p *costing.Plan, t *prices.Table, targetKg float64, draws int, seed uint64, progress func(done int)) (*Uncertainty, error) {
 	return SampleAcross(p, t, targetKg, nil, draws, seed, progress)
@@ -139,7 +145,7 @@ func SampleAcross(p *costing.Plan, t *prices.Table, targetKg float64, masses []f
 	for m := range masses {
 		u.Across = append(u.Across, MassBand{Kg: masses[m], Bands: bands(names, at(m))})
 	}
-	if len(masses) >= 2 {
+	if len(masses) >= minCrossMasses {
 		u.Crossings = crossings(names, masses, at)
 	}
 	u.weighInputs(p, nominal, x, at(nM-1))
