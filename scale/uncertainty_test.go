@@ -168,12 +168,12 @@ func position(v []int, x int) int {
 func TestSampleAcrossReproducible(t *testing.T) {
 	p, pt := plan(t, templates.Scenario)
 	masses, _ := LogSpace(1e-3, 5, 8)
-	a, err := SampleAcross(p, pt, 2, masses, 150, 5, nil)
+	a, err := SampleAcross(p, pt, 0.02, masses, 150, 5, nil)
 	if err != nil {
 		t.Fatal(err)
 	}
 	old := runtime.GOMAXPROCS(1)
-	b, err := SampleAcross(p, pt, 2, masses, 150, 5, nil)
+	b, err := SampleAcross(p, pt, 0.02, masses, 150, 5, nil)
 	runtime.GOMAXPROCS(old)
 	if err != nil {
 		t.Fatal(err)
@@ -199,6 +199,21 @@ func TestSampleAcrossReproducible(t *testing.T) {
 	for _, c := range a.Crossings {
 		if !(c.P10 <= c.P50 && c.P50 <= c.P90 && c.P10 >= masses[0] && c.P90 <= masses[len(masses)-1] && c.Share > 0 && c.Share <= 1) {
 			t.Errorf("crossing %+v", c)
+		}
+	}
+	// At 20 g the demo's two methods are close (the crossover lies near
+	// there), so the choice is worth something to know.
+	if a.EVPI <= 0 || len(a.Worth) == 0 {
+		t.Errorf("no value of information at 20 g: EVPI %g, %d inputs", a.EVPI, len(a.Worth))
+	}
+	for k, w := range a.Worth {
+		if w != b.Worth[k] {
+			t.Errorf("worth %d: %+v on two cores, %+v on one", k, w, b.Worth[k])
+		}
+	}
+	for k, s := range a.Sensitivity {
+		if s.Input != b.Sensitivity[k].Input {
+			t.Errorf("sensitivity rank %d: input %d vs %d", k, s.Input, b.Sensitivity[k].Input)
 		}
 	}
 	for _, w := range a.Worth {
