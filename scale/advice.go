@@ -29,11 +29,14 @@ func (u *Uncertainty) Advice(w Worth) string {
 // AdviceLines are the n inputs most worth knowing, as sentences for the
 // decision's explanation, with what knowing everything is worth.
 func (u *Uncertainty) AdviceLines(n int) []string {
-	if u.EVPI <= 0 || len(u.Worth) == 0 {
+	if u.EVPI <= 0 {
 		return []string{fmt.Sprintf("Knowing every uncertain input exactly would not change the choice at %s of crude: no measurement is worth making for this decision.", massWords(u.TargetKg))}
 	}
 	out := []string{fmt.Sprintf("What to measure next, for one batch of %s of crude (%s g of product): knowing every uncertain input before choosing is worth up to %s %s on average.",
 		massWords(u.TargetKg), Money(u.ProductG), Money(u.EVPI), u.Currency)}
+	if len(u.Worth) == 0 {
+		return append(out, "No single input known alone would change the choice: only several moving together would, so no one measurement is worth making for it.")
+	}
 	for k, w := range u.Worth {
 		if k == n {
 			break

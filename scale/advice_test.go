@@ -42,3 +42,17 @@ func TestAdviceWords(t *testing.T) {
 		t.Errorf("crossing words: %q", got)
 	}
 }
+
+// A choice that only several inputs together could change: the whole value
+// is given, and no single measurement is advised.
+func TestAdviceNoSingleInput(t *testing.T) {
+	u := &Uncertainty{Currency: "EUR", EVPI: 23.6, ProductG: 16.4, TargetKg: 0.02}
+	lines := u.AdviceLines(3)
+	if len(lines) != 2 || lines[1] != "No single input known alone would change the choice: only several moving together would, so no one measurement is worth making for it." {
+		t.Errorf("%q", lines)
+	}
+	u.EVPI = 0
+	if lines := u.AdviceLines(3); len(lines) != 1 {
+		t.Errorf("%q", lines)
+	}
+}
