@@ -41,13 +41,15 @@ type grid struct {
 	minWidths  map[int]float64 // widths the content may widen but not narrow
 	maxWidths  map[int]float64 // widths the content may narrow but not widen (wrapped text)
 	printWide  bool            // print in landscape, scaled to one page wide
-	chart      []gridChart     // charts anchored on the sheet (X axis: crude mass, log scale)
+	chart      []gridChart     // charts anchored on the sheet
 }
 
-// gridChart is a chart anchored at a cell of a grid's sheet.
+// gridChart is a chart anchored at a cell of a grid's sheet; logX makes
+// its X axis (crude mass) logarithmic, as logXAxes does.
 type gridChart struct {
 	cell  string
 	chart *excelize.Chart
+	logX  bool
 }
 
 func newGrid(name string) *grid {
@@ -240,7 +242,9 @@ func (g *grid) flush(f *excelize.File, st *styles, omit bool) error {
 		if err != nil {
 			return fmt.Errorf("workbook: sheet %s: chart: %w", g.name, err)
 		}
-		parts = append(parts, part)
+		if c.logX {
+			parts = append(parts, part)
+		}
 	}
 	if err := logXAxes(f, parts); err != nil {
 		return fmt.Errorf("workbook: sheet %s: %w", g.name, err)

@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"math"
 	"sort"
+	"strings"
 
 	"github.com/xuri/excelize/v2"
 
@@ -102,6 +103,7 @@ func uncertaintySensitivity(g *grid, st *styles, r *scale.Report, row int) int {
 	}
 	header(g, st, row, heads...)
 	row++
+	first := row
 	for k, s := range u.Sensitivity {
 		if k == maxRanked {
 			break
@@ -115,12 +117,42 @@ func uncertaintySensitivity(g *grid, st *styles, r *scale.Report, row int) int {
 		}
 		row++
 	}
+	if row > first {
+		col := len(heads) // the column the chart plots: the decision's (the last), else the first method's
+		if !diff {
+			col = 2
+		}
+		g.chart = append(g.chart, gridChart{cell: cellName(len(heads)+2, first-1), chart: sensitivityChart(heads[col-1], first, row-1, col)})
+	}
 	wrapped(g, st, row, "Spearman's rank correlation (Spearman, Am. J. Psychol. 1904, 15, 72) between the drawn input and the cost per gram "+
 		"at the target mass over the draws: +1 when the cost rises with the input in every draw, −1 when it falls, near 0 when "+
 		"the input does not move it. The last column correlates the input with the difference in cost per gram between the two "+
 		"methods cheapest at the nominal values, which is what decides between them. n/a: the method was not feasible in "+
 		"enough draws.", uLast)
 	return row + 1
+}
+
+// sensitivityChart is a bar chart of the rank correlations in column col
+// of rows first..last, the inputs' names on the axis, strongest on top.
+func sensitivityChart(what string, first, last, col int) *excelize.Chart {
+	run := func(s string) excelize.ChartTitle {
+		return excelize.ChartTitle{Paragraph: []excelize.RichTextRun{{Text: s}}}
+	}
+	top, bottom := 1.0, -1.0
+	return &excelize.Chart{
+		Type: excelize.Bar,
+		Series: []excelize.ChartSeries{{
+			Name:       sheetRef(sheetUncertainty, absName(col, first-1)),
+			Categories: sheetRef(sheetUncertainty, absName(1, first)+":"+absName(1, last)),
+			Values:     sheetRef(sheetUncertainty, absName(col, first)+":"+absName(col, last)),
+		}},
+		Title:     run("Rank correlation with cost per gram: " + strings.ReplaceAll(what, "\n", " ")),
+		XAxis:     excelize.ChartAxis{ReverseOrder: true, Font: axisFont},
+		YAxis:     excelize.ChartAxis{MajorGridLines: true, Maximum: &top, Minimum: &bottom, Font: axisFont},
+		Legend:    excelize.ChartLegend{Position: "none"},
+		Dimension: excelize.ChartDimension{Width: suChartW, Height: suChartH},
+		Format:    excelize.GraphicOptions{AltText: "Rank correlation of each uncertain input with cost per gram at the target mass"},
+	}
 }
 
 // uncertaintyAcross writes the bands and cheapest shares at every mass
@@ -160,7 +192,7 @@ func uncertaintyAcross(g *grid, st *styles, r *scale.Report, row int) (int, *ban
 		}
 	}
 	last := row
-	g.chart = append(g.chart, gridChart{cell: cellName(2+4*nJ, first-1), chart: shareChart(r, shown, first, last)})
+	g.chart = append(g.chart, gridChart{cell: cellName(2+4*nJ, first-1), chart: shareChart(r, shown, first, last), logX: true})
 	refs := &bandRefs{first: first, last: last}
 	for c, j := range shown {
 		refs.cols = append(refs.cols, bandCol{method: r.Methods[j], p10: 2 + 3*c, p90: 4 + 3*c})

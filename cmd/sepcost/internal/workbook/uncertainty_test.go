@@ -132,4 +132,31 @@ func TestScaleUpBand(t *testing.T) {
 	if !found {
 		t.Error("no cost-per-gram chart")
 	}
+	// The Uncertainty sheet adds two charts: the rank correlations (bars)
+	// and the cheapest shares against mass (log X).
+	var all []string
+	for name := range parts {
+		if strings.HasPrefix(name, "xl/charts/chart") {
+			all = append(all, name)
+		}
+	}
+	if len(all) != len(charts)+2 {
+		t.Fatalf("%d charts in the workbook, want the Scale-up's %d and two on the Uncertainty sheet", len(all), len(charts))
+	}
+	bars, shares := 0, 0
+	for _, name := range all {
+		x := parts[name]
+		switch {
+		case strings.Contains(x, "barChart>") && strings.Contains(x, "Rank correlation"):
+			bars++
+		case strings.Contains(x, "Share of draws"):
+			shares++
+			if err := checkLogChart([]byte(x)); err != nil {
+				t.Errorf("share chart: %v", err)
+			}
+		}
+	}
+	if bars != 1 || shares != 1 {
+		t.Errorf("%d rank-correlation and %d share charts, want one each", bars, shares)
+	}
 }
