@@ -71,7 +71,9 @@ func Prepare(sc *scenario.Scenario) (*Plan, error) {
 				continue
 			}
 			err := coef.Override(s.Key, s.Value, s.Written)
-			if c, ok := coef.Lookup(s.Key); err == nil && ok && s.Range.Half > 0 && !(c.InRange(s.Range.Lo()) && c.InRange(s.Range.Hi())) {
+			if c, ok := coef.Lookup(s.Key); err == nil && ok && s.Range.Half > 0 && s.Range.Lo() < 0 && c.Dim != units.Temperature {
+				err = fmt.Errorf("%q reaches below zero; a range of %s must stay at zero or above", s.Written, s.Key)
+			} else if err == nil && ok && s.Range.Half > 0 && !(c.InRange(s.Range.Lo()) && c.InRange(s.Range.Hi())) {
 				lo, hi := c, c
 				lo.SI, hi.SI = c.Lo, c.Hi
 				err = fmt.Errorf("%q reaches outside the range %s accepts: %.4g to %.4g %s", s.Written, s.Key, lo.Display(), hi.Display(), c.Unit)

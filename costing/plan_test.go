@@ -79,7 +79,8 @@ func TestCautions(t *testing.T) {
 }
 
 // A setting written with a range takes its midpoint (each limit is checked
-// against the coefficient's physical range as a single value would be).
+// against the coefficient's physical range as a single value would be); a
+// range reaching below zero is refused (no negative mass, time or share).
 func TestSettingRange(t *testing.T) {
 	p, err := Prepare(load(t, base+"settings:\n  chromatography.bed_density: \"0.40–0.50 g/mL\"\n"))
 	if err != nil {
@@ -87,5 +88,9 @@ func TestSettingRange(t *testing.T) {
 	}
 	if c := p.Coef.Of(chrom.KeyBedDensity); math.Abs(c.SI-450) > 1e-9 {
 		t.Errorf("bed density = %g kg/m³, want the midpoint 450", c.SI)
+	}
+	_, err = Prepare(load(t, base+"settings:\n  chromatography.mixed_fraction_loss: \"0.03 ± 0.05\"\n"))
+	if err == nil || !strings.Contains(err.Error(), "reaches below zero") || !strings.Contains(err.Error(), "settings.chromatography.mixed_fraction_loss") {
+		t.Errorf("err = %v", err)
 	}
 }
