@@ -108,7 +108,7 @@ func toRange(a, b float64, form Form) Range {
 	case PlusMinus:
 		return Range{Nominal: a, Half: b, Form: form}
 	case Interval:
-		return Range{Nominal: (a + b) / 2, Half: (b - a) / 2, Form: form}
+		return Range{Nominal: a/2 + b/2, Half: b/2 - a/2, Form: form} // halves first: no overflow
 	}
 	return Range{Nominal: a, Form: form}
 }

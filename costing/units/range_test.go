@@ -74,3 +74,25 @@ func TestParseRangeRefuses(t *testing.T) {
 		t.Errorf("wrong dimension accepted")
 	}
 }
+
+// Whatever is written, a range reads without a panic, and a range read has
+// finite limits in order.
+func FuzzParseRange(f *testing.F) {
+	for _, s := range []string{"12–18 g/L", "0.30 ± 0.03", "15+/-3 g/L", "-10–-5 C", "1e-3 to 2e-3 kg", "±", "–", "1e309 ± 1 g", "5 - g", "-1.7e308–1.7e308 g"} {
+		f.Add(s)
+	}
+	f.Fuzz(func(t *testing.T, s string) {
+		for _, read := range []func(string) (Range, error){
+			func(s string) (Range, error) { r, _, err := ParseRange(s); return r, err },
+			ParsePlainRange,
+		} {
+			r, err := read(s)
+			if err != nil {
+				continue
+			}
+			if math.IsNaN(r.Nominal) || math.IsInf(r.Nominal, 0) || !(r.Half >= 0) || math.IsInf(r.Half, 0) || r.Lo() > r.Hi() {
+				t.Errorf("%q read as %+v", s, r)
+			}
+		}
+	})
+}
