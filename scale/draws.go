@@ -149,7 +149,7 @@ type coefDraw struct {
 }
 
 // newDesign lists the uncertain inputs of a plan and a price table. used
-// names the price rows the plan's methods ask for at the target mass.
+// names the price rows the plan's methods ask for at the masses drawn.
 func newDesign(p *costing.Plan, t *prices.Table, used map[int]bool) *design {
 	d := &design{rule: -1}
 	d.addMeasured(p.Scenario)
@@ -346,13 +346,16 @@ func (d *design) apply(p *costing.Plan, r *ledger.Rates, x []float64) (*costing.
 	return p.With(sc, p.Coef.WithValues(cv)), r.Scaled(f)
 }
 
-// usedPrices lists the price rows the plan's methods ask for at a mass.
-func usedPrices(p *costing.Plan, t *prices.Table, kg float64) map[int]bool {
+// usedPrices lists the price rows the plan's methods ask for at the
+// masses, at their nominal values.
+func usedPrices(p *costing.Plan, t *prices.Table, kgs ...float64) map[int]bool {
 	used := map[int]bool{}
-	for _, m := range p.Methods {
-		for _, dm := range m.Run(kg).Demands {
-			if i, ok := t.Find(dm.Item); ok {
-				used[i] = true
+	for _, kg := range kgs {
+		for _, m := range p.Methods {
+			for _, dm := range m.Run(kg).Demands {
+				if i, ok := t.Find(dm.Item); ok {
+					used[i] = true
+				}
 			}
 		}
 	}

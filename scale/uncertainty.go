@@ -108,8 +108,8 @@ func Sample(p *costing.Plan, t *prices.Table, targetKg float64, draws int, seed 
 // how the draws are spread over the cores.
 func SampleAcross(p *costing.Plan, t *prices.Table, targetKg float64, masses []float64, draws int, seed uint64, progress func(done int)) (*Uncertainty, error) {
 	nominal := ledger.NewRates(t)
-	d := newDesign(p, t, usedPrices(p, t, targetKg))
 	ms := append(append([]float64(nil), masses...), targetKg)
+	d := newDesign(p, t, usedPrices(p, t, ms...))
 	nJ, nM, nI := len(p.Methods), len(ms), len(d.inputs)
 	x := make([]float64, draws*nI)
 	perG := make([]float64, draws*nM*nJ)
