@@ -45,6 +45,7 @@ const (
 	KindPurity     Kind = "purity from one chromatogram"
 	KindSolubility Kind = "one gravimetric solubility point"
 	KindEstimate   Kind = "a time or amount estimated before the work"
+	KindBoiling    Kind = "a normal boiling point measured once or taken from a reduced-pressure reading"
 )
 
 // Spread is the default half-width of a kind of measurement.
@@ -68,6 +69,10 @@ var Spreads = map[Kind]Spread{
 	// One gravimetric point: equilibration time, temperature control and
 	// drying of the residue (common practice, no source).
 	KindSolubility: {Half: 0.25, Relative: true, Source: "one gravimetric point, not repeated: equilibration, temperature and drying of the residue, ±25 %", Mark: "common practice"},
+	// A boiling point read once at the still head, or corrected to 1 atm from
+	// a reduced-pressure reading with a nomograph (common practice, no
+	// source).
+	KindBoiling: {Half: 3, Source: "one reading at the still head, or corrected to 1 atm from a reduced-pressure reading: a few kelvin either way", Mark: "common practice"},
 	// Development time guessed before the work (common practice, no source).
 	KindEstimate: {Half: 0.5, Relative: true, Source: "an estimate made before the work: ±50 %", Mark: "common practice"},
 }
@@ -167,6 +172,35 @@ func setSolubility(product bool, i int) func(*Scenario, float64) {
 	}
 }
 
+// boilingPoint reads a distillation compound's normal boiling point, K,
+// which may carry a range when no Antoine constants are given (they fix the
+// boiling point); a compound described by its properties has its boiling
+// point recorded as measured. It returns 0 after recording a problem.
+func (c *collector) boilingPoint(r *rawCompound, field string, isProduct bool, s *Scenario) float64 {
+	t, f := r.BoilingPoint, field+".boiling_point"
+	rg, ok := c.quantityRange(t, f, units.Temperature)
+	if !ok {
+		return 0
+	}
+	if !(rg.Lo() > minBoilingK) || rg.Hi() > maxBoilingK {
+		c.add(t.Line, f, "%q is outside the plausible range; write the normal boiling point (at 1 atm), e.g. \"185 C\" or \"183–187 C\"", t.Value)
+		return 0
+	}
+	if r.Antoine != nil {
+		if rg.Half > 0 {
+			c.add(t.Line, f, "%q: a range is read here only when no Antoine constants are given (the constants fix the boiling point); write one value", t.Value)
+			return 0
+		}
+		return rg.Nominal
+	}
+	which, set := "key impurity", func(s *Scenario, v float64) { s.Distillation.Impurity.Data.BoilingPoint.V = v }
+	if isProduct {
+		which, set = "product", func(s *Scenario, v float64) { s.Distillation.Product.Data.BoilingPoint.V = v }
+	}
+	s.measure(f, t, "normal boiling point of the "+which, "C", KindBoiling, rg, minBoilingK, maxBoilingK, set)
+	return rg.Nominal
+}
+
 // fractionRange reads a plain number or percentage that may carry a range;
 // both limits must lie in [lo, hi].
 func (c *collector) fractionRange(t Text, field string, lo, hi float64, what string) (units.Range, bool) {
@@ -217,4 +251,5 @@ func rangeHint(value string) string {
 
 // measuredFields names the fields that take a range.
 const measuredFields = "crude.purity, crude.nearest_impurity, chromatography.product_rf, chromatography.impurity_rf, " +
-	"crystallization.product.solubility, crystallization.impurity.solubility, crystallization.screening_time"
+	"crystallization.product.solubility, crystallization.impurity.solubility, crystallization.screening_time, " +
+	"distillation.product.boiling_point, distillation.impurity.boiling_point"

@@ -124,3 +124,61 @@ func TestMeasuredRangesRefused(t *testing.T) {
 		}
 	}
 }
+
+const distilYAML = `name: liquid
+masses: ["1 g", "1 kg"]
+crude:
+  purity: 0.88
+distillation:
+  product:
+    name: ester 4
+    boiling_point: "225–231 C"
+    molar_mass: "186.3 g/mol"
+  impurity:
+    name: diester
+    boiling_point: "262 C"
+    molar_mass: "230.3 g/mol"
+  target_purity: "98 %"
+  max_pot_temperature: "150 C"
+  best_vacuum: "2 mbar"
+`
+
+// A distillation compound's boiling point, given without Antoine
+// constants, is a measured value: "225–231 C" is 228 ± 3 °C (501.15 K,
+// 0 °C = 273.15 K, ITS-90 convention); "262 C" alone gets the default ±3 K;
+// a drawn copy carries the drawn boiling point.
+func TestBoilingPointRange(t *testing.T) {
+	s, err := Load(strings.NewReader(distilYAML), "d.yaml")
+	if err != nil {
+		t.Fatal(err)
+	}
+	got := map[string]Measured{}
+	for _, m := range s.Measured {
+		got[m.Field] = m
+	}
+	p, i := got["distillation.product.boiling_point"], got["distillation.impurity.boiling_point"]
+	if math.Abs(p.Range.Nominal-501.15) > 1e-9 || math.Abs(p.Range.Half-3) > 1e-9 || p.Default {
+		t.Errorf("product: %+v", p)
+	}
+	if math.Abs(i.Range.Nominal-535.15) > 1e-9 || i.Range.Half != Spreads[KindBoiling].Half || !i.Default {
+		t.Errorf("impurity: %+v", i)
+	}
+	if s.Distillation.Product.Data.BoilingPoint.V != p.Range.Nominal {
+		t.Errorf("the model sees %g K", s.Distillation.Product.Data.BoilingPoint.V)
+	}
+	vals := s.Nominal()
+	for k, m := range s.Measured {
+		if m.Field == "distillation.product.boiling_point" {
+			vals[k] = 500
+		}
+	}
+	d := s.With(vals)
+	if d.Distillation.Product.Data.BoilingPoint.V != 500 || s.Distillation.Product.Data.BoilingPoint.V != p.Range.Nominal {
+		t.Errorf("drawn %g, original %g", d.Distillation.Product.Data.BoilingPoint.V, s.Distillation.Product.Data.BoilingPoint.V)
+	}
+	bad := strings.Replace(distilYAML, `boiling_point: "225–231 C"`, `boiling_point: "225–231 C"
+    antoine: {a: 4.2, b: 1800, c: -80, t_min: "150 C", t_max: "250 C"}`, 1)
+	if _, err := Load(strings.NewReader(bad), "d.yaml"); err == nil || !strings.Contains(err.Error(), "only when no Antoine constants are given") {
+		t.Errorf("a range beside Antoine constants: %v", err)
+	}
+}
