@@ -99,8 +99,17 @@ func Prepare(sc *scenario.Scenario) (*Plan, error) {
 func newPlan(sc *scenario.Scenario, coef source.Set) *Plan {
 	p := &Plan{Scenario: sc, Coef: coef}
 	p.add(chrom.Method, sc.Chromatography != nil, func(m float64) usage.Usage { return chrom.Run(sc, coef, m) })
-	p.add(cryst.Method, sc.Crystallization != nil, func(m float64) usage.Usage { return cryst.Run(sc, coef, m) })
-	p.add(distil.Method, sc.Distillation != nil, func(m float64) usage.Usage { return distil.Run(sc, coef, m) })
+	// The crystallization and distillation models read and check their
+	// coefficients once here, not at every run.
+	var crystRun, distilRun func(float64) usage.Usage
+	if sc.Crystallization != nil {
+		crystRun = cryst.New(sc, coef).Run
+	}
+	if sc.Distillation != nil {
+		distilRun = distil.New(sc, coef).Run
+	}
+	p.add(cryst.Method, sc.Crystallization != nil, crystRun)
+	p.add(distil.Method, sc.Distillation != nil, distilRun)
 	return p
 }
 

@@ -105,12 +105,17 @@ func (s *decisionSearch) at(lnm float64) ([]point, error) {
 // for neighbouring masses whose cheapest feasible method differs, and
 // bisects each interval on the model in ln m to CrossoverPrecision. Where
 // a third method wins inside an interval, both changes are bracketed.
-// A change and its reversal between two neighbouring grid masses are not
-// seen: the grid must be fine enough for the equipment steps it crosses.
+// Where both ends have the same cheapest method but a method's equipment
+// changes in between, its cost jumps there, so another method may win
+// just before or after the step (a change and its reversal inside one
+// interval): steps looks on both sides of the step for that.
 func findDecisionCrossovers(names []string, masses []float64, grid [][]point, eval evalFunc) ([]Crossover, error) {
 	s := &decisionSearch{names: names, eval: eval}
 	for k := 0; k+1 < len(masses); k++ {
 		if cheapest(perGrams(grid[k])) == cheapest(perGrams(grid[k+1])) {
+			if err := s.steps(math.Log(masses[k]), math.Log(masses[k+1]), grid[k], grid[k+1]); err != nil {
+				return nil, err
+			}
 			continue
 		}
 		if err := s.bracket(math.Log(masses[k]), math.Log(masses[k+1]), grid[k], grid[k+1]); err != nil {
@@ -144,6 +149,46 @@ func (s *decisionSearch) bracket(lo, hi float64, plo, phi []point) error {
 		}
 	}
 	s.out = append(s.out, s.describe(lo, hi, plo, phi, wlo, whi))
+	return nil
+}
+
+// steps looks inside [lo, hi] (ln kg), whose ends have the same cheapest
+// method, for an equipment step of any method (its equipment differs at
+// the two ends): it bisects to the step and, where another method is
+// cheapest just below or just above it, brackets the change into that
+// window and the change out of it.
+func (s *decisionSearch) steps(lo, hi float64, plo, phi []point) error {
+	w := cheapest(perGrams(plo))
+	for j := range s.names {
+		if plo[j].equipment == phi[j].equipment {
+			continue
+		}
+		a, b, pa, pb := lo, hi, plo, phi
+		for b-a > CrossoverPrecision {
+			mid := (a + b) / 2
+			pm, err := s.at(mid)
+			if err != nil {
+				return err
+			}
+			if pm[j].equipment == pa[j].equipment {
+				a, pa = mid, pm
+			} else {
+				b, pb = mid, pm
+			}
+		}
+		for _, side := range []struct {
+			m float64
+			p []point
+		}{{a, pa}, {b, pb}} {
+			if cheapest(perGrams(side.p)) == w {
+				continue
+			}
+			if err := s.bracket(lo, side.m, plo, side.p); err != nil {
+				return err
+			}
+			return s.bracket(side.m, hi, side.p, phi)
+		}
+	}
 	return nil
 }
 

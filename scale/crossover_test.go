@@ -18,9 +18,13 @@ import (
 // distillation becomes feasible, though the two curves never cross.
 //
 // solid-with-distillation: the solid demo with a 25-stage distillation.
-// Distillation is cheapest from a few grams to about 1.2 kg; the
+// Distillation is cheapest from a few grams to about 1.2 kg, and again
+// from about 2.5 kg to the step from the 5 L to the 10 L still at 3 kg
+// (the crystallization's hours at reactor scale make it dearer there); the
 // chromatography/crystallization crossing near 23 g lies where both are
-// dearer than distillation, so it is a pairwise crossing only.
+// dearer than distillation, so it is a pairwise crossing only. The window
+// at 2.5–3 kg lies between two masses of the coarse grid: it is found by
+// looking on both sides of the distillation's equipment step.
 //
 // Expected values: the order of cheapest methods and the masses to within
 // a factor of about 1.5 come from coarse sweeps of the models (30 masses,
@@ -42,6 +46,8 @@ func TestDecisionCrossoverCases(t *testing.T) {
 		{"testdata/solid-with-distillation.yaml", []change{
 			{"chromatography", "distillation", "", 0.002, 0.005},
 			{"distillation", "crystallization", "", 0.8, 1.6},
+			{"crystallization", "distillation", "", 2, 3},
+			{"distillation", "crystallization", Step, 2.5, 3.5},
 		}, "crystallization"},
 	} {
 		t.Run(c.file, func(t *testing.T) {

@@ -39,13 +39,11 @@ const (
 	KeyHeatAttended    = "crystallization.heating_attended_share"
 	KeyCoolAttended    = "crystallization.cooling_attended_share"
 	KeyFilterSetup     = "crystallization.filtration_setup_time"
-	KeyFilterFlux      = "crystallization.filtration_flux"
 	KeyCakeDepth       = "crystallization.cake_depth"
 	KeyMinFilterArea   = "crystallization.min_filter_area"
 	KeyFilterAttended  = "crystallization.filtration_attended_share"
 	KeyCheckTime       = "crystallization.purity_check_time"
 	KeyCleanTime       = "crystallization.cleaning_time"
-	KeyDryingTime      = "crystallization.drying_time"
 	KeyDryAttended     = "crystallization.drying_attended_share"
 	KeyDryWarmup       = "crystallization.drying_warmup"
 	KeyHeaterEff       = "crystallization.heater_efficiency"
@@ -95,7 +93,7 @@ func Defaults() []source.Coefficient {
 		c(KeyCrystalDensity, "density of the organic crystals", 1300, units.Density, "g/mL", "organic crystals about 1.1–1.5 g/mL (benzoic acid 1.27 g/mL, CRC Handbook)", source.FromMemory),
 		c(KeyCakePorosity, "porosity of the filter cake", 0.4, units.None, "", "filter cakes of crystalline solids about 0.3–0.5", source.FromMemory),
 		c(KeyCakeSaturation, "share of the cake's pores still holding liquid after suction", 0.5, units.None, "", "wet cakes after suction typically hold 10–30 % solvent by mass", source.CommonPractice),
-		c(KeyInclusion, "mother liquor occluded in the crystals, per mass of crystals", 0.005, units.None, "", "well-grown crystals occlude roughly 0.1–1 % of their mass as mother liquor", source.CommonPractice),
+		c(KeyInclusion, "mother liquor occluded in the crystals, per mass of crystals, at the reference cooling rate", 0.005, units.None, "", "well-grown crystals occlude roughly 0.1–1 % of their mass as mother liquor", source.CommonPractice),
 		c(KeyMaxPasses, "most recrystallizations run on one batch", 4, units.None, "", "more than three or four passes are rarely worth running; another method or a better solvent pays", source.CommonPractice),
 		c(KeyExtrapolation, "distance outside the measured solubility range that draws a warning", 10, units.Temperature, "K", "ln S curves in 1/T (large heat capacity of solution), so a van 't Hoff line is a guess beyond a few kelvin", source.CommonPractice),
 		c(KeyDilution, "solvent per product above which the crystallization is called dilute", 50e-3, units.SpecificVolume, "mL/g", "beyond about 50 volumes (mL per g) a crystallization is impractically dilute", source.CommonPractice),
@@ -110,19 +108,17 @@ func Defaults() []source.Coefficient {
 		c(KeyAreaReactor, "wetted area over volume^(2/3), reactor", AreaFactorCylinder, units.None, "", "a cylinder with height equal to diameter, wall and bottom: A = (5π/4)(4/π)^(2/3)·V^(2/3)", source.Derived),
 		c(KeyFlaskFill, "largest share of a flask's volume a batch fills", 0.5, units.None, "", "a heated round-bottom flask no more than half full", source.CommonPractice),
 		c(KeyReactorFill, "largest share of a reactor's volume a batch fills", 0.8, units.None, "", "working volume about 80 % of the nominal volume", source.CommonPractice),
-		c(KeySetupTime, "time to set up and charge a vessel", 15*minute, units.Time, "min", "", source.CommonPractice),
+		c(KeySetupTime, "time to set up a vessel before charging (the charge itself is by volume and mass)", 15*minute, units.Time, "min", "", source.CommonPractice),
 		c(KeyHotHold, "hold at the dissolution temperature", 15*minute, units.Time, "min", "until all solid has dissolved", source.CommonPractice),
 		c(KeyAging, "hold (ageing) at the isolation temperature", 60*minute, units.Time, "min", "one to two hours to let the crystals grow out", source.CommonPractice),
 		c(KeyHeatAttended, "share of heating time a person attends", 0.25, units.None, "", "", source.CommonPractice),
 		c(KeyCoolAttended, "share of cooling and ageing time a person attends", 0.1, units.None, "", "", source.CommonPractice),
 		c(KeyFilterSetup, "time to set up a filter and transfer the slurry", 10*minute, units.Time, "min", "", source.CommonPractice),
-		c(KeyFilterFlux, "filtrate flux through the cake under vacuum", 1.0/h, units.Velocity, "L/(m^2 h)", "crystalline organic cakes under vacuum pass roughly 0.3–3 m³ per m² per hour", source.CommonPractice),
-		c(KeyCakeDepth, "filter cake depth", 0.03, units.Length, "cm", "a few centimetres on a Büchner funnel or Nutsche filter", source.CommonPractice),
+		c(KeyCakeDepth, "filter cake depth a funnel is chosen for (flask scale)", 0.03, units.Length, "cm", "a few centimetres on a Büchner funnel", source.CommonPractice),
 		c(KeyMinFilterArea, "smallest filter used", 20e-4, units.Area, "cm^2", "a 5 cm Büchner or Hirsch funnel", source.CommonPractice),
 		c(KeyFilterAttended, "share of filtration and washing time a person attends", 0.75, units.None, "", "", source.CommonPractice),
 		c(KeyCheckTime, "purity check after each pass (HPLC or melting point)", 30*minute, units.Time, "min", "", source.CommonPractice),
-		c(KeyCleanTime, "time to empty and clean a vessel", 20*minute, units.Time, "min", "", source.CommonPractice),
-		c(KeyDryingTime, "drying time of a batch (vacuum oven or filter-dryer)", 12*h, units.Time, "h", "overnight", source.CommonPractice),
+		c(KeyCleanTime, "time to empty and clean a vessel, beside the part that grows with its wall area", 20*minute, units.Time, "min", "", source.CommonPractice),
 		c(KeyDryAttended, "share of drying time a person attends", 0.05, units.None, "", "", source.CommonPractice),
 		c(KeyDryWarmup, "warm-up of the evaporated solvent from room temperature in the dryer", 20, units.Temperature, "K", "a 40 °C oven from 20 °C", source.CommonPractice),
 		c(KeyHeaterEff, "share of heater electricity that reaches the batch", 0.7, units.None, "", "jacket, bath and mantle losses", source.CommonPractice),
@@ -133,6 +129,7 @@ func Defaults() []source.Coefficient {
 		c(KeyScreeningTime, "one-time solvent screening and development", 8*h, units.Time, "h", "a solvent screen in a dozen tubes and one or two trial crystallizations: about a day", source.CommonPractice),
 		c(KeyScreeningMass, "one-time crude used in screening", 2e-3, units.Mass, "g", "a dozen tubes of 50–100 mg and a gram-scale trial", source.CommonPractice),
 	}
+	out = append(out, scaleDefaults()...)
 	for i, v := range DefaultFlasksM3 {
 		out = append(out, c(KeyFlask(i+1), fmt.Sprintf("flask size %d of %d", i+1, len(DefaultFlasksM3)), v, units.Volume, "mL", "round-bottom flasks from 25 mL to 5 L", source.CommonPractice))
 	}

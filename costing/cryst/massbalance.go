@@ -38,6 +38,7 @@ type Pass struct {
 	Porosity       float64 // void fraction of the filter cake
 	Saturation     float64 // share of the cake's pores holding liquid after suction
 	Inclusion      float64 // kg of mother liquor occluded per kg of crystals
+	Distribution   float64 // logarithmic distribution coefficient λ of the dissolved impurity (0 rejected, 1 no separation)
 
 	WashCakeVolumes float64 // wash volume in cake volumes (used when WashFraction is 0)
 	WashFraction    float64 // wash volume as a fraction of the solvent volume (used when > 0)
@@ -65,6 +66,8 @@ type PassResult struct {
 	CoCrystallised float64 // impurity above its solubility at the isolation temperature, in the cake
 	Undissolved    float64 // impurity above its solubility at the dissolution temperature
 	Included       float64 // impurity carried into the crystals by occluded liquor
+	Incorporated   float64 // impurity built into the crystals by the distribution law
+	Held           float64 // all impurity inside the crystals (not purged, co-crystallised, taken up or occluded), other impurities included
 	WashDissolved  float64 // product dissolved by the wash
 }
 
@@ -94,7 +97,15 @@ type PassResult struct {
 // Impurity by solubility: I_liq = min(I_in, V·S_imp,cold) stays dissolved;
 // the rest, I_solid, co-crystallises (independent solubilities, simple
 // eutectic behaviour: no solid solution and no mutual effect on
-// solubility). Occluded liquor brings I_inc = φ·P_c·I_liq/(V·ρ_L) into the
+// solubility). Of the dissolved impurity, the crystals take up
+//
+//	I_ss = I_liq · (1 − f^λ),  f = V·S_cold / P_in
+//
+// by the logarithmic distribution law of Doerner and Hoskins, ln(I₀/I) =
+// λ·ln(P₀/P) (IUPAC Gold Book, "laws of distribution in precipitation",
+// doi:10.1351/goldbook.L03487, confirmed): f is the share of the product
+// left in solution, λ = 0 rejects the impurity and λ = 1 leaves its ratio
+// to the product unchanged. Occluded liquor then brings I_inc = φ·P_c·I_liq/(V·ρ_L) into the
 // crystals (φ the inclusion factor). The remaining dissolved impurity is
 // split by volume between filtrate (V − V_ret), wash filtrate
 // ((1 − r_w)·V_ret) and cake (r_w·V_ret). Other impurities follow the same
@@ -134,8 +145,14 @@ func (p Pass) Run(in Feed) PassResult {
 		r.Undissolved = math.Max(0, in.Impurity-V*p.ImpHot)
 	}
 
-	// Inclusion: occluded mother liquor, φ·P_c kg, at the liquor's
-	// impurity mass fraction.
+	// Uptake by the distribution law, then inclusion: occluded mother
+	// liquor, φ·P_c kg, at the liquor's impurity mass fraction.
+	if p.Distribution > 0 && iLiq > 0 {
+		f := V * p.SCold / in.Product
+		r.Incorporated = iLiq * (1 - math.Pow(f, p.Distribution))
+		iSolid += r.Incorporated
+		iLiq -= r.Incorporated
+	}
 	liquorMass := V * p.LiquidDensity
 	iInc := math.Min(iLiq, p.Inclusion*pc*iLiq/liquorMass)
 	oInc := math.Min(in.Other, p.Inclusion*pc*in.Other/liquorMass)
@@ -178,6 +195,7 @@ func (p Pass) Run(in Feed) PassResult {
 	r.Liquor = Feed{Product: (V - ret) * p.SCold, Impurity: (V-ret)*ci + purged, Other: (V - ret) * co}
 	disp := (1 - rw) * ret
 	r.Washings = Feed{Product: disp*p.SCold + (W-disp)*cw, Impurity: disp * ci, Other: disp * co}
+	r.Held = iSolid + iInc + oInc
 	r.Out = Feed{
 		Product:  pc - dis + ret*(rw*p.SCold+(1-rw)*cw),
 		Impurity: iSolid + iInc + rw*ret*ci,
@@ -199,6 +217,18 @@ func (r PassResult) MassBalanceError() float64 {
 	check(r.In.Impurity, r.Out.Impurity, r.Liquor.Impurity, r.Washings.Impurity)
 	check(r.In.Other, r.Out.Other, r.Liquor.Other, r.Washings.Other)
 	return e
+}
+
+// Ceiling is the purity of the pass's crystals if the wash left no
+// liquor on them: product against the impurity co-crystallised, taken up
+// by the distribution law and occluded. No wash can do better, so a target
+// above it needs another pass (or cannot be reached when passes stall).
+func (r PassResult) Ceiling() float64 {
+	pc := r.Crystallised
+	if pc <= 0 {
+		return 0
+	}
+	return pc / (pc + r.Held)
 }
 
 // Yield is the share of the product charged that comes out in the crystals.

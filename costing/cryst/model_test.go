@@ -179,7 +179,7 @@ func TestRunBookkeepingCloses(t *testing.T) {
 		if p := figure(t, u, "passes"); p < 2 {
 			t.Errorf("%g kg: %v passes; the case is meant to need several", m, p)
 		}
-		prodWaste, solvWaste := 0.0, 0.0
+		prodWaste, solvWaste, solidWaste := 0.0, 0.0, 0.0
 		for _, w := range u.Waste {
 			if w.Class != usage.NonHalogenated {
 				t.Errorf("ethanol/water waste %s is %s", w.Name, w.Class)
@@ -191,8 +191,15 @@ func TestRunBookkeepingCloses(t *testing.T) {
 				if c.Solvent {
 					s, _ := sc.Solvents.Find(c.Name)
 					solvWaste += c.Kg / s.Density.V
+				} else {
+					solidWaste += c.Kg
 				}
 			}
+		}
+		// Every kilogram of crude leaves as isolated product (with the
+		// impurity it holds) or dissolved in a waste stream (identity).
+		if e := math.Abs(u.CrudeKg-u.IsolatedKg()-solidWaste) / u.CrudeKg; e > 1e-9 {
+			t.Errorf("%g kg: crude balance off by %.3g (isolated %g kg, %g kg of it impurity)", m, e, u.IsolatedKg(), u.ImpurityOutKg)
 		}
 		if e := math.Abs(u.ProductInKg-u.ProductOutKg-prodWaste) / u.ProductInKg; e > 1e-9 {
 			t.Errorf("%g kg: product balance off by %.3g", m, e)

@@ -29,10 +29,17 @@ type Outcome struct {
 // co-crystallises in step with the product and further passes cannot purge
 // it. A pass with no crystals stops it too (NoCrystals).
 func Purify(p Pass, in Feed, target float64, maxPasses int) Outcome {
+	return PurifyWith(func(Feed) Pass { return p }, in, target, maxPasses)
+}
+
+// PurifyWith is Purify with the conditions of each pass set from its feed
+// (the vessel, and with it the cooling rate and the occluded liquor,
+// depend on the amount charged).
+func PurifyWith(setup func(Feed) Pass, in Feed, target float64, maxPasses int) Outcome {
 	out := Outcome{Purity: in.Purity()}
 	feed := in
 	for k := 0; k < maxPasses; k++ {
-		r := p.Run(feed)
+		r := setup(feed).Run(feed)
 		if r.Crystallised <= 0 {
 			out.Stop = NoCrystals
 			return out

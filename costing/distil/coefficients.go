@@ -53,7 +53,7 @@ func Defaults() []source.Coefficient {
 		return source.Coefficient{Key: key, Method: Method, Label: label, SI: si, Dim: dim, Unit: unit, Source: src, Mark: mark}
 	}
 	shr := "Seader, J. D.; Henley, E. J.; Roper, D. K. Separation Process Principles, 3rd ed., Wiley, 2011"
-	return []source.Coefficient{
+	out := []source.Coefficient{
 		c(KeyRefluxMultiple, "reflux ratio as a multiple of the minimum (when the scenario gives none)", 1.5, units.None, "",
 			"the usual design range R/R_min ≈ 1.1–1.5 for continuous columns ("+shr+", ch. 7 and 9); the upper end, as small batch columns are not optimised for energy", source.FromMemory),
 		c(KeyDesignRecovery, "share of the product the design cut aims to recover (sets the design bottoms or distillate for Fenske's N_min)", 0.90, units.None, "%",
@@ -100,11 +100,12 @@ func Defaults() []source.Coefficient {
 		c(KeyEquilibration, "time at total reflux before take-off (with a column)", 30*60, units.Time, "min",
 			"the column is brought to steady state before the first cut", source.CommonPractice),
 		c(KeyCooldown, "time to cool the pot before venting", 30*60, units.Time, "min", "the pot is cooled under vacuum before air is let in", source.CommonPractice),
-		c(KeyCleanup, "time to dismantle and clean the still", 20*60, units.Time, "min", "emptying, rinsing and drying the glassware", source.CommonPractice),
+		c(KeyCleanup, "time to dismantle and clean the still, beside the part that grows with its wall area", 20*60, units.Time, "min", "emptying, rinsing and drying the glassware", source.CommonPractice),
 		c(KeyAnalysisPerCut, "time to analyse one cut (GC or NMR)", 15*60, units.Time, "min", "sampling, running and reading a GC trace or a proton NMR spectrum", source.CommonPractice),
 		c(KeyAttended, "share of the heating and distillation time a person attends", 0.3, units.None, "%",
 			"temperatures, vacuum and cut changes are watched but not continuously", source.CommonPractice),
 		c(KeyRinse, "rinse solvent for still and column (share of the still volume)", 0.1, units.None, "%",
 			"one rinse of about a tenth of the still volume after the campaign", source.CommonPractice),
 	}
+	return append(out, scaleDefaults()...)
 }

@@ -22,12 +22,14 @@ type Metrics struct {
 	InputKg          float64 // crude + materials − recycled, water counted
 
 	ProductKg    float64  // purified product recovered
+	IsolatedKg   float64  // isolated mass: the product with the impurity it contains (the denominator of E, PMI and SI)
+	ImpurityKg   float64  // impurity isolated with the product (IsolatedKg − ProductKg)
 	RecycledKg   float64  // credited recovered material (solvent) subtracted from the inputs
 	WaterInKg    float64  // water among the net inputs
 	WaterWasteKg float64  // water among the waste streams
 	SolventKg    float64  // organic solvent used, gross (before recycling)
-	NotCounted   []string // material demands not in mass or volume, left out of the inputs (e.g. TLC plates by count)
-	BalanceGapKg float64  // InputKg − ProductKg − WasteKg: zero when mass closes
+	NotCounted   []string // inputs left out: material demands not in mass or volume (items by count) and one-time material
+	BalanceGapKg float64  // InputKg − IsolatedKg − WasteKg: zero when mass closes
 }
 
 // ErrMetrics is the sentinel every Compute error unwraps to.
@@ -51,25 +53,29 @@ func (e *MetricsError) Unwrap() error { return ErrMetrics }
 //
 // E-factor (Sheldon, Chem. Ind. 1992; Green Chem. 2007, 9, 1273):
 //
-//	E = m_waste / m_product
+//	E = m_waste / m_isolated
 //
 // Process mass intensity (Jiménez-González et al., Org. Process Res. Dev.
 // 2011, 15, 912), here for the purification step alone:
 //
-//	PMI = (m_crude + Σ m_material − m_recycled) / m_product
+//	PMI = (m_crude + Σ m_material − m_recycled) / m_isolated
 //
 // Solvent intensity (organic solvent, water excluded; the GSK metric of
 // Constable et al., Green Chem. 2002, 4, 521, from memory):
 //
-//	SI = (m_solvent − m_solvent,recycled) / m_product
+//	SI = (m_solvent − m_solvent,recycled) / m_isolated
 //
-// with m_product = u.ProductOutKg (kg), m_waste = the mass of u.Waste (kg),
+// with m_isolated = u.IsolatedKg() (kg): the product as isolated, counted
+// with the impurity it contains (u.ImpurityOutKg), so that the impurity
+// left in the crystals or the heart cut is neither lost from the balance
+// nor called waste. m_waste = the mass of u.Waste (kg),
 // m_crude = u.CrudeKg (kg). Σ m_material sums the demands of the
 // "materials" group: mass demands as they are, volume demands times the
 // solvent density from the book (the item must be a solvent in the book).
-// Labour, energy, disposal, product-lost and one-time demands are not
-// material inputs and are left out; count demands (TLC plates) have no mass
-// here and are listed in NotCounted. Recovered solvent credited in the
+// Labour, energy, disposal and product-lost demands are not material
+// inputs and are left out; count demands (items by number) have no mass
+// here, and one-time material (crude used once in screening) is not part
+// of a batch: both are listed in NotCounted. Recovered solvent credited in the
 // "credit" group is the recycled mass: the convention here is that it is
 // subtracted from the inputs (it leaves as reusable material, neither
 // product nor waste), whatever the regulations say about recycled solvent.
@@ -81,7 +87,7 @@ func (e *MetricsError) Unwrap() error { return ErrMetrics }
 // non-product output is waste (no loss to air, no recycle other than the
 // credited one), mass closes,
 //
-//	m_crude + Σ m_material − m_recycled = m_product + m_waste,
+//	m_crude + Σ m_material − m_recycled = m_isolated + m_waste,
 //
 // and then PMI = E + 1 (and, water in equal to water out, PMI_no water =
 // E_no water + 1). BalanceGapKg shows how far a usage is from closing
@@ -102,7 +108,12 @@ func Compute(u usage.Usage, book *solvent.Book) (Metrics, error) {
 	if !(u.CrudeKg >= 0) || math.IsInf(u.CrudeKg, 0) {
 		return fail("crude mass", "%g kg; want a finite mass of 0 kg or more", u.CrudeKg)
 	}
+	if !(u.ImpurityOutKg >= 0) || math.IsInf(u.ImpurityOutKg, 0) {
+		return fail("impurity isolated with the product", "%g kg; want a finite mass of 0 kg or more", u.ImpurityOutKg)
+	}
 	m.ProductKg = u.ProductOutKg
+	m.ImpurityKg = u.ImpurityOutKg
+	m.IsolatedKg = u.IsolatedKg()
 	in := u.CrudeKg
 	var halKg, orgKg, solventRec float64
 
@@ -152,6 +163,10 @@ func Compute(u usage.Usage, book *solvent.Book) (Metrics, error) {
 					}
 				}
 			}
+		case usage.OneTime:
+			if d.Dim == units.Mass && d.Qty > 0 {
+				m.NotCounted = append(m.NotCounted, fmt.Sprintf("%s (%s, once per campaign, not per batch)", d.Item, d.Label))
+			}
 		case usage.Credit:
 			kg, s, isSolvent, counted, err := massOf(d)
 			if err != nil {
@@ -189,7 +204,7 @@ func Compute(u usage.Usage, book *solvent.Book) (Metrics, error) {
 		}
 	}
 
-	p := m.ProductKg
+	p := m.IsolatedKg
 	m.EFactor = m.WasteKg / p
 	m.EFactorNoWater = (m.WasteKg - m.WaterWasteKg) / p
 	m.PMI = m.InputKg / p
@@ -198,7 +213,7 @@ func Compute(u usage.Usage, book *solvent.Book) (Metrics, error) {
 	if orgKg > 0 {
 		m.HalogenatedShare = halKg / orgKg
 	}
-	m.BalanceGapKg = m.InputKg - m.ProductKg - m.WasteKg
+	m.BalanceGapKg = m.InputKg - m.IsolatedKg - m.WasteKg
 	return m, nil
 }
 

@@ -254,3 +254,47 @@ func TestComputeErrors(t *testing.T) {
 		}
 	}
 }
+
+// TestIsolatedImpurity: the impurity left in the isolated product is
+// counted with the product (the denominator), not lost from the balance.
+// Issue case, the liquid demo at 20 g: without it the gap was exactly
+// (1 − purity)/purity of the product. Hand case: 1 kg of crude at 80 %
+// recrystallised from 10 L of ethanol (0.789 g/mL, from memory) gives
+// 0.72 kg of product with 3.6 g of impurity (99.5 %); the other 0.2764 kg
+// of solids and the ethanol are in the mother liquor.
+func TestIsolatedImpurity(t *testing.T) {
+	b := solvent.Builtin()
+	et := rho(t, b, "ethanol")
+	u := usage.New("crystallization", 1, 0.8)
+	u.ProductOutKg, u.ImpurityOutKg = 0.72, 0.0036
+	u.AddDemand("ethanol", "solvent", usage.Materials, 10e-3, units.Volume)
+	u.AddDemand(usage.ItemProduct, "crude used in screening", usage.OneTime, 0.002, units.Mass)
+	u.Waste = []usage.Stream{{Name: "mother liquor", Class: usage.NonHalogenated, Components: []usage.Component{
+		{Name: "ethanol", Kg: 10 * et, Solvent: true}, {Name: "product (dissolved)", Kg: 0.08}, {Name: "impurity (dissolved)", Kg: 0.1964}}}}
+	m, err := Compute(u, b)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if e := relErr(m.IsolatedKg, 0.7236); e > 1e-12 || m.ImpurityKg != 0.0036 || m.ProductKg != 0.72 {
+		t.Errorf("isolated %g, impurity %g, product %g; want 0.7236, 0.0036, 0.72", m.IsolatedKg, m.ImpurityKg, m.ProductKg)
+	}
+	if math.Abs(m.BalanceGapKg) > 1e-12 {
+		t.Errorf("gap %g kg, want 0", m.BalanceGapKg)
+	}
+	if e := relErr(m.PMI, m.EFactor+1); e > 1e-12 {
+		t.Errorf("PMI %g, E + 1 = %g", m.PMI, m.EFactor+1)
+	}
+	// PMI = (1 + 7.89)/0.7236 = 12.286 (hand computation).
+	if e := relErr(m.PMI, (1+10*et)/0.7236); e > 1e-12 {
+		t.Errorf("PMI %g, want %g", m.PMI, (1+10*et)/0.7236)
+	}
+	// The screening crude is a one-time input, listed as not counted.
+	if len(m.NotCounted) != 1 || !strings.Contains(m.NotCounted[0], "once per campaign") {
+		t.Errorf("not counted %q, want the screening crude", m.NotCounted)
+	}
+	// A negative impurity is refused, naming the field.
+	u.ImpurityOutKg = -1
+	if _, err := Compute(u, b); err == nil || !strings.Contains(err.Error(), "impurity isolated with the product") {
+		t.Errorf("negative impurity: %v", err)
+	}
+}

@@ -30,7 +30,8 @@ import (
 //	  impurity:
 //	    solubility: {"0 C": "8 g/L", "75 C": "60 g/L"}   # same forms as product
 //	    # or purge_factor: 0.8
-//	    fraction: 0.10                 # of the crude; default all impurities
+//	    distribution_coefficient: 0.05 # measured uptake by the crystals, 0–1
+//	    fraction: 0.10                 # of the crude; default crude.nearest_impurity, else all impurities
 //	  dissolve_at: "75 C"
 //	  isolate_at: "0 C"
 //	  target_purity: 0.995
@@ -73,6 +74,7 @@ type rawCrystSolute struct {
 	ActivityFactor   Text              `yaml:"activity_factor"`
 	Fraction         Text              `yaml:"fraction"`
 	PurgeFactor      Text              `yaml:"purge_factor"`
+	Distribution     Text              `yaml:"distribution_coefficient"`
 	Extra            map[string]rawAny `yaml:",inline"`
 }
 
@@ -109,6 +111,7 @@ type Crystallization struct {
 	ImpurityByPurge  bool        // the impurity is described by PurgeFactor, not by its solubility
 	PurgeFactor      float64     // fraction of the impurity removed per pass, 0–1
 	ImpurityFraction float64     // mass fraction of the crude that is this impurity
+	Distribution     *float64    // measured logarithmic distribution coefficient λ of the impurity, 0–1; nil for the default
 
 	DissolveK    float64 // dissolution temperature, K
 	IsolateK     float64 // isolation (filtration) temperature, K
@@ -126,7 +129,7 @@ type Crystallization struct {
 	ReactorsM3 []float64 // available jacketed reactor volumes, m³, ascending
 	FillLimit  *float64  // largest share of a vessel's volume the batch may fill
 
-	impurityWritten bool // impurity.fraction was written (else it follows purity)
+	impurityFollows bool // impurity.fraction was not written: it follows crude.nearest_impurity or 1 − purity
 }
 
 // CrystSolute is the product or the impurity in the crystallization liquid.
@@ -162,13 +165,42 @@ func (c *Crystallization) Solvents() []string {
 // 99.97 °C by IAPWS-IF97).
 const boilingTolerance = 0.5
 
-func (c *collector) crystallization(r *rawCryst, s *Scenario, root *yaml.Node, echo func(string, Text, string)) *Crystallization {
-	const sec = "crystallization"
-	cr := &Crystallization{}
-	c.unknown(r.Extra, sec, rawCryst{})
-	line := keyLine(root, sec)
+// crystRead is the reading of one crystallization section: the collector
+// of problems, the raw section, the scenario read so far and what is built.
+type crystRead struct {
+	c    *collector
+	r    *rawCryst
+	s    *Scenario
+	root *yaml.Node
+	echo func(string, Text, string)
+	line int
+	cr   *Crystallization
+}
 
-	// The liquid.
+const crystSec = "crystallization"
+
+func (c *collector) crystallization(r *rawCryst, s *Scenario, root *yaml.Node, echo func(string, Text, string)) *Crystallization {
+	c.unknown(r.Extra, crystSec, rawCryst{})
+	x := &crystRead{c: c, r: r, s: s, root: root, echo: echo, line: keyLine(root, crystSec), cr: &Crystallization{}}
+	x.liquid()
+	x.temperatures()
+	x.product()
+	x.impurity()
+	x.targetPurity()
+	x.options()
+	x.vessels()
+	return x.cr
+}
+
+// notGiven records a field left to the model's default.
+func (x *crystRead) notGiven(name, meaning string) {
+	x.s.Inputs = append(x.s.Inputs, Input{Field: crystSec + "." + name, Written: "(not given)", Meaning: meaning})
+}
+
+// liquid reads the solvent or solvent/anti-solvent pair and the liquid's properties.
+func (x *crystRead) liquid() {
+	const sec = crystSec
+	c, r, s, echo, line, cr := x.c, x.r, x.s, x.echo, x.line, x.cr
 	var liquid []solvent.Solvent
 	if c.required(r.Solvent, line, sec+".solvent", "the crystallization solvent, e.g. ethanol (`sepcost solvents` lists them)") {
 		if sv, ok := s.Solvents.Find(r.Solvent.Value); ok {
@@ -219,7 +251,12 @@ func (c *collector) crystallization(r *rawCryst, s *Scenario, root *yaml.Node, e
 		echo(sec+".solvent", r.Solvent, fmt.Sprintf("%s; the liquid boils at about %.1f °C", cr.Mix, cr.BoilingK-273.15))
 	}
 
-	// Temperatures.
+}
+
+// temperatures reads the dissolution and isolation temperatures.
+func (x *crystRead) temperatures() {
+	const sec = crystSec
+	c, r, echo, line, cr := x.c, x.r, x.echo, x.line, x.cr
 	temp := func(t Text, name, what string) float64 {
 		field := sec + "." + name
 		if !c.required(t, line, field, what) {
@@ -249,7 +286,12 @@ func (c *collector) crystallization(r *rawCryst, s *Scenario, root *yaml.Node, e
 		echo(sec+".isolate_at", r.IsolateAt, fmt.Sprintf("%.2f K, filter at %.1f °C", cr.IsolateK, cr.IsolateK-273.15))
 	}
 
-	// Product and impurity.
+}
+
+// product reads the product's solubility and checks it across the two temperatures.
+func (x *crystRead) product() {
+	const sec = crystSec
+	c, r, s, root, echo, line, cr := x.c, x.r, x.s, x.root, x.echo, x.line, x.cr
 	if r.Product == nil {
 		c.add(line, sec+".product", `missing; give the product's solubility at two or more temperatures, e.g. solubility: {"0 C": "15 g/L", "75 C": "160 g/L"}, or its melting_point, enthalpy_of_fusion and molar_mass`)
 	} else {
@@ -257,6 +299,9 @@ func (c *collector) crystallization(r *rawCryst, s *Scenario, root *yaml.Node, e
 		pl := keyLine(root, sec, "product")
 		if r.Product.Fraction.Set {
 			c.add(r.Product.Fraction.Line, field+".fraction", "only the impurity takes a fraction; the product's share of the crude is crude.purity")
+		}
+		if r.Product.Distribution.Set {
+			c.add(r.Product.Distribution.Line, field+".distribution_coefficient", "only the impurity takes a distribution_coefficient (its uptake by the product's crystals)")
 		}
 		if r.Product.PurgeFactor.Set {
 			c.add(r.Product.PurgeFactor.Line, field+".purge_factor", "only the impurity takes a purge_factor; describe the product by its solubility or melting data")
@@ -281,6 +326,12 @@ func (c *collector) crystallization(r *rawCryst, s *Scenario, root *yaml.Node, e
 			}
 		}
 	}
+}
+
+// impurity reads the impurity: its solubility or purge factor, its uptake by the crystals and its share of the crude.
+func (x *crystRead) impurity() {
+	const sec = crystSec
+	c, r, s, root, echo, line, cr := x.c, x.r, x.s, x.root, x.echo, x.line, x.cr
 	if r.Impurity == nil {
 		c.add(line, sec+".impurity", `missing; give the impurity's solubility (same forms as the product) or a purge_factor, the fraction of it removed per pass, e.g. purge_factor: 0.8`)
 	} else {
@@ -301,9 +352,19 @@ func (c *collector) crystallization(r *rawCryst, s *Scenario, root *yaml.Node, e
 		} else if !defined {
 			c.add(il, field, `give the impurity's solubility (same forms as the product) or a purge_factor, the fraction of it removed per pass, e.g. purge_factor: 0.8`)
 		}
+		if t := r.Impurity.Distribution; t.Set {
+			const what = `the impurity's logarithmic distribution coefficient between crystals and liquor, from 0 (rejected) to 1 (no separation), e.g. 0.05`
+			if r.Impurity.PurgeFactor.Set {
+				c.add(t.Line, field+".distribution_coefficient", "a purge_factor already says how much of the impurity stays; give one or the other")
+			} else if v, ok := c.fraction(t, field+".distribution_coefficient", 0, 1, what); ok {
+				cr.Distribution = &v
+				echo(field+".distribution_coefficient", t, fmt.Sprintf("λ = %.3g: ln(I₀/I) = λ·ln(P₀/P) in the liquor", v))
+			}
+		} else if !r.Impurity.PurgeFactor.Set {
+			s.Inputs = append(s.Inputs, Input{Field: field + ".distribution_coefficient", Written: "(not given)", Meaning: "the model default (crystallization.impurity_distribution), an assumption"})
+		}
 		rest := 1 - s.Purity
 		if r.Impurity.Fraction.Set {
-			cr.impurityWritten = true
 			what := fmt.Sprintf("the mass fraction of the crude that is this impurity, above 0 and at most 1 − purity (%.3g)", rest)
 			if v, ok := c.fraction(r.Impurity.Fraction, field+".fraction", 0, 1, what); ok {
 				if v <= 0 || (s.Purity > 0 && v > rest+1e-9) {
@@ -313,13 +374,21 @@ func (c *collector) crystallization(r *rawCryst, s *Scenario, root *yaml.Node, e
 					echo(field+".fraction", r.Impurity.Fraction, fmt.Sprintf("%.3g %% of the crude; other impurities stay in the mother liquor", v*100))
 				}
 			}
+		} else if s.NearestGiven {
+			cr.ImpurityFraction, cr.impurityFollows = s.NearestImpurity, true
+			s.Inputs = append(s.Inputs, Input{Field: field + ".fraction", Written: "(not given)", Meaning: fmt.Sprintf("crude.nearest_impurity, %.3g %% of the crude; other impurities stay in the mother liquor", s.NearestImpurity*100)})
 		} else if s.Purity > 0 {
-			cr.ImpurityFraction = rest
-			s.Inputs = append(s.Inputs, Input{Field: field + ".fraction", Written: "(not given)", Meaning: fmt.Sprintf("all impurities (%.3g %%) behave like this one: the cautious case", rest*100)})
+			cr.ImpurityFraction, cr.impurityFollows = rest, true
+			s.Inputs = append(s.Inputs, Input{Field: field + ".fraction", Written: "(not given)", Meaning: fmt.Sprintf("all impurities (%.3g %%) behave like this one: the cautious case (crude.nearest_impurity not given either)", rest*100)})
 		}
 	}
 
-	// Target purity.
+}
+
+// targetPurity reads the wanted purity.
+func (x *crystRead) targetPurity() {
+	const sec = crystSec
+	c, r, s, echo, line, cr := x.c, x.r, x.s, x.echo, x.line, x.cr
 	const purityWhat = `the wanted mass fraction of product in the dried crystals, above the crude's purity and at most 1, e.g. 0.995 or "99.5 %"`
 	if c.required(r.TargetPurity, line, sec+".target_purity", purityWhat) {
 		if v, ok := c.fraction(r.TargetPurity, sec+".target_purity", 0, 1, purityWhat); ok {
@@ -332,7 +401,12 @@ func (c *collector) crystallization(r *rawCryst, s *Scenario, root *yaml.Node, e
 		}
 	}
 
-	// Optional settings.
+}
+
+// options reads the optional procedure: excess solvent, wash, second crop and development effort.
+func (x *crystRead) options() {
+	const sec = crystSec
+	c, r, s, root, echo, cr := x.c, x.r, x.s, x.root, x.echo, x.cr
 	opt := func(t Text, name string, lo, hi float64, what, meaning string) *float64 {
 		field := sec + "." + name
 		if !t.Set {
@@ -345,9 +419,7 @@ func (c *collector) crystallization(r *rawCryst, s *Scenario, root *yaml.Node, e
 		echo(field, t, fmt.Sprintf(meaning, v*100))
 		return &v
 	}
-	notGiven := func(name, meaning string) {
-		s.Inputs = append(s.Inputs, Input{Field: sec + "." + name, Written: "(not given)", Meaning: meaning})
-	}
+	notGiven := x.notGiven
 	cr.Excess = opt(r.Excess, "excess_solvent", 0, 3, `the solvent above the saturation volume at dissolve_at, a fraction from 0 to 3, e.g. 0.1 or "10 %"`, "%.3g %% solvent above the saturation volume")
 	if cr.Excess == nil && !r.Excess.Set {
 		notGiven("excess_solvent", "the model default (crystallization.excess_solvent)")
@@ -433,7 +505,12 @@ func (c *collector) crystallization(r *rawCryst, s *Scenario, root *yaml.Node, e
 	cr.ScreeningKg = nonNeg(r.ScreeningMaterial, "screening_material", units.Mass, `the crude used once in screening, e.g. "2 g"`,
 		func(v float64) string { return FormatMass(v) + " of crude used in screening, once" })
 
-	// Vessels.
+}
+
+// vessels reads the site's vessels.
+func (x *crystRead) vessels() {
+	const sec = crystSec
+	c, r, s, echo, cr := x.c, x.r, x.s, x.echo, x.cr
 	if v := r.Vessels; v != nil {
 		field := sec + ".vessels"
 		c.unknown(v.Extra, field, rawCrystVessels{})
@@ -469,9 +546,8 @@ func (c *collector) crystallization(r *rawCryst, s *Scenario, root *yaml.Node, e
 			}
 		}
 	} else {
-		notGiven("vessels", "the model's default flasks and jacketed reactors (crystallization.flask_* and reactor_*)")
+		x.notGiven("vessels", "the model's default flasks and jacketed reactors (crystallization.flask_* and reactor_*)")
 	}
-	return cr
 }
 
 // crystSolute reads a product or impurity description. It returns the

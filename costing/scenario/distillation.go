@@ -215,6 +215,17 @@ func (c *collector) distillation(r *rawDistil, s *Scenario, root *yaml.Node, ech
 		}
 	}
 
+	c.distillationEquipment(r, d, s, root, echo)
+	if len(c.list) > n {
+		return nil
+	}
+	return d
+}
+
+// distillationEquipment reads the column, reflux, azeotrope, stills and
+// rinse solvent of a distillation section into d.
+func (c *collector) distillationEquipment(r *rawDistil, d *Distillation, s *Scenario, root *yaml.Node, echo func(string, Text, string)) {
+	const sec = "distillation"
 	// Column and reflux.
 	if r.ColumnStages.Set {
 		v, err := strconv.ParseFloat(r.ColumnStages.Value, 64)
@@ -317,11 +328,6 @@ func (c *collector) distillation(r *rawDistil, s *Scenario, root *yaml.Node, ech
 	} else {
 		s.Inputs = append(s.Inputs, Input{Field: sec + ".rinse_solvent", Written: "(not given)", Meaning: DefaultRinseSolvent + " rinses the still and column"})
 	}
-
-	if len(c.list) > n {
-		return nil
-	}
-	return d
 }
 
 // compound reads the product or the key impurity into out. It reports
@@ -389,37 +395,7 @@ func (c *collector) compound(r *rawCompound, out *Compound, field string, line, 
 
 	// Antoine constants, checked as package solvent would check them.
 	if a := r.Antoine; a != nil {
-		af := field + ".antoine"
-		c.unknown(a.Extra, af, rawAntoine{})
-		num := func(t Text, name string) float64 {
-			if !c.required(t, line, af+"."+name, "the Antoine constant as a plain number (log10(P/bar) = A − B/(T/K + C))") {
-				return math.NaN()
-			}
-			v, err := strconv.ParseFloat(t.Value, 64)
-			if err != nil || math.IsNaN(v) || math.IsInf(v, 0) {
-				c.add(t.Line, af+"."+name, "%q: write the Antoine constant as a plain number (log10(P/bar) = A − B/(T/K + C), T in K)", t.Value)
-				return math.NaN()
-			}
-			return v
-		}
-		ant := solvent.Antoine{A: num(a.A, "a"), B: num(a.B, "b"), C: num(a.C, "c"), Source: src, Mark: source.Override}
-		okT := c.required(a.Tmin, line, af+".t_min", `the lowest temperature of the constants' valid range, e.g. "50 C"`)
-		okT = c.required(a.Tmax, line, af+".t_max", `the highest temperature of the constants' valid range, e.g. "180 C"`) && okT
-		if okT {
-			var ok1, ok2 bool
-			ant.Tmin, ok1 = c.quantity(a.Tmin, af+".t_min", units.Temperature)
-			ant.Tmax, ok2 = c.quantity(a.Tmax, af+".t_max", units.Temperature)
-			if ok1 && ok2 && !(ant.Tmin > 0 && ant.Tmin < ant.Tmax) {
-				c.add(a.Tmax.Line, af+".t_max", "the valid range %s to %s is empty; write t_min below t_max", a.Tmin.Value, a.Tmax.Value)
-			}
-		}
-		if !math.IsNaN(ant.B) && ant.B <= 0 {
-			c.add(a.B.Line, af+".b", "B = %g; want B > 0 (the vapour pressure rises with temperature only for B > 0)", ant.B)
-		}
-		if !math.IsNaN(ant.C) && ant.Tmin > 0 && ant.Tmin+ant.C <= 0 {
-			c.add(a.C.Line, af+".c", "C = %g K puts the pole of the equation (T = −C) at or above t_min; want t_min + C > 0 with T in K (constants for T in °C must be converted: C(K) = C(°C) − 273.15)", ant.C)
-		}
-		sv.Antoine = []solvent.Antoine{ant}
+		sv.Antoine = []solvent.Antoine{c.antoine(a, field+".antoine", line, src)}
 	}
 
 	// Normal boiling point: given, or from the Antoine constants.
@@ -486,6 +462,42 @@ func (c *collector) compound(r *rawCompound, out *Compound, field string, line, 
 		s.Inputs = append(s.Inputs, Input{Field: field + ".halogenated", Written: "(not given)", Meaning: "taken as non-halogenated (waste class)"})
 	}
 	return true
+}
+
+// antoine reads a compound's Antoine constants at field af, checked as
+// package solvent would check them; line is the compound's line for
+// missing fields and src their source.
+func (c *collector) antoine(a *rawAntoine, af string, line int, src string) solvent.Antoine {
+	c.unknown(a.Extra, af, rawAntoine{})
+	num := func(t Text, name string) float64 {
+		if !c.required(t, line, af+"."+name, "the Antoine constant as a plain number (log10(P/bar) = A − B/(T/K + C))") {
+			return math.NaN()
+		}
+		v, err := strconv.ParseFloat(t.Value, 64)
+		if err != nil || math.IsNaN(v) || math.IsInf(v, 0) {
+			c.add(t.Line, af+"."+name, "%q: write the Antoine constant as a plain number (log10(P/bar) = A − B/(T/K + C), T in K)", t.Value)
+			return math.NaN()
+		}
+		return v
+	}
+	ant := solvent.Antoine{A: num(a.A, "a"), B: num(a.B, "b"), C: num(a.C, "c"), Source: src, Mark: source.Override}
+	okT := c.required(a.Tmin, line, af+".t_min", `the lowest temperature of the constants' valid range, e.g. "50 C"`)
+	okT = c.required(a.Tmax, line, af+".t_max", `the highest temperature of the constants' valid range, e.g. "180 C"`) && okT
+	if okT {
+		var ok1, ok2 bool
+		ant.Tmin, ok1 = c.quantity(a.Tmin, af+".t_min", units.Temperature)
+		ant.Tmax, ok2 = c.quantity(a.Tmax, af+".t_max", units.Temperature)
+		if ok1 && ok2 && !(ant.Tmin > 0 && ant.Tmin < ant.Tmax) {
+			c.add(a.Tmax.Line, af+".t_max", "the valid range %s to %s is empty; write t_min below t_max", a.Tmin.Value, a.Tmax.Value)
+		}
+	}
+	if !math.IsNaN(ant.B) && ant.B <= 0 {
+		c.add(a.B.Line, af+".b", "B = %g; want B > 0 (the vapour pressure rises with temperature only for B > 0)", ant.B)
+	}
+	if !math.IsNaN(ant.C) && ant.Tmin > 0 && ant.Tmin+ant.C <= 0 {
+		c.add(a.C.Line, af+".c", "C = %g K puts the pole of the equation (T = −C) at or above t_min; want t_min + C > 0 with T in K (constants for T in °C must be converted: C(K) = C(°C) − 273.15)", ant.C)
+	}
+	return ant
 }
 
 // formatVolume writes a volume in m³ as "250 mL" or "2 L".

@@ -121,7 +121,30 @@ func (s *Scenario) With(vals []float64) *Scenario {
 	for i, m := range s.Measured {
 		m.set(&c, vals[i])
 	}
+	c.follow()
 	return &c
+}
+
+// follow sets the fractions that follow the crude's purity or its nearest
+// impurity where the scenario did not write them (as resolve set them), and
+// keeps every impurity share within 1 − purity.
+func (s *Scenario) follow() {
+	if !s.NearestGiven {
+		s.NearestImpurity = 1 - s.Purity
+	}
+	s.NearestImpurity = math.Min(s.NearestImpurity, 1-s.Purity)
+	if cr := s.Crystallization; cr != nil {
+		if cr.impurityFollows {
+			cr.ImpurityFraction = 1 - s.Purity
+			if s.NearestGiven {
+				cr.ImpurityFraction = s.NearestImpurity
+			}
+		}
+		cr.ImpurityFraction = math.Min(cr.ImpurityFraction, 1-s.Purity)
+	}
+	if d := s.Distillation; d != nil && d.FeedFromCrude {
+		d.FeedPurity = s.Purity
+	}
 }
 
 // Nominal lists the measured values as read, SI, in order.
@@ -133,24 +156,8 @@ func (s *Scenario) Nominal() []float64 {
 	return out
 }
 
-// setPurity sets the crude's purity and the fractions that follow it when
-// the scenario did not write them.
-func setPurity(s *Scenario, v float64) {
-	s.Purity = v
-	if !s.nearestWritten {
-		s.NearestImpurity = 1 - v
-	}
-	if cr := s.Crystallization; cr != nil && !cr.ImpurityByPurge && !cr.impurityWritten {
-		cr.ImpurityFraction = 1 - v
-	}
-	if d := s.Distillation; d != nil && d.FeedFromCrude {
-		d.FeedPurity = v
-	}
-	s.NearestImpurity = math.Min(s.NearestImpurity, 1-v)
-	if cr := s.Crystallization; cr != nil {
-		cr.ImpurityFraction = math.Min(cr.ImpurityFraction, 1-v)
-	}
-}
+// setPurity sets the crude's purity (Scenario.follow moves what follows it).
+func setPurity(s *Scenario, v float64) { s.Purity = v }
 
 // setSolubility returns a setter for measured point i of a crystallization
 // solute's curve (the product when product is true): the point is changed

@@ -92,8 +92,9 @@ func TestScenarioWith(t *testing.T) {
 		}
 	}
 	d := s.With(vals)
-	if d.Purity != 0.80 || math.Abs(d.NearestImpurity-0.20) > 1e-12 || d.Chromatography.ProductRf != 0.25 {
-		t.Errorf("drawn: purity %g nearest %g Rf %g", d.Purity, d.NearestImpurity, d.Chromatography.ProductRf)
+	if d.Purity != 0.80 || math.Abs(d.NearestImpurity-0.20) > 1e-12 || d.Chromatography.ProductRf != 0.25 ||
+		math.Abs(d.Crystallization.ImpurityFraction-0.20) > 1e-12 {
+		t.Errorf("drawn: purity %g nearest %g Rf %g impurity %g", d.Purity, d.NearestImpurity, d.Chromatography.ProductRf, d.Crystallization.ImpurityFraction)
 	}
 	// ln S through (273.15 K, 12) and (348.15 K, 160): at 273.15 K the line
 	// returns 12 g/L exactly (two points, exact fit).

@@ -96,16 +96,15 @@ func resolve(c *collector, raw *rawScenario, root *yaml.Node) *Scenario {
 		}
 	}
 	if raw.Crude.NearestImpurity.Set {
-		s.nearestWritten = true
 		if r, ok := c.fractionRange(raw.Crude.NearestImpurity, "crude.nearest_impurity", 0, 1, `a mass fraction of the crude, above 0 and at most 1 − purity`); ok {
 			v := r.Nominal
 			if r.Lo() <= 0 || (s.Purity > 0 && v > 1-s.Purity+1e-9) {
 				c.add(raw.Crude.NearestImpurity.Line, "crude.nearest_impurity", "%s must be above 0 and at most 1 − purity (%.3g)", raw.Crude.NearestImpurity.Value, 1-s.Purity)
 			}
-			s.NearestImpurity = v
+			s.NearestImpurity, s.NearestGiven = v, true
 			if r.Half > 0 { // no default spread: a share of the crude written exactly follows the purity's draw
 				s.measure("crude.nearest_impurity", raw.Crude.NearestImpurity, "share of the crude running next to the product", "", KindPurity, r, 0, 1,
-					func(s *Scenario, v float64) { s.NearestImpurity = math.Min(v, 1-s.Purity) })
+					func(s *Scenario, v float64) { s.NearestImpurity = v })
 			}
 			echo("crude.nearest_impurity", raw.Crude.NearestImpurity, fmt.Sprintf("%.3g %% of the crude runs next to the product", v*100))
 		}

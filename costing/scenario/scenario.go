@@ -75,6 +75,7 @@ type Scenario struct {
 	TargetKg        float64   // the batch mass the decision is made at
 	Purity          float64   // mass fraction of product in the crude
 	NearestImpurity float64   // mass fraction of the crude that is the nearest-running impurity
+	NearestGiven    bool      // crude.nearest_impurity was written (else NearestImpurity is 1 − Purity)
 	Chromatography  *Chromatography
 	Crystallization *Crystallization // nil when the scenario has no crystallization section
 	Distillation    *Distillation    // nil when the scenario has no distillation section
@@ -84,8 +85,6 @@ type Scenario struct {
 	WasteSector     waste.Sector // EU List of Waste chapter for the waste codes
 	Inputs          []Input      // every field as written and as understood
 	Measured        []Measured   // measured values with the limits they may lie between
-
-	nearestWritten bool // crude.nearest_impurity was written (else it follows purity)
 }
 
 // Input is one field as written and as understood, for the Inputs sheet.

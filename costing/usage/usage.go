@@ -161,14 +161,20 @@ type Usage struct {
 	CrudeKg      float64 // crude mass to purify
 	ProductInKg  float64 // product contained in the crude
 	ProductOutKg float64 // purified product recovered
-	Feasible     bool
-	Reason       string // why not feasible
-	Equipment    string // the equipment used, in words, e.g. "300 mm column × 51 runs"
-	Figures      []Figure
-	Demands      []Demand
-	Waste        []Stream
-	Activities   []Activity
-	Notes        []Note
+	// ImpurityOutKg is the matter other than the product isolated with it:
+	// the impurity left in the crystals, in the heart cut or in the pooled
+	// fractions, kg. The isolated mass is ProductOutKg + ImpurityOutKg
+	// (IsolatedKg); a model whose balance closes accounts for every input
+	// as isolated mass or waste.
+	ImpurityOutKg float64
+	Feasible      bool
+	Reason        string // why not feasible
+	Equipment     string // the equipment used, in words, e.g. "300 mm column × 51 runs"
+	Figures       []Figure
+	Demands       []Demand
+	Waste         []Stream
+	Activities    []Activity
+	Notes         []Note
 }
 
 // New starts the usage of a method at a crude mass, feasible until a model
@@ -196,6 +202,10 @@ func (u *Usage) AddFigure(key, label string, si float64, unit string) {
 func (u *Usage) AddDemand(item, label string, g Group, qty float64, dim units.Dim) {
 	u.Demands = append(u.Demands, Demand{Item: item, Label: label, Group: g, Qty: qty, Dim: dim})
 }
+
+// IsolatedKg is the mass isolated as product, with the impurity it
+// contains: ProductOutKg + ImpurityOutKg.
+func (u Usage) IsolatedKg() float64 { return u.ProductOutKg + u.ImpurityOutKg }
 
 // Hours returns total elapsed and attended hours.
 func (u Usage) Hours() (elapsed, attended float64) {

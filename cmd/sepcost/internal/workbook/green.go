@@ -33,13 +33,13 @@ type greenMetric struct {
 // The definitions are those of green.Metrics and green.Compute.
 var greenMetrics = []greenMetric{
 	{"E-factor\n(kg/kg)", "E-factor", func(m *green.Metrics) float64 { return m.EFactor }, func(st *styles) int { return st.ratio },
-		"kg of waste per kg of purified product, water counted:\n    E = m(waste) / m(product)\nwith m(waste) the mass of all waste streams and m(product) the purified product recovered.",
+		"kg of waste per kg of product, water counted:\n    E = m(waste) / m(product)\nwith m(waste) the mass of all waste streams and m(product) the product as isolated, with the impurity it still holds.",
 		srcEFactor},
 	{"E-factor,\nwater left out", "E-factor without water", func(m *green.Metrics) float64 { return m.EFactorNoWater }, func(st *styles) int { return st.ratio },
 		"The E-factor with water left out of the waste.",
 		srcEFactor},
 	{"PMI\n(kg/kg)", "Process mass intensity (PMI)", func(m *green.Metrics) float64 { return m.PMI }, func(st *styles) int { return st.ratio },
-		"kg of net input per kg of purified product, water counted, here for the purification step alone:\n" +
+		"kg of net input per kg of product as isolated, water counted, here for the purification step alone:\n" +
 			"    PMI = (m(crude) + Σ m(material) − m(recycled)) / m(product)\n" +
 			"Materials are the mass and volume demands of the materials group (volumes times the solvent's density); labour, energy, " +
 			"disposal and one-time items are not inputs, and recovered solvent credited is subtracted. When every input is counted and " +
@@ -49,7 +49,7 @@ var greenMetrics = []greenMetric{
 		"The PMI with water left out of the input.",
 		srcPMI},
 	{"Solvent intensity\n(kg/kg)", "Solvent intensity", func(m *green.Metrics) float64 { return m.SolventIntensity }, func(st *styles) int { return st.ratio },
-		"kg of organic solvent (net of recycling, water excluded) per kg of purified product:\n    SI = (m(solvent) − m(solvent, recycled)) / m(product)",
+		"kg of organic solvent (net of recycling, water excluded) per kg of product as isolated:\n    SI = (m(solvent) − m(solvent, recycled)) / m(product)",
 		srcSolventIntensity},
 	{"Halogenated\nshare", "Halogenated share", func(m *green.Metrics) float64 { return m.HalogenatedShare }, func(st *styles) int { return st.percent },
 		"Halogenated fraction of the organic solvent mass used (0 when none is used).",
@@ -60,9 +60,12 @@ var greenMetrics = []greenMetric{
 	{"Input\n(kg)", "Input", func(m *green.Metrics) float64 { return m.InputKg }, func(st *styles) int { return st.kgFine },
 		"Crude + materials − recycled, water counted, kg: the numerator of the PMI.",
 		srcPMI},
-	{"Product\n(kg)", "Product", func(m *green.Metrics) float64 { return m.ProductKg }, func(st *styles) int { return st.kgFine },
-		"Purified product recovered, kg: the denominator of every ratio here.",
+	{"Product\n(kg)", "Product", func(m *green.Metrics) float64 { return m.IsolatedKg }, func(st *styles) int { return st.kgFine },
+		"Product as isolated, kg, counted with the impurity it still contains (in the crystals, the heart cut or the pooled fractions): the denominator of every ratio here.",
 		"the method models"},
+	{"Balance gap\n(kg)", "Mass balance gap", func(m *green.Metrics) float64 { return m.BalanceGapKg }, func(st *styles) int { return st.kgFine },
+		"Input − product − waste, kg: zero when every input leaves as product or waste, and then PMI = E + 1. Inputs listed as not counted below are outside it.",
+		srcPMI},
 }
 
 // writeGreenMetrics writes, after the codes, the green metrics of each

@@ -167,7 +167,8 @@ func fixtureMetrics(u usage.Usage) *green.Metrics {
 	}
 	p := u.ProductOutKg
 	return &green.Metrics{EFactor: w / p, EFactorNoWater: w / p, PMI: (u.CrudeKg + w) / p, PMINoWater: (u.CrudeKg + w) / p,
-		SolventIntensity: solventKg / p, WasteKg: w, InputKg: u.CrudeKg + w, ProductKg: p, SolventKg: solventKg}
+		SolventIntensity: solventKg / p, WasteKg: w, InputKg: u.CrudeKg + w, ProductKg: p, IsolatedKg: p, SolventKg: solventKg,
+		BalanceGapKg: u.CrudeKg - p} // the crude not recovered is in no stream of the fixtures
 }
 
 // priced turns quantities into a ledger by the ledger's rule.

@@ -284,7 +284,8 @@ func TestGreenMetricsByHand(t *testing.T) {
 	//   SI      = 7.89 / 0.8 = 9.8625
 	// No water, so the variants without water are the same; no halogenated
 	// solvent, so the halogenated share is 0.
-	for k, want := range []float64{10.1125, 10.1125, 11.1125, 11.1125, 9.8625, 0, 8.09, 8.89, 0.8} {
+	//   gap     = 8.89 − 0.8 − 8.09 = 0 (every input leaves as product or waste)
+	for k, want := range []float64{10.1125, 10.1125, 11.1125, 11.1125, 9.8625, 0, 8.09, 8.89, 0.8, 0} {
 		c := 3 + k
 		got := number(t, greenMetrics[k].name, at(row, c))
 		if !near(got, want, 1e-3) && !(want == 0 && got == 0) {
@@ -533,7 +534,7 @@ func TestRowHeightLimit(t *testing.T) {
 // written as "n/a" (DESIGN §9).
 func TestNoNaNInNewSheets(t *testing.T) {
 	r := twoMethodReport()
-	r.Results[1][0].Metrics = &green.Metrics{EFactor: math.NaN(), PMI: math.Inf(1), ProductKg: 0.01472}
+	r.Results[1][0].Metrics = &green.Metrics{EFactor: math.NaN(), PMI: math.Inf(1), ProductKg: 0.01472, IsolatedKg: 0.01472}
 	r.Uncertainty = &scale.Uncertainty{TargetKg: 0.020, Draws: 10, Seed: 1, Bands: []scale.Band{
 		{Method: "chromatography", P10: math.NaN(), P50: 3, P90: math.Inf(1), Feasible: 0.5, Cheapest: 0.5},
 		{Method: "crystallization", P10: 1, P50: 2, P90: 3, Feasible: 0.5, Cheapest: 0.5},
