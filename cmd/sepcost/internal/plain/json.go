@@ -13,17 +13,18 @@ import (
 // that scripts read exact amounts; physical figures as numbers in their
 // display units.
 type jsonReport struct {
-	Title      string          `json:"title"`
-	Scenario   string          `json:"scenario"`
-	Prices     string          `json:"prices"`
-	Currency   string          `json:"currency"`
-	Batches    []jsonBatch     `json:"batches"`
-	Decision   *jsonDecision   `json:"decision,omitempty"`
-	Crossovers []jsonCrossover `json:"crossovers,omitempty"`
-	Pairwise   []jsonCrossover `json:"pairwise_crossings,omitempty"`
-	Warnings   []jsonWarning   `json:"warnings"`
-	Assumed    []jsonAssumed   `json:"assumptions"`
-	Cautions   []string        `json:"cautions"`
+	Title      string           `json:"title"`
+	Scenario   string           `json:"scenario"`
+	Prices     string           `json:"prices"`
+	Currency   string           `json:"currency"`
+	Batches    []jsonBatch      `json:"batches"`
+	Decision   *jsonDecision    `json:"decision,omitempty"`
+	Crossovers []jsonCrossover  `json:"crossovers,omitempty"`
+	Pairwise   []jsonCrossover  `json:"pairwise_crossings,omitempty"`
+	Warnings   []jsonWarning    `json:"warnings"`
+	Assumed    []jsonAssumed    `json:"assumptions"`
+	Cautions   []string         `json:"cautions"`
+	Uncertain  *jsonUncertainty `json:"uncertainty,omitempty"`
 }
 
 // jsonAssumed is a default the user did not set that moves a method's cost
@@ -209,6 +210,7 @@ func JSON(w io.Writer, r *scale.Report) error {
 	for _, w := range r.Warnings {
 		out.Warnings = append(out.Warnings, jsonWarning{w.Method, string(w.Level), w.Text, w.MassesKg})
 	}
+	out.Uncertain = uncertaintyJSON(r.Uncertainty)
 	enc := json.NewEncoder(w)
 	enc.SetIndent("", "  ")
 	return enc.Encode(out)
