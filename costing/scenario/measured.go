@@ -101,6 +101,29 @@ func (s *Scenario) measure(field string, t Text, label, unit string, kind Kind, 
 	s.Measured = append(s.Measured, m)
 }
 
+// describeMeasured adds to each measured field's entry on the Inputs list
+// how its uncertainty is read: the limits drawn between and whether they
+// were written or are the default of the kind of measurement.
+func (s *Scenario) describeMeasured() {
+	for _, m := range s.Measured {
+		unit := ""
+		if m.Unit != "" {
+			unit = " " + m.Unit
+		}
+		lo, hi := m.Display(m.Range.Lo()), m.Display(m.Range.Hi())
+		how := fmt.Sprintf("; the models use %.4g%s, the uncertainty draws anywhere from %.4g to %.4g%s (as written)",
+			m.Display(m.Range.Nominal), unit, lo, hi, unit)
+		if m.Default {
+			how = fmt.Sprintf("; the uncertainty draws anywhere from %.4g to %.4g%s, the usual spread of %s", lo, hi, unit, m.Kind)
+		}
+		for i := range s.Inputs {
+			if s.Inputs[i].Field == m.Field {
+				s.Inputs[i].Meaning += how
+			}
+		}
+	}
+}
+
 // With is a copy of the scenario with the measured values replaced by vals
 // (one per Measured, in order, SI). Sections the values live in are copied;
 // everything else is shared with s, which is left unchanged.

@@ -183,3 +183,28 @@ func TestBoilingPointRange(t *testing.T) {
 		t.Errorf("a range beside Antoine constants: %v", err)
 	}
 }
+
+// The Inputs list says how each measured value's uncertainty is read:
+// "0.27–0.33" is used as 0.3 and drawn from 0.27 to 0.33; 0.45 written
+// alone is drawn over the default ±0.03 (Spreads).
+func TestMeasuredOnInputs(t *testing.T) {
+	s, err := Load(strings.NewReader(rangedYAML), "r.yaml")
+	if err != nil {
+		t.Fatal(err)
+	}
+	want := map[string]string{
+		"chromatography.product_rf": "the models use 0.3, the uncertainty draws anywhere from 0.27 to 0.33 (as written)",
+		"chromatography.impurity_rf": "the uncertainty draws anywhere from 0.42 to 0.48, the usual spread of Rf read from one TLC plate",
+	}
+	for _, in := range s.Inputs {
+		if w, ok := want[in.Field]; ok {
+			if !strings.HasSuffix(in.Meaning, w) {
+				t.Errorf("%s: %q", in.Field, in.Meaning)
+			}
+			delete(want, in.Field)
+		}
+	}
+	if len(want) > 0 {
+		t.Errorf("not on the Inputs list: %v", want)
+	}
+}

@@ -140,6 +140,7 @@ func resolve(c *collector, raw *rawScenario, root *yaml.Node) *Scenario {
 		s.Settings = append(s.Settings, Setting{Key: k, Value: q, Range: r, Written: t.Value, Line: t.Line})
 		echo(field, t, "overrides the model default")
 	}
+	s.describeMeasured()
 	return s
 }
 
