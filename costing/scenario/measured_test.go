@@ -193,7 +193,7 @@ func TestMeasuredOnInputs(t *testing.T) {
 		t.Fatal(err)
 	}
 	want := map[string]string{
-		"chromatography.product_rf": "the models use 0.3, the uncertainty draws anywhere from 0.27 to 0.33 (as written)",
+		"chromatography.product_rf":  "the models use 0.3, the uncertainty draws anywhere from 0.27 to 0.33 (as written)",
 		"chromatography.impurity_rf": "the uncertainty draws anywhere from 0.42 to 0.48, the usual spread of Rf read from one TLC plate",
 	}
 	for _, in := range s.Inputs {
