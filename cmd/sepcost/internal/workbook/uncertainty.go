@@ -2,6 +2,7 @@ package workbook
 
 import (
 	"fmt"
+	"math"
 	"strconv"
 
 	"sepcost/costing/source"
@@ -134,9 +135,17 @@ func verdict(u *scale.Uncertainty, best int) string {
 	}
 	b := u.Bands[best]
 	pct := func(v float64) string { return sigFigs(v*100, 3) + " %" }
+	// The share is itself a sample estimate: its binomial standard error
+	// is √(p(1 − p)/N) (common practice, no source: the standard error of a
+	// proportion).
+	se := ""
+	if u.Draws > 0 && b.Cheapest < 1 {
+		se = fmt.Sprintf(" That share is known to about ±%s with %d draws (standard error √(p(1 − p)/N)); more draws (--draws) narrow it.",
+			pct(math.Sqrt(b.Cheapest*(1-b.Cheapest)/float64(u.Draws))), u.Draws)
+	}
 	if b.Cheapest >= scale.ConfidentShare {
-		return fmt.Sprintf("Here %s is cheapest in %s of the draws: a clear win at %s.", b.Method, pct(b.Cheapest), massLabel(u.TargetKg))
+		return fmt.Sprintf("Here %s is cheapest in %s of the draws: a clear win at %s.", b.Method, pct(b.Cheapest), massLabel(u.TargetKg)) + se
 	}
 	return fmt.Sprintf("Here no method is cheapest in %s of the draws (%s comes closest, with %s): at %s the methods are tied within the models' uncertainty.",
-		pct(scale.ConfidentShare), b.Method, pct(b.Cheapest), massLabel(u.TargetKg))
+		pct(scale.ConfidentShare), b.Method, pct(b.Cheapest), massLabel(u.TargetKg)) + se
 }
