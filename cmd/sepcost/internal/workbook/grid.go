@@ -235,7 +235,8 @@ func (g *grid) flush(f *excelize.File, st *styles, omit bool) error {
 			return fmt.Errorf("workbook: sheet %s: panes: %w", g.name, err)
 		}
 	}
-	// Charts before the rows and before Flush (DESIGN §9).
+	// Charts before the rows and before Flush: after a StreamWriter has
+	// flushed, adding a chart makes excelize read the streamed sheet back.
 	var parts []string
 	for _, c := range g.chart {
 		part, err := addChartOn(f, g.name, c.cell, c.chart)
