@@ -89,6 +89,12 @@ func TestSettingRange(t *testing.T) {
 	if c := p.Coef.Of(chrom.KeyBedDensity); math.Abs(c.SI-450) > 1e-9 {
 		t.Errorf("bed density = %g kg/m³, want the midpoint 450", c.SI)
 	}
+	// mixed_fraction_loss accepts 0 to 0.5 (its physical range): 0.4 ± 0.2
+	// reaches 0.6.
+	_, err = Prepare(load(t, base+"settings:\n  chromatography.mixed_fraction_loss: \"0.4 ± 0.2\"\n"))
+	if err == nil || !strings.Contains(err.Error(), "reaches outside the range") || !strings.Contains(err.Error(), "0 to 0.5") {
+		t.Errorf("err = %v", err)
+	}
 	_, err = Prepare(load(t, base+"settings:\n  chromatography.mixed_fraction_loss: \"0.03 ± 0.05\"\n"))
 	if err == nil || !strings.Contains(err.Error(), "reaches below zero") || !strings.Contains(err.Error(), "settings.chromatography.mixed_fraction_loss") {
 		t.Errorf("err = %v", err)

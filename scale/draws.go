@@ -138,6 +138,7 @@ type design struct {
 	price    []int                      // per price row: input index, or -1
 	rule     int                        // input index of the loading rule, or -1
 	base     []float64                  // nominal coefficient values
+	lo, hi   []float64                  // their physical ranges (both 0: none)
 	rules    []scenario.Rule            // alternatives of the loading rule
 }
 
@@ -203,6 +204,10 @@ func (d *design) addCoefficients(p *costing.Plan) {
 	}
 	n := p.Coef.Len()
 	d.base = p.Coef.Values()
+	d.lo, d.hi = make([]float64, n), make([]float64, n)
+	for k := range n {
+		d.lo[k], d.hi[k] = p.Coef.At(k).Lo, p.Coef.At(k).Hi
+	}
 	d.coef = make([]coefDraw, n)
 	group := map[string]int{}
 	order := make([]int, n) // draw in key order, so inputs are listed sorted
@@ -334,6 +339,9 @@ func (d *design) apply(p *costing.Plan, r *ledger.Rates, x []float64) (*costing.
 			cv[k] = x[cd.input]
 		default:
 			cv[k] = factorValue(d.base[k], x[cd.input], cd.odds)
+		}
+		if d.lo[k] != 0 || d.hi[k] != 0 { // a draw stays inside the physical range
+			cv[k] = math.Min(math.Max(cv[k], d.lo[k]), d.hi[k])
 		}
 	}
 	f := make([]float64, len(d.price))

@@ -1,10 +1,13 @@
 package scale
 
 import (
+	"bytes"
 	"encoding/csv"
 	"errors"
 	"fmt"
 	"io"
+	"path/filepath"
+	"slices"
 	"sort"
 	"strconv"
 	"strings"
@@ -13,6 +16,7 @@ import (
 
 	"sepcost/costing"
 	"sepcost/costing/prices"
+	"sepcost/costing/quote"
 	"sepcost/costing/scenario"
 	"sepcost/costing/units"
 	"sepcost/costing/usage"
@@ -49,77 +53,62 @@ type PlanRow struct {
 	Method   string // "" lets the decision choose
 }
 
-// MaxPlanRows caps a plan file; a year's plan has tens of rows.
-const MaxPlanRows = 10000
+// Limits of a plan file: its size, its rows and the runs of one row. A
+// year's plan has tens of rows; a batch run more than 10 000 times a year
+// is a production process, not a plan of laboratory batches, and the bound
+// keeps every total far inside the integer range.
+const (
+	MaxPlanSize   = 1 << 20
+	MaxPlanRows   = 10000
+	MaxRunsPerRow = 10000
+	maxPlanErrors = 200
+)
+
+// planColumns are the columns a plan may have.
+var planColumns = []string{"scenario", "mass", "runs", "method"}
 
 // ReadPlan reads a plan CSV with the header scenario,mass,runs and an
 // optional method column. Every problem is reported, each with its line.
+// A plan may have at most MaxPlanSize bytes and MaxPlanRows rows; runs lie
+// from 0 to MaxRunsPerRow, masses within scenario.BatchRange, and each
+// scenario is a .yaml or .yml file.
 func ReadPlan(r io.Reader, file string) ([]PlanRow, error) {
-	cr := csv.NewReader(r)
+	data, err := io.ReadAll(io.LimitReader(r, MaxPlanSize+1))
+	if err != nil {
+		return nil, fmt.Errorf("%s: %w", file, err)
+	}
+	if len(data) > MaxPlanSize {
+		return nil, &PlanError{File: file, Line: 1, Msg: fmt.Sprintf("larger than %d bytes (1 MiB); a plan has one short line per batch, at most %d lines", MaxPlanSize, MaxPlanRows)}
+	}
+	cr := csv.NewReader(bytes.NewReader(data))
 	cr.Comment = '#'
 	cr.TrimLeadingSpace = true
 	cr.FieldsPerRecord = -1
 	header, err := cr.Read()
 	if err != nil {
-		return nil, &PlanError{File: file, Line: 1, Msg: "no header; the first line must be scenario,mass,runs (and optionally ,method)"}
+		return nil, &PlanError{File: file, Line: planErrLine(err, 1), Msg: "no readable header; the first line must be scenario,mass,runs (and optionally ,method)"}
 	}
-	col := map[string]int{}
-	for i, h := range header {
-		col[strings.ToLower(strings.TrimSpace(strings.TrimPrefix(h, "\ufeff")))] = i
-	}
-	var errs []error
-	for _, need := range []string{"scenario", "mass", "runs"} {
-		if _, ok := col[need]; !ok {
-			errs = append(errs, &PlanError{File: file, Line: 1, Field: need, Msg: "missing column; the header must be scenario,mass,runs (and optionally ,method)"})
-		}
-	}
-	for h := range col {
-		switch h {
-		case "scenario", "mass", "runs", "method":
-		default:
-			errs = append(errs, &PlanError{File: file, Line: 1, Field: h, Msg: "unknown column; valid columns: scenario, mass, runs, method"})
-		}
-	}
+	col, errs := planHeader(file, header)
 	if len(errs) > 0 {
 		return nil, errors.Join(errs...)
 	}
 	var rows []PlanRow
-	for {
+	for len(errs) < maxPlanErrors {
 		rec, err := cr.Read()
 		if err == io.EOF {
 			break
 		}
-		line, _ := cr.FieldPos(0)
 		if err != nil {
-			errs = append(errs, &PlanError{File: file, Line: line, Msg: "not valid CSV: " + err.Error()})
+			errs = append(errs, &PlanError{File: file, Line: planErrLine(err, 0), Msg: "not valid CSV: " + csvMessage(err) + "; a value with a comma or a quote is written in double quotes, a quote inside doubled"})
 			break
 		}
+		line, _ := cr.FieldPos(0)
 		if len(rows) >= MaxPlanRows {
-			errs = append(errs, &PlanError{File: file, Line: line, Msg: fmt.Sprintf("more than %d rows", MaxPlanRows)})
+			errs = append(errs, &PlanError{File: file, Line: line, Msg: fmt.Sprintf("more than %d rows; a plan has at most %d", MaxPlanRows, MaxPlanRows)})
 			break
 		}
-		get := func(name string) string {
-			if i, ok := col[name]; ok && i < len(rec) {
-				return strings.TrimSpace(rec[i])
-			}
-			return ""
-		}
-		row := PlanRow{Line: line, Scenario: get("scenario"), Method: strings.ToLower(get("method"))}
-		if row.Scenario == "" {
-			errs = append(errs, &PlanError{File: file, Line: line, Field: "scenario", Msg: "empty; write the path of a scenario file, relative to the plan"})
-		}
-		if m, err := units.ParseAs(get("mass"), units.Mass); err != nil {
-			errs = append(errs, &PlanError{File: file, Line: line, Field: "mass", Msg: err.Error()})
-		} else if m <= 0 {
-			errs = append(errs, &PlanError{File: file, Line: line, Field: "mass", Msg: "must be above zero"})
-		} else {
-			row.MassKg = m
-		}
-		if n, err := strconv.Atoi(get("runs")); err != nil || n < 0 {
-			errs = append(errs, &PlanError{File: file, Line: line, Field: "runs", Msg: fmt.Sprintf("%q: write how many times the batch is run, a whole number from 0 up", get("runs"))})
-		} else {
-			row.Runs = n
-		}
+		row, rowErrs := planRow(file, line, rec, col)
+		errs = append(errs, rowErrs...)
 		rows = append(rows, row)
 	}
 	if len(errs) > 0 {
@@ -129,6 +118,85 @@ func ReadPlan(r io.Reader, file string) ([]PlanRow, error) {
 		return nil, &PlanError{File: file, Line: 2, Msg: "no rows; add one line per scenario, mass and number of runs"}
 	}
 	return rows, nil
+}
+
+// planHeader maps the header's columns to their index, refusing missing,
+// unknown and repeated columns.
+func planHeader(file string, header []string) (map[string]int, []error) {
+	col := map[string]int{}
+	var errs []error
+	for i, h := range header {
+		name := strings.ToLower(strings.TrimSpace(strings.TrimPrefix(h, "\ufeff")))
+		if !slices.Contains(planColumns, name) {
+			errs = append(errs, &PlanError{File: file, Line: 1, Field: quote.Field(name), Msg: "unknown column; valid columns: scenario, mass, runs, method"})
+			continue
+		}
+		if first, dup := col[name]; dup {
+			errs = append(errs, &PlanError{File: file, Line: 1, Field: name, Msg: fmt.Sprintf("named twice, as columns %d and %d; name each column once", first+1, i+1)})
+			continue
+		}
+		col[name] = i
+	}
+	for _, need := range planColumns[:3] {
+		if _, ok := col[need]; !ok {
+			errs = append(errs, &PlanError{File: file, Line: 1, Field: need, Msg: "missing column; the header must be scenario,mass,runs (and optionally ,method)"})
+		}
+	}
+	return col, errs
+}
+
+// planRow reads one plan row.
+func planRow(file string, line int, rec []string, col map[string]int) (PlanRow, []error) {
+	var errs []error
+	bad := func(field, format string, args ...any) {
+		errs = append(errs, &PlanError{File: file, Line: line, Field: field, Msg: fmt.Sprintf(format, args...)})
+	}
+	get := func(name string) string {
+		if i, ok := col[name]; ok && i < len(rec) {
+			return strings.TrimSpace(rec[i])
+		}
+		return ""
+	}
+	row := PlanRow{Line: line, Scenario: get("scenario"), Method: strings.ToLower(get("method"))}
+	switch ext := strings.ToLower(filepath.Ext(row.Scenario)); {
+	case row.Scenario == "":
+		bad("scenario", "empty; write the path of a scenario file, relative to the plan")
+	case ext != ".yaml" && ext != ".yml":
+		bad("scenario", "%s is not a scenario file; write the path of a .yaml or .yml scenario, relative to the plan", quote.Excerpt(row.Scenario))
+	}
+	mass := get("mass")
+	if m, err := units.ParseAs(mass, units.Mass); err != nil {
+		bad("mass", "%v", err)
+	} else if err := scenario.CheckBatchMass(m); err != nil {
+		bad("mass", "%s: %v", quote.Excerpt(mass), err)
+	} else {
+		row.MassKg = m
+	}
+	runs := get("runs")
+	if n, err := strconv.Atoi(runs); err != nil || n < 0 || n > MaxRunsPerRow {
+		bad("runs", "%s: write how many times the batch is run, a whole number from 0 to %d", quote.Excerpt(runs), MaxRunsPerRow)
+	} else {
+		row.Runs = n
+	}
+	return row, errs
+}
+
+// planErrLine is the line of a CSV error, or def when it has none.
+func planErrLine(err error, def int) int {
+	var pe *csv.ParseError
+	if errors.As(err, &pe) && pe.Line > 0 {
+		return pe.Line
+	}
+	return def
+}
+
+// csvMessage is the CSV error without its own position (the line is given).
+func csvMessage(err error) string {
+	var pe *csv.ParseError
+	if errors.As(err, &pe) {
+		return pe.Err.Error()
+	}
+	return err.Error()
 }
 
 // PortfolioLine is one plan row costed: the method chosen (or forced) and

@@ -84,8 +84,8 @@ func TestDrawnCoefficientsStayPhysical(t *testing.T) {
 			if orig.Dim == units.None && orig.SI > 0 && orig.SI < 1 && !(co.SI > 0 && co.SI < 1) {
 				t.Fatalf("%s: share %g drawn to %g", orig.Key, orig.SI, co.SI)
 			}
-			if math.IsNaN(co.SI) || math.IsInf(co.SI, 0) {
-				t.Fatalf("%s: %g", orig.Key, co.SI)
+			if math.IsNaN(co.SI) || math.IsInf(co.SI, 0) || !orig.InRange(co.SI) {
+				t.Fatalf("%s: %g (range %g to %g)", orig.Key, co.SI, orig.Lo, orig.Hi)
 			}
 		}
 		// One chiller: the same factor for every method that has one.

@@ -29,7 +29,7 @@ func newCheckCommand() *cobra.Command {
 the scenario's batch masses and prices them. Every problem is listed with its
 file, line and field and what would be valid; model warnings are listed too.
 The exit code is 1 when anything must be fixed.`,
-		Args: cobra.ExactArgs(1),
+		Args: oneFile("scenario file", "mycase/scenario.yaml --prices mycase/prices.csv"),
 		RunE: func(cmd *cobra.Command, args []string) error {
 			opts.scenario = args[0]
 			return runCheck(cmd.Context(), opts, cmd.OutOrStdout())

@@ -35,7 +35,7 @@ at the scenario's target_mass (else its largest mass).`,
 		Example: `  sepcost estimate mycase/scenario.yaml --prices mycase/prices.csv --mass 0.25g,20g,2kg -o plan.xlsx
   sepcost estimate mycase/scenario.yaml --mass 85g,2kg --target 85g
   sepcost estimate mycase/scenario.yaml --format json`,
-		Args: cobra.ExactArgs(1),
+		Args: oneFile("scenario file", "mycase/scenario.yaml --prices mycase/prices.csv"),
 		RunE: func(cmd *cobra.Command, args []string) error {
 			opts.scenario = args[0]
 			return runEstimate(cmd.Context(), opts, cmd.OutOrStdout(), cmd.ErrOrStderr())

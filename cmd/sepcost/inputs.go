@@ -2,10 +2,8 @@ package main
 
 import (
 	"bytes"
-	"errors"
 	"fmt"
 	"io"
-	"io/fs"
 	"os"
 	"path/filepath"
 
@@ -17,20 +15,8 @@ import (
 	"sepcost/scale"
 )
 
-// openInput reads a user file, with an error that names it.
-func openInput(path, what string) ([]byte, error) {
-	data, err := os.ReadFile(path)
-	if errors.Is(err, fs.ErrNotExist) {
-		return nil, fmt.Errorf("%s: no such %s file", path, what)
-	}
-	if err != nil {
-		return nil, fmt.Errorf("%s: cannot read the %s file: %w", path, what, err)
-	}
-	return data, nil
-}
-
 func loadScenario(path string) (*scenario.Scenario, error) {
-	data, err := openInput(path, "scenario")
+	data, err := readInput(path, "scenario", scenario.MaxFileSize)
 	if err != nil {
 		return nil, err
 	}
@@ -47,7 +33,7 @@ func loadPrices(path, scenarioPath string) (*prices.Table, error) {
 		}
 		path = guess
 	}
-	data, err := openInput(path, "price table")
+	data, err := readInput(path, "price table", prices.MaxFileSize)
 	if err != nil {
 		return nil, err
 	}

@@ -7,6 +7,8 @@ import (
 
 	"github.com/spf13/cobra"
 
+	"sepcost/costing/quote"
+	"sepcost/costing/scenario"
 	"sepcost/costing/units"
 )
 
@@ -33,10 +35,16 @@ func (m *massList) Set(s string) error {
 		}
 		v, err := units.ParseAs(part, units.Mass)
 		if err != nil {
-			return fmt.Errorf("--mass %q: %v", part, err)
+			return fmt.Errorf("--mass %s: %v", quote.Excerpt(part), err)
 		}
 		if v <= 0 {
-			return fmt.Errorf("--mass %q: a batch mass must be above zero", part)
+			return fmt.Errorf("--mass %s: a batch mass must be above zero; it must lie %s", quote.Excerpt(part), scenario.BatchRange)
+		}
+		if err := scenario.CheckBatchMass(v); err != nil {
+			return fmt.Errorf("--mass %s: %v", quote.Excerpt(part), err)
+		}
+		if len(m.kg) == scenario.MaxMasses {
+			return fmt.Errorf("--mass: more than %d masses; give at most %d", scenario.MaxMasses, scenario.MaxMasses)
 		}
 		m.kg = append(m.kg, v)
 	}
@@ -63,10 +71,10 @@ func targetMass(target string, largest float64, from string) (float64, string, e
 	if target != "" {
 		v, err := units.ParseAs(target, units.Mass)
 		if err != nil {
-			return 0, "", usageError{fmt.Errorf("--target %q: %v", target, err)}
+			return 0, "", usageError{fmt.Errorf("--target %s: %v", quote.Excerpt(target), err)}
 		}
-		if !(v > 0) {
-			return 0, "", usageError{fmt.Errorf("--target %q: a batch mass must be above zero", target)}
+		if err := scenario.CheckBatchMass(v); err != nil {
+			return 0, "", usageError{fmt.Errorf("--target %s: %v", quote.Excerpt(target), err)}
 		}
 		return v, "--target", nil
 	}

@@ -15,43 +15,78 @@ import (
 var ErrExists = errors.New("output file exists")
 
 // writeFile writes data to path through a temporary file in the same folder
-// and a rename, so a failed write never leaves half a file. Without force,
-// an existing file is refused and left untouched.
+// and a rename, so a failed or interrupted write never leaves half a file.
+// Only a regular file is ever replaced, and only with force: a folder, a
+// device, a pipe, a socket or a symbolic link is refused whatever the
+// flags. A new file's mode follows the umask; a replaced file keeps its
+// mode.
 func writeFile(path string, data []byte, force bool) error {
-	if !force {
-		if _, err := os.Stat(path); err == nil {
-			return fmt.Errorf("%s: %w; choose another name with -o or add --force to replace it", path, ErrExists)
-		} else if !errors.Is(err, fs.ErrNotExist) {
-			return err
-		}
-	}
-	dir := filepath.Dir(path)
-	tmp, err := os.CreateTemp(dir, "."+filepath.Base(path)+".*.tmp")
+	keep, err := checkTarget(path, force)
 	if err != nil {
-		return fmt.Errorf("cannot write in %s: %w", dir, err)
+		return err
+	}
+	tmp, err := createTemp(path)
+	if err != nil {
+		return fmt.Errorf("cannot write in %s: %w", filepath.Dir(path), err)
 	}
 	name := tmp.Name()
-	// CreateTemp makes the file private (0600); an output is an ordinary
-	// document, readable by others (0644).
-	_ = tmp.Chmod(0o644)
+	var cerr error
+	if keep != nil {
+		cerr = tmp.Chmod(*keep)
+	}
 	_, werr := tmp.Write(data)
-	cerr := tmp.Close()
+	if werr == nil {
+		werr = tmp.Sync()
+	}
+	cerr = errors.Join(cerr, tmp.Close())
 	if werr != nil || cerr != nil {
-		os.Remove(name)
+		dropTemp(name)
 		return fmt.Errorf("writing %s: %w", path, errors.Join(werr, cerr))
 	}
+	if afterTempWrite != nil {
+		afterTempWrite(name)
+	}
+	return placeTemp(name, path, force)
+}
+
+// checkTarget looks at the output path before anything is written: it
+// returns the mode to keep when a regular file is replaced.
+func checkTarget(path string, force bool) (*fs.FileMode, error) {
+	fi, err := os.Lstat(path)
+	switch {
+	case errors.Is(err, fs.ErrNotExist):
+		return nil, nil
+	case err != nil:
+		return nil, fmt.Errorf("%s: cannot look at the output file: %w", path, err)
+	case fi.IsDir():
+		return nil, usageError{fmt.Errorf("%s is a folder; give a file name with -o, e.g. -o %s", path, filepath.Join(path, "plan.xlsx"))}
+	case !fi.Mode().IsRegular():
+		return nil, fmt.Errorf("%s is not a regular file (a device, pipe, socket or symbolic link); sepcost writes only regular files and never replaces anything else, even with --force: choose another name with -o", path)
+	case !force:
+		return nil, fmt.Errorf("%s: %w; choose another name with -o or add --force to replace it", path, ErrExists)
+	}
+	m := fi.Mode().Perm()
+	return &m, nil
+}
+
+// placeTemp puts the finished temporary file at path: with force by a
+// rename over the regular file found there, else by a link that fails if
+// the target appeared meanwhile (never clobber).
+func placeTemp(name, path string, force bool) error {
+	temps.Lock()
+	defer temps.Unlock()
+	var err error
 	if force {
 		err = os.Rename(name, path)
 	} else {
-		// Link fails if the target appeared meanwhile: never clobber.
 		err = os.Link(name, path)
-		os.Remove(name)
+	}
+	os.Remove(name)
+	delete(temps.names, name)
+	if errors.Is(err, fs.ErrExist) {
+		return fmt.Errorf("%s: %w; choose another name with -o or add --force to replace it", path, ErrExists)
 	}
 	if err != nil {
-		os.Remove(name)
-		if errors.Is(err, fs.ErrExist) {
-			return fmt.Errorf("%s: %w; add --force to replace it", path, ErrExists)
-		}
 		return fmt.Errorf("writing %s: %w", path, err)
 	}
 	return nil

@@ -34,7 +34,7 @@ row takes the cheapest feasible method at its mass unless forced. The
 roll-up gives cost per method, waste by class and by suggested code, solvent
 purchases by solvent and hours; totals reconcile to the cent.`,
 		Example: `  sepcost portfolio plan.csv --prices prices.csv -o year.xlsx`,
-		Args:    cobra.ExactArgs(1),
+		Args:    oneFile("plan file (CSV)", "plan.csv --prices prices.csv"),
 		RunE: func(cmd *cobra.Command, args []string) error {
 			opts.plan = args[0]
 			return runPortfolio(cmd.Context(), opts, cmd.OutOrStdout(), cmd.ErrOrStderr())
@@ -50,7 +50,7 @@ func runPortfolio(_ context.Context, opts *portfolioOptions, stdout, stderr io.W
 	if err != nil {
 		return err
 	}
-	data, err := openInput(opts.plan, "plan")
+	data, err := readInput(opts.plan, "plan", scale.MaxPlanSize)
 	if err != nil {
 		return err
 	}

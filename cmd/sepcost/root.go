@@ -3,6 +3,7 @@ package main
 import (
 	"context"
 	"errors"
+	"fmt"
 	"io"
 	"strings"
 
@@ -51,15 +52,37 @@ Start with ` + "`sepcost demo`" + `, then ` + "`sepcost init mycase`" + ` to get
 // run executes the command line with injected streams.
 func run(ctx context.Context, args []string, stdout, stderr io.Writer) error {
 	root := newRootCommand()
+	out := &safeWriter{w: stdout}
 	root.SetArgs(args)
-	root.SetOut(stdout)
+	root.SetOut(out)
 	root.SetErr(stderr)
 	root.SetContext(ctx)
 	cmd, err := root.ExecuteC()
 	if err != nil && cmd != nil && isArgError(err) {
 		return usageError{err}
 	}
+	if out.err != nil {
+		werr := fmt.Errorf("writing to standard output: %w; the report is incomplete", out.err)
+		if err == nil || errors.Is(err, out.err) {
+			return werr
+		}
+		return errors.Join(err, werr)
+	}
 	return err
+}
+
+// oneFile is a cobra argument check for commands that take one file: a
+// missing or extra argument is a usage error that says what to give.
+func oneFile(what, example string) cobra.PositionalArgs {
+	return func(cmd *cobra.Command, args []string) error {
+		switch {
+		case len(args) == 0:
+			return usageError{fmt.Errorf("%s needs the %s: sepcost %s %s", cmd.Name(), what, cmd.Name(), example)}
+		case len(args) > 1:
+			return usageError{fmt.Errorf("%s takes one %s, but %d arguments were given (%s); options start with --", cmd.Name(), what, len(args), strings.Join(args, " "))}
+		}
+		return nil
+	}
 }
 
 // isArgError recognises cobra's own argument and command errors.

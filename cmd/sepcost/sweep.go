@@ -7,6 +7,8 @@ import (
 
 	"github.com/spf13/cobra"
 
+	"sepcost/costing/quote"
+	"sepcost/costing/scenario"
 	"sepcost/costing/units"
 	"sepcost/scale"
 )
@@ -38,7 +40,7 @@ target is --target; without it --to when given, else the scenario's
 target_mass (else its largest mass).`,
 		Example: `  sepcost sweep scenario.yaml --prices prices.csv --from 100mg --to 10kg --points 40 -o sweep.xlsx
   sepcost sweep scenario.yaml --format csv > curve.csv`,
-		Args: cobra.ExactArgs(1),
+		Args: oneFile("scenario file", "mycase/scenario.yaml --prices mycase/prices.csv"),
 		RunE: func(cmd *cobra.Command, args []string) error {
 			opts.scenario = args[0]
 			opts.toGiven = cmd.Flags().Changed("to")
@@ -63,11 +65,19 @@ func runSweep(_ context.Context, opts *sweepOptions, stdout, stderr io.Writer) e
 	}
 	from, err := units.ParseAs(opts.from, units.Mass)
 	if err != nil {
-		return usageError{fmt.Errorf("--from %q: %v", opts.from, err)}
+		return usageError{fmt.Errorf("--from %s: %v", quote.Excerpt(opts.from), err)}
 	}
 	to, err := units.ParseAs(opts.to, units.Mass)
 	if err != nil {
-		return usageError{fmt.Errorf("--to %q: %v", opts.to, err)}
+		return usageError{fmt.Errorf("--to %s: %v", quote.Excerpt(opts.to), err)}
+	}
+	for _, f := range []struct {
+		flag, text string
+		kg         float64
+	}{{"--from", opts.from, from}, {"--to", opts.to, to}} {
+		if err := scenario.CheckBatchMass(f.kg); err != nil {
+			return usageError{fmt.Errorf("%s %s: %v", f.flag, quote.Excerpt(f.text), err)}
+		}
 	}
 	if opts.draws < 0 || opts.draws > maxDraws {
 		return usageError{fmt.Errorf("--draws %d: write 0 to skip, or up to %d", opts.draws, maxDraws)}

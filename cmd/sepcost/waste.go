@@ -33,7 +33,7 @@ the rule applied. Classification is decided by your site's EHS office under
 local rules; the codes are suggestions to start from.`,
 		Example: `  sepcost waste scenario.yaml --prices prices.csv --mass 2kg --format csv > waste.csv
   sepcost waste scenario.yaml --mass 20g,2kg -o waste.xlsx`,
-		Args: cobra.ExactArgs(1),
+		Args: oneFile("scenario file", "mycase/scenario.yaml --prices mycase/prices.csv"),
 		RunE: func(cmd *cobra.Command, args []string) error {
 			opts.scenario = args[0]
 			return runWaste(cmd.Context(), opts, cmd.OutOrStdout(), cmd.ErrOrStderr())

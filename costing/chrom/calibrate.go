@@ -106,6 +106,6 @@ func AddCalibration(coef source.Set) {
 	if cal.AtBound {
 		plates += fmt.Sprintf("; the fit runs to the top of its range (%.0g plates): Still's loads fall with ΔRf less steeply than touching-band theory predicts, so the table shows no kinetic penalty to fit. This is an effective number, not a measured column efficiency", float64(calMaxPlates))
 	}
-	coef.Put(source.Coefficient{Key: KeyQs, Method: Method, Label: "effective saturation capacity of silica", SI: cal.Qs, Dim: units.None, Unit: "", Source: fit, Mark: source.Calibrated})
-	coef.Put(source.Coefficient{Key: KeyPlates, Method: Method, Label: "effective plate number of the bed", SI: cal.Plates, Dim: units.None, Unit: "", Source: plates, Mark: source.Calibrated})
+	coef.Put(source.Coefficient{Key: KeyQs, Method: Method, Label: "effective saturation capacity of silica", SI: cal.Qs, Dim: units.None, Unit: "", Source: fit, Mark: source.Calibrated, Lo: ranges[KeyQs][0], Hi: ranges[KeyQs][1]})
+	coef.Put(source.Coefficient{Key: KeyPlates, Method: Method, Label: "effective plate number of the bed", SI: cal.Plates, Dim: units.None, Unit: "", Source: plates, Mark: source.Calibrated, Lo: ranges[KeyPlates][0], Hi: ranges[KeyPlates][1]})
 }

@@ -51,7 +51,8 @@ const (
 // values (saturation capacity and plate number) are added by Prepare.
 func Defaults() []source.Coefficient {
 	c := func(key, label string, si float64, dim units.Dim, unit, src string, mark source.Mark) source.Coefficient {
-		return source.Coefficient{Key: key, Method: Method, Label: label, SI: si, Dim: dim, Unit: unit, Source: src, Mark: mark}
+		lo, hi := rangeOf(key)
+		return source.Coefficient{Key: key, Method: Method, Label: label, SI: si, Dim: dim, Unit: unit, Source: src, Mark: mark, Lo: lo, Hi: hi}
 	}
 	still := "Still, W. C.; Kahn, M.; Mitra, A. J. Org. Chem. 1978, 43, 2923"
 	return []source.Coefficient{

@@ -171,7 +171,7 @@ func Run(sc *scenario.Scenario, coef source.Set, crudeKg float64) usage.Usage {
 
 	// Flow and time per run.
 	flow := get(KeyFrontVelocity) * area
-	elutionTime := (eluentRun - crudeRun*get(KeyLoadSolventPerKg)) / flow
+	elutionTime := math.Max(0, eluentRun-crudeRun*get(KeyLoadSolventPerKg)) / flow // the loading solution may be more than the eluent
 	fig("flow", "flow rate", flow, "mL/min")
 	act := func(name string, elapsed, attendedShare float64) {
 		u.Activities = append(u.Activities, usage.Activity{Name: name, Elapsed: elapsed * runs, Attended: elapsed * attendedShare * runs})

@@ -83,7 +83,8 @@ func KeyReactor(i int) string { return fmt.Sprintf("crystallization.reactor_%02d
 // Defaults returns the model's coefficients with their sources.
 func Defaults() []source.Coefficient {
 	c := func(key, label string, si float64, dim units.Dim, unit, src string, mark source.Mark) source.Coefficient {
-		return source.Coefficient{Key: key, Method: Method, Label: label, SI: si, Dim: dim, Unit: unit, Source: src, Mark: mark}
+		lo, hi := rangeOf(key)
+		return source.Coefficient{Key: key, Method: Method, Label: label, SI: si, Dim: dim, Unit: unit, Source: src, Mark: mark, Lo: lo, Hi: hi}
 	}
 	minute, h := 60.0, 3600.0
 	out := []source.Coefficient{

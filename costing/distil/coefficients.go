@@ -50,7 +50,8 @@ var SpecificHeat = units.Dim{L: 2, T: -2, K: -1}
 // Defaults returns the model's coefficients with their sources.
 func Defaults() []source.Coefficient {
 	c := func(key, label string, si float64, dim units.Dim, unit, src string, mark source.Mark) source.Coefficient {
-		return source.Coefficient{Key: key, Method: Method, Label: label, SI: si, Dim: dim, Unit: unit, Source: src, Mark: mark}
+		lo, hi := rangeOf(key)
+		return source.Coefficient{Key: key, Method: Method, Label: label, SI: si, Dim: dim, Unit: unit, Source: src, Mark: mark, Lo: lo, Hi: hi}
 	}
 	shr := "Seader, J. D.; Henley, E. J.; Roper, D. K. Separation Process Principles, 3rd ed., Wiley, 2011"
 	out := []source.Coefficient{

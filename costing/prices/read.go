@@ -1,6 +1,7 @@
 package prices
 
 import (
+	"bytes"
 	"encoding/csv"
 	"errors"
 	"fmt"
@@ -13,6 +14,7 @@ import (
 
 	"github.com/shopspring/decimal"
 
+	"sepcost/costing/quote"
 	"sepcost/costing/units"
 )
 
@@ -43,6 +45,14 @@ var PriceDims = []units.Dim{units.Mass, units.Volume, units.Count, units.Time, u
 // validUnits names the usual price units, for error messages.
 const validUnits = "kg, g, L, mL, each, h, min, kWh, MJ"
 
+// Limits of a price table: its size in bytes, its items and the problems
+// listed at once. A site's table has tens to hundreds of items.
+const (
+	MaxFileSize = 4 << 20
+	MaxItems    = 10000
+	MaxProblems = 200
+)
+
 // dateLayout is the only date form accepted: ISO 8601 calendar date.
 const dateLayout = "2006-01-02"
 
@@ -68,14 +78,18 @@ const dateLayout = "2006-01-02"
 // Read reports every problem it finds, not just the first, as Errors (each
 // an *Error naming file, line and field, unwrapping to ErrInvalid). A
 // failure to read r is returned wrapped, naming the file.
+//
+// A table may have at most MaxFileSize bytes and MaxItems items; at most
+// MaxProblems problems are listed.
 func Read(r io.Reader, file string) (*Table, error) {
-	cr := csv.NewReader(r)
-	cr.Comment = '#'
-	cr.TrimLeadingSpace = true
-
+	cr, err := boundedCSV(r, file)
+	if err != nil {
+		return nil, err
+	}
 	var errs Errors
 	add := func(line int, field, format string, args ...any) {
-		errs = append(errs, &Error{File: file, Line: line, Field: field, Msg: fmt.Sprintf(format, args...)})
+		quote.Args(format, args) // the user's text, cut to a short excerpt
+		errs = append(errs, &Error{File: file, Line: line, Field: quote.Field(field), Msg: fmt.Sprintf(format, args...)})
 	}
 
 	// Header.
@@ -107,6 +121,9 @@ func Read(r io.Reader, file string) (*Table, error) {
 	for {
 		rec, err := cr.Read()
 		if err == io.EOF {
+			break
+		}
+		if tooMany(cr, err, rows, len(errs), add) {
 			break
 		}
 		if err != nil {
@@ -201,13 +218,7 @@ func Read(r io.Reader, file string) (*Table, error) {
 		}
 	}
 
-	if len(currencies) > 1 {
-		parts := make([]string, len(currencies))
-		for i, c := range currencies {
-			parts[i] = fmt.Sprintf("%s (%s)", c, lineList(currencyLines[c]))
-		}
-		add(0, "currency", "one currency per run, but the table has %s; convert every price to one currency", joinAnd(parts))
-	}
+	oneCurrency(currencies, currencyLines, add)
 	if rows == 0 {
 		add(0, "", "the table has no items; add one line per item under the header, e.g. silica gel,kg,<price>,EUR,consumable,<source>,<date>")
 	}
@@ -217,6 +228,49 @@ func Read(r io.Reader, file string) (*Table, error) {
 	}
 	t.Currency = currencies[0]
 	return t, nil
+}
+
+// oneCurrency records a problem when the table has more than one currency.
+func oneCurrency(currencies []string, lines map[string][]int, add func(int, string, string, ...any)) {
+	if len(currencies) <= 1 {
+		return
+	}
+	parts := make([]string, len(currencies))
+	for i, c := range currencies {
+		parts[i] = fmt.Sprintf("%s (%s)", c, lineList(lines[c]))
+	}
+	add(0, "currency", "one currency per run, but the table has %s; convert every price to one currency", joinAnd(parts))
+}
+
+// boundedCSV reads at most MaxFileSize bytes of a table and returns a CSV
+// reader over them.
+func boundedCSV(r io.Reader, file string) (*csv.Reader, error) {
+	data, err := io.ReadAll(io.LimitReader(r, MaxFileSize+1))
+	if err != nil {
+		return nil, fmt.Errorf("%s: %w", file, err)
+	}
+	if len(data) > MaxFileSize {
+		return nil, Errors{{File: file, Msg: fmt.Sprintf("larger than %d bytes (4 MiB); a price table lists at most %d items", MaxFileSize, MaxItems)}}
+	}
+	cr := csv.NewReader(bytes.NewReader(data))
+	cr.Comment = '#'
+	cr.TrimLeadingSpace = true
+	return cr, nil
+}
+
+// tooMany reports (and records) when the table has more problems or items
+// than are read.
+func tooMany(cr *csv.Reader, err error, rows, problems int, add func(int, string, string, ...any)) bool {
+	if problems >= MaxProblems {
+		add(0, "", "more than %d problems; fix these and check again", MaxProblems)
+		return true
+	}
+	if rows >= MaxItems && err == nil {
+		line, _ := cr.FieldPos(0)
+		add(line, "", "more than %d items; a price table lists at most %d (one sheet of a workbook holds them all)", MaxItems, MaxItems)
+		return true
+	}
+	return false
 }
 
 // emptyHint says what to write in a required column left empty.

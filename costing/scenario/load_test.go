@@ -114,13 +114,32 @@ func TestAllProblemsAtOnce(t *testing.T) {
 	}
 }
 
+// FuzzLoad: Load never panics; a refusal unwraps to ErrInvalid and quotes
+// no more than a short excerpt of any line; an accepted scenario has its
+// batch masses within BatchRange. Seeds in testdata/fuzz/FuzzLoad.
 func FuzzLoad(f *testing.F) {
 	f.Add(good)
 	f.Add("name: x\nmasses: [1 g]\n")
+	f.Add(good + "---\nname: y\n")
+	f.Add(strings.Replace(good, `"250 mg"`, `"1e30 kg"`, 1))
 	f.Fuzz(func(t *testing.T, s string) {
 		sc, err := Load(strings.NewReader(s), "fuzz.yaml")
-		if err == nil && sc == nil {
+		if err != nil {
+			if sc != nil {
+				t.Fatal("scenario and error together")
+			}
+			if !errors.Is(err, ErrInvalid) {
+				t.Fatalf("error does not unwrap to ErrInvalid: %v", err)
+			}
+			return
+		}
+		if sc == nil {
 			t.Fatal("nil scenario without error")
+		}
+		for _, kg := range sc.MassesKg {
+			if CheckBatchMass(kg) != nil {
+				t.Fatalf("mass %g kg accepted", kg)
+			}
 		}
 	})
 }

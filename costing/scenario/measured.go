@@ -243,7 +243,7 @@ func (c *collector) fractionRange(t Text, field string, lo, hi float64, what str
 		return units.Range{}, false
 	}
 	if !(r.Lo() >= lo && r.Hi() <= hi) {
-		c.add(t.Line, field, "%s is outside the valid range; write %s", t.Value, what)
+		c.add(t.Line, field, "%q is outside the valid range; write %s", t.Value, what)
 		return units.Range{}, false
 	}
 	return r, true

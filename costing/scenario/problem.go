@@ -4,6 +4,10 @@ import (
 	"errors"
 	"fmt"
 	"strings"
+
+	"go.yaml.in/yaml/v3"
+
+	"sepcost/costing/quote"
 )
 
 // ErrInvalid is the sentinel that every scenario input error unwraps to.
@@ -55,10 +59,14 @@ func (ps Problems) Unwrap() []error {
 // collector gathers problems while a file is resolved.
 type collector struct {
 	file string
+	root *yaml.Node // the document, to find the line of a field
 	list Problems
 }
 
+// add records a problem. A string quoted with %q is the user's text: it is
+// cut to a short excerpt (quote.Args), so that no message repeats a file.
 func (c *collector) add(line int, field, format string, args ...any) {
+	quote.Args(format, args)
 	c.list = append(c.list, &Problem{File: c.file, Line: line, Field: field, Msg: fmt.Sprintf(format, args...)})
 }
 

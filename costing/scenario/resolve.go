@@ -56,11 +56,19 @@ func resolve(c *collector, raw *rawScenario, root *yaml.Node) *Scenario {
 	if len(raw.Masses) == 0 {
 		c.add(keyLine(root, "masses"), "masses", `missing; write a list of crude batch masses, e.g. ["250 mg", "20 g", "2 kg"]`)
 	}
+	if len(raw.Masses) > MaxMasses {
+		c.add(keyLine(root, "masses"), "masses", "%d masses listed; at most %d are costed in one run", len(raw.Masses), MaxMasses)
+		raw.Masses = nil
+	}
 	for i, t := range raw.Masses {
 		field := fmt.Sprintf("masses[%d]", i)
 		if v, ok := c.quantity(t, field, units.Mass); ok {
 			if v <= 0 {
 				c.add(t.Line, field, "%q must be above zero", t.Value)
+				continue
+			}
+			if err := CheckBatchMass(v); err != nil {
+				c.add(t.Line, field, "%q: %v", t.Value, err)
 				continue
 			}
 			s.MassesKg = append(s.MassesKg, v)
@@ -72,6 +80,8 @@ func resolve(c *collector, raw *rawScenario, root *yaml.Node) *Scenario {
 		if v, ok := c.quantity(raw.TargetMass, "target_mass", units.Mass); ok {
 			if v <= 0 {
 				c.add(raw.TargetMass.Line, "target_mass", "%q must be above zero", raw.TargetMass.Value)
+			} else if err := CheckBatchMass(v); err != nil {
+				c.add(raw.TargetMass.Line, "target_mass", "%q: %v", raw.TargetMass.Value, err)
 			}
 			s.TargetKg = v
 			echo("target_mass", raw.TargetMass, FormatMass(v)+" of crude")

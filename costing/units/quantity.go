@@ -37,8 +37,12 @@ func ParseUnit(s string) (Unit, error) {
 	if u, ok := table[text]; ok {
 		return Unit{Text: text, Dim: u.dim, Factor: u.factor, Offset: u.offset}, nil
 	}
+	if len(text) > MaxUnitLen {
+		return Unit{}, fmt.Errorf("%w: unit of %d characters; a unit is at most %d", ErrUnit, len(text), MaxUnitLen)
+	}
 	out := Unit{Text: text, Factor: 1}
-	sign := int8(1)
+	var exp [6]int // exponents, summed in int so that they cannot wrap
+	sign := 1
 	rest := text
 	for rest != "" {
 		rest = strings.TrimLeft(rest, " *·")
@@ -62,7 +66,7 @@ func ParseUnit(s string) (Unit, error) {
 			if inner.Offset != 0 {
 				return Unit{}, fmt.Errorf("%w: %q: Celsius cannot be combined with other units; use K", ErrUnit, text)
 			}
-			out.Dim = out.Dim.mul(inner.Dim, sign)
+			addExp(&exp, inner.Dim, 1, sign)
 			out.Factor *= math.Pow(inner.Factor, float64(sign))
 			rest = rest[end+1:]
 			continue
@@ -73,13 +77,13 @@ func ParseUnit(s string) (Unit, error) {
 		}
 		tok := rest[:n]
 		rest = rest[n:]
-		p := int8(1)
+		p := 1
 		if i := strings.IndexByte(tok, '^'); i >= 0 {
 			v, err := strconv.Atoi(tok[i+1:])
 			if err != nil || v == 0 || v > 4 || v < -4 {
-				return Unit{}, fmt.Errorf("%w: bad power in unit %q", ErrUnit, text)
+				return Unit{}, fmt.Errorf("%w: bad power in unit %q; powers from -4 to 4 are accepted", ErrUnit, text)
 			}
-			p = int8(v)
+			p = v
 			tok = tok[:i]
 		}
 		u, ok := table[tok]
@@ -89,16 +93,48 @@ func ParseUnit(s string) (Unit, error) {
 		if u.offset != 0 {
 			return Unit{}, fmt.Errorf("%w: %q: Celsius cannot be combined with other units; use K", ErrUnit, text)
 		}
-		out.Dim = out.Dim.mul(u.dim.pow(p), sign)
+		addExp(&exp, u.dim, p, sign)
 		out.Factor *= math.Pow(u.factor, float64(p*sign))
 	}
+	for _, e := range exp {
+		if e > MaxExponent || e < -MaxExponent {
+			return Unit{}, fmt.Errorf("%w: unit %q raises a base unit to the power %d; powers from -%d to %d are accepted", ErrUnit, text, e, MaxExponent, MaxExponent)
+		}
+	}
+	if !(out.Factor > 0) || math.IsInf(out.Factor, 0) {
+		return Unit{}, fmt.Errorf("%w: unit %q has no finite size", ErrUnit, text)
+	}
+	out.Dim = Dim{int8(exp[0]), int8(exp[1]), int8(exp[2]), int8(exp[3]), int8(exp[4]), int8(exp[5])}
 	return out, nil
+}
+
+// MaxExponent bounds the power of each base unit in a unit expression
+// (kg^4 is accepted, kg^9 is not): no physical quantity the models take
+// needs more, and the bound keeps the exponents from overflowing.
+const MaxExponent = 8
+
+// MaxQuantityLen bounds the length of a quantity as written, in bytes.
+const MaxQuantityLen = 100
+
+// MaxUnitLen bounds the length of a unit expression, in bytes.
+const MaxUnitLen = 64
+
+// addExp adds p × sign times the exponents of d to exp.
+func addExp(exp *[6]int, d Dim, p, sign int) {
+	for i, e := range [6]int8{d.M, d.L, d.T, d.K, d.N, d.Each} {
+		exp[i] += int(e) * p * sign
+	}
 }
 
 // Parse reads "number unit", e.g. "20 g", "1.5kg", "78 C", "0.75 mL/g".
 // A bare number is refused: quantities in user files carry units.
+// A quantity longer than MaxQuantityLen bytes is refused without being
+// repeated in the message.
 func Parse(s string) (Quantity, Unit, error) {
 	t := strings.TrimSpace(s)
+	if len(t) > MaxQuantityLen {
+		return Quantity{}, Unit{}, fmt.Errorf("%w: a quantity of %d characters; a number and its unit take at most %d", ErrUnit, len(t), MaxQuantityLen)
+	}
 	i := 0
 	for i < len(t) {
 		c := rune(t[i])
@@ -110,20 +146,24 @@ func Parse(s string) (Quantity, Unit, error) {
 	}
 	num, rest := t[:i], strings.TrimSpace(t[i:])
 	if num == "" {
-		return Quantity{}, Unit{}, fmt.Errorf("%w: %q does not start with a number", ErrUnit, s)
+		return Quantity{}, Unit{}, fmt.Errorf("%w: %q does not start with a number", ErrUnit, t)
 	}
 	v, err := strconv.ParseFloat(num, 64)
 	if err != nil || math.IsNaN(v) || math.IsInf(v, 0) {
 		return Quantity{}, Unit{}, fmt.Errorf("%w: %q is not a number", ErrUnit, num)
 	}
 	if rest == "" {
-		return Quantity{}, Unit{}, fmt.Errorf("%w: %q has no unit", ErrUnit, s)
+		return Quantity{}, Unit{}, fmt.Errorf("%w: %q has no unit", ErrUnit, t)
 	}
 	u, err := ParseUnit(rest)
 	if err != nil {
 		return Quantity{}, Unit{}, err
 	}
-	return Quantity{SI: v*u.Factor + u.Offset, Dim: u.Dim}, u, nil
+	si := v*u.Factor + u.Offset
+	if math.IsInf(si, 0) || math.IsNaN(si) {
+		return Quantity{}, Unit{}, fmt.Errorf("%w: %q is too large to represent", ErrUnit, t)
+	}
+	return Quantity{SI: si, Dim: u.Dim}, u, nil
 }
 
 // ParseAs reads a quantity and checks that it has the wanted dimension.
@@ -134,7 +174,7 @@ func ParseAs(s string, want Dim) (float64, error) {
 		return 0, fmt.Errorf("%w; write %s", err, Accepted(want))
 	}
 	if q.Dim != want {
-		return 0, fmt.Errorf("%w: %q is %s, not %s; write %s", ErrUnit, s, q.Dim.Name(), want.Name(), Accepted(want))
+		return 0, fmt.Errorf("%w: %q is %s, not %s; write %s", ErrUnit, strings.TrimSpace(s), q.Dim.Name(), want.Name(), Accepted(want))
 	}
 	return q.SI, nil
 }

@@ -54,7 +54,7 @@ func ParseRange(s string) (Range, Unit, error) {
 		return Range{}, Unit{}, err
 	}
 	if strings.TrimSpace(rest) == "" {
-		return Range{}, Unit{}, fmt.Errorf("%w: %q has no unit", ErrUnit, s)
+		return Range{}, Unit{}, fmt.Errorf("%w: %q has no unit", ErrUnit, strings.TrimSpace(s))
 	}
 	u, err := ParseUnit(rest)
 	if err != nil {
@@ -116,7 +116,8 @@ func toRange(a, b float64, form Form) Range {
 // splitRange reads "a", "a ± b", "a +/- b", "a–b", "a-b" or "a to b"
 // followed by the rest (the unit).
 func splitRange(s string) (a, b float64, form Form, rest string, err error) {
-	t := strings.TrimSpace(s)
+	s = strings.TrimSpace(s) // messages quote the value as trimmed
+	t := s
 	num, t := scanNumber(t)
 	if num == "" {
 		return 0, 0, Exact, "", fmt.Errorf("%w: %q does not start with a number", ErrUnit, s)

@@ -338,7 +338,7 @@ func validateLedger(where resultWhere, r *scale.Report, prices []small, l *ledge
 			return fmt.Errorf("%s: price row %d is outside the price table's %d items", at, line.PriceRow, len(r.Prices.Items))
 		}
 		it := &r.Prices.Items[line.PriceRow]
-		if it.Name != line.Demand.Item {
+		if !strings.EqualFold(strings.TrimSpace(it.Name), strings.TrimSpace(line.Demand.Item)) { // as prices.Find matches
 			return fmt.Errorf("%s: price row %d is %q, not the item demanded", at, line.PriceRow, it.Name)
 		}
 		price := smallOf(line.UnitPrice)
