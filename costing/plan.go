@@ -14,6 +14,7 @@ import (
 	"sepcost/costing/chrom"
 	"sepcost/costing/cryst"
 	"sepcost/costing/distil"
+	"sepcost/costing/equipment"
 	"sepcost/costing/green"
 	"sepcost/costing/ledger"
 	"sepcost/costing/prices"
@@ -27,6 +28,9 @@ import (
 type Method struct {
 	Name string
 	Run  func(crudeKg float64) usage.Usage
+	// Choices, when set, lists the candidate plans at a mass (loadings,
+	// equipment); the plan prices them and keeps the cheapest per gram.
+	Choices func(crudeKg float64) []usage.Usage
 }
 
 // Plan is a scenario with its model coefficients settled.
@@ -34,6 +38,35 @@ type Plan struct {
 	Scenario *scenario.Scenario
 	Coef     source.Set
 	Methods  []Method
+	// Equipment is the site equipment table the models choose from
+	// (equipment.Default unless Options gave one).
+	Equipment *equipment.Table
+
+	sitePrices sync.Map // *prices.Table → the same with the equipment's charges
+}
+
+// Options are what Prepare takes besides the scenario.
+type Options struct {
+	Equipment *equipment.Table // nil: the built-in default table
+}
+
+// SitePrices is the price table with the equipment's hourly and per-use
+// charges appended (equipment.Table.WithPrices), the table every ledger of
+// the plan is priced against. Reports should hold this table so that
+// ledger rows point into it.
+func (p *Plan) SitePrices(t *prices.Table) (*prices.Table, error) {
+	if v, ok := p.sitePrices.Load(t); ok {
+		return v.(*prices.Table), nil
+	}
+	out, err := p.Equipment.WithPrices(t)
+	if err != nil {
+		return nil, err
+	}
+	p.sitePrices.Store(t, out)
+	if out != t {
+		p.sitePrices.Store(out, out)
+	}
+	return out, nil
 }
 
 // Result is one method at one batch mass: physical usage, its ledger and
@@ -61,10 +94,17 @@ func (p *Plan) result(u usage.Usage, l ledger.Ledger) (Result, error) {
 // (each checked for a known key and the right dimension), then the
 // calibrations that depend on them. Problems name the scenario file, line
 // and setting.
-func Prepare(sc *scenario.Scenario) (*Plan, error) {
+func Prepare(sc *scenario.Scenario) (*Plan, error) { return PrepareWith(sc, Options{}) }
+
+// PrepareWith is Prepare with the site's equipment table.
+func PrepareWith(sc *scenario.Scenario, opt Options) (*Plan, error) {
+	eq := opt.Equipment
+	if eq == nil {
+		eq = equipment.Default()
+	}
 	coef := source.NewSet(chrom.Defaults(), cryst.Defaults(), distil.Defaults())
 	var problems scenario.Problems
-	calibrated := map[string]bool{chrom.KeyQs: true, chrom.KeyPlates: true}
+	calibrated := map[string]bool{chrom.KeyQs: true}
 	apply := func(later bool) {
 		for _, s := range sc.Settings {
 			if calibrated[s.Key] != later {
@@ -92,13 +132,17 @@ func Prepare(sc *scenario.Scenario) (*Plan, error) {
 	if sc.Chromatography == nil && sc.Crystallization == nil && sc.Distillation == nil {
 		return nil, &scenario.Problem{File: sc.File, Msg: "describes no purification method; add a chromatography:, crystallization: or distillation: section (see `sepcost init`)"}
 	}
-	return newPlan(sc, coef), nil
+	return newPlan(sc, coef, eq), nil
 }
 
 // newPlan registers the methods on a settled coefficient set.
-func newPlan(sc *scenario.Scenario, coef source.Set) *Plan {
-	p := &Plan{Scenario: sc, Coef: coef}
-	p.add(chrom.Method, sc.Chromatography != nil, func(m float64) usage.Usage { return chrom.Run(sc, coef, m) })
+func newPlan(sc *scenario.Scenario, coef source.Set, eq *equipment.Table) *Plan {
+	p := &Plan{Scenario: sc, Coef: coef, Equipment: eq}
+	p.add(chrom.Method, sc.Chromatography != nil, nil)
+	if sc.Chromatography != nil {
+		m := &p.Methods[len(p.Methods)-1]
+		m.Run, m.Choices = chromMethod(sc, coef, eq)
+	}
 	// The crystallization and distillation models read and check their
 	// coefficients once here, not at every run.
 	var crystRun, distilRun func(float64) usage.Usage
@@ -115,18 +159,40 @@ func newPlan(sc *scenario.Scenario, coef source.Set) *Plan {
 
 // WithCoefficients is the same plan on another coefficient set (used to
 // sample the models' uncertainty).
-func (p *Plan) WithCoefficients(coef source.Set) *Plan { return newPlan(p.Scenario, coef) }
+func (p *Plan) WithCoefficients(coef source.Set) *Plan { return newPlan(p.Scenario, coef, p.Equipment) }
 
 // With is the plan on a drawn scenario and coefficient set (a Monte Carlo
 // draw: scenario.Scenario.With, source.Set.WithValues).
-func (p *Plan) With(sc *scenario.Scenario, coef source.Set) *Plan { return newPlan(sc, coef) }
+func (p *Plan) With(sc *scenario.Scenario, coef source.Set) *Plan {
+	return newPlan(sc, coef, p.Equipment)
+}
 
 // PerGramLean is method j's cost per gram of purified product at one mass
 // priced with float rates: the lean path for Monte Carlo draws (no
-// decimal ledger, no green metrics). NaN when the method is not feasible or
-// recovers nothing.
+// decimal ledger, no green metrics), choosing among a method's candidate
+// plans (loading and equipment) the cheapest per gram as runPriced does.
+// NaN when the method is not feasible or recovers nothing.
 func (p *Plan) PerGramLean(j int, crudeKg float64, r *ledger.Rates) (float64, error) {
-	u := p.Methods[j].Run(crudeKg)
+	m := p.Methods[j]
+	if m.Choices == nil {
+		return perGramRates(m.Run(crudeKg), r)
+	}
+	best := math.NaN()
+	for _, u := range m.Choices(crudeKg) {
+		v, err := perGramRates(u, r)
+		if err != nil {
+			return 0, err
+		}
+		if v == v && !(v >= best) { // a number, and below best (or best still NaN)
+			best = v
+		}
+	}
+	return best, nil
+}
+
+// perGramRates is one usage's cost per gram of purified product with float
+// rates; NaN when it is not feasible or recovers nothing.
+func perGramRates(u usage.Usage, r *ledger.Rates) (float64, error) {
 	if !u.Feasible || u.ProductOutKg <= 0 {
 		return math.NaN(), nil
 	}
@@ -165,6 +231,10 @@ func (p *Plan) MethodNames() []string {
 // Run runs every method at every mass and prices the results. Missing
 // prices from all runs come back together in one error.
 func (p *Plan) Run(massesKg []float64, t *prices.Table) ([][]Result, error) {
+	t, err := p.SitePrices(t)
+	if err != nil {
+		return nil, err
+	}
 	for _, m := range massesKg {
 		if !(m > 0) {
 			return nil, fmt.Errorf("batch mass %g kg: %w", m, units.ErrUnit)
@@ -184,8 +254,9 @@ func (p *Plan) Run(massesKg []float64, t *prices.Table) ([][]Result, error) {
 		go func() {
 			defer wg.Done()
 			for k := range jobs {
-				us[k] = p.Methods[k%n].Run(massesKg[k/n])
-				l, err := ledger.Price(us[k], t)
+				var l ledger.Ledger
+				var err error
+				us[k], l, err = p.runPriced(k%n, massesKg[k/n], t)
 				if err == nil {
 					rs[k], err = p.result(us[k], l)
 				}
@@ -286,8 +357,11 @@ func (p *Plan) methodSolvents(method string) []string {
 
 // RunOne runs method j at one mass and prices it.
 func (p *Plan) RunOne(j int, crudeKg float64, t *prices.Table) (Result, error) {
-	u := p.Methods[j].Run(crudeKg)
-	l, err := ledger.Price(u, t)
+	t, err := p.SitePrices(t)
+	if err != nil {
+		return Result{}, err
+	}
+	u, l, err := p.runPriced(j, crudeKg, t)
 	if err != nil {
 		return Result{}, err
 	}

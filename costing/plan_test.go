@@ -44,7 +44,7 @@ func TestSettings(t *testing.T) {
 		t.Fatalf("want 2 problems, got %v", err)
 	}
 	msg := err.Error()
-	for _, w := range []string{"s.yaml:9: settings.chromatography.bed_hieght", "valid settings:", "chromatography.bed_height", "s.yaml:10:", "is length", "density"} {
+	for _, w := range []string{"s.yaml:9: settings.chromatography.bed_hieght", "valid settings:", "chromatography.calibration_bed_height", "s.yaml:10:", "is length", "density"} {
 		if !strings.Contains(msg, w) {
 			t.Errorf("error lacks %q:\n%s", w, msg)
 		}
@@ -89,14 +89,14 @@ func TestSettingRange(t *testing.T) {
 	if c := p.Coef.Of(chrom.KeyBedDensity); math.Abs(c.SI-450) > 1e-9 {
 		t.Errorf("bed density = %g kg/m³, want the midpoint 450", c.SI)
 	}
-	// mixed_fraction_loss accepts 0 to 0.5 (its physical range): 0.4 ± 0.2
+	// silica_retention_loss accepts 0 to 0.5 (its physical range): 0.4 ± 0.2
 	// reaches 0.6.
-	_, err = Prepare(load(t, base+"settings:\n  chromatography.mixed_fraction_loss: \"0.4 ± 0.2\"\n"))
+	_, err = Prepare(load(t, base+"settings:\n  chromatography.silica_retention_loss: \"0.4 ± 0.2\"\n"))
 	if err == nil || !strings.Contains(err.Error(), "reaches outside the range") || !strings.Contains(err.Error(), "0 to 0.5") {
 		t.Errorf("err = %v", err)
 	}
-	_, err = Prepare(load(t, base+"settings:\n  chromatography.mixed_fraction_loss: \"0.03 ± 0.05\"\n"))
-	if err == nil || !strings.Contains(err.Error(), "reaches below zero") || !strings.Contains(err.Error(), "settings.chromatography.mixed_fraction_loss") {
+	_, err = Prepare(load(t, base+"settings:\n  chromatography.silica_retention_loss: \"0.03 ± 0.05\"\n"))
+	if err == nil || !strings.Contains(err.Error(), "reaches below zero") || !strings.Contains(err.Error(), "settings.chromatography.silica_retention_loss") {
 		t.Errorf("err = %v", err)
 	}
 }

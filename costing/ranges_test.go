@@ -42,11 +42,11 @@ func TestSettingsOutOfRange(t *testing.T) {
 		want    []string
 	}{
 		// A share above 100 % of the product cannot be lost (mass balance).
-		{`chromatography.mixed_fraction_loss: "150 %"`, []string{"s.yaml:9:", "settings.chromatography.mixed_fraction_loss", `"150 %"`, "0 to 0.5"}},
+		{`chromatography.silica_retention_loss: "150 %"`, []string{"s.yaml:9:", "settings.chromatography.silica_retention_loss", `"150 %"`, "0 to 0.5"}},
 		// A time cannot be negative.
 		{`distillation.setup_time: "-5 min"`, []string{"s.yaml:9:", "settings.distillation.setup_time", "0 to 2880 min"}},
-		// A zero evaporation rate would divide by zero.
-		{`chromatography.evaporation_rate: "0 L/h"`, []string{"s.yaml:9:", "settings.chromatography.evaporation_rate", "0.036 to 3600 L/h"}},
+		// A zero heater efficiency would divide by zero.
+		{`chromatography.evaporator_heat_efficiency: "0 %"`, []string{"s.yaml:9:", "settings.chromatography.evaporator_heat_efficiency", "0.01 to 1"}},
 		// A reflux of less than the minimum gives no finite column (Gilliland).
 		{`distillation.reflux_multiple: 0.5`, []string{"settings.distillation.reflux_multiple", "1.01 to 10"}},
 		{`crystallization.u_flask: "-100 W/(m^2 K)"`, []string{"settings.crystallization.u_flask", "10 to 2000"}},

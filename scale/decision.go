@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"math"
 	"sort"
+	"strings"
 
 	"github.com/shopspring/decimal"
 
@@ -60,6 +61,12 @@ type Decision struct {
 // would flip.
 func Decide(p *costing.Plan, t *prices.Table, targetKg float64) (*Decision, error) {
 	d := &Decision{TargetKg: targetKg, Infeasible: map[string]string{}}
+	// The ledgers' price rows point into the site table (prices with the
+	// equipment's charges); break-even prices are read from it.
+	t, err := p.SitePrices(t)
+	if err != nil {
+		return nil, err
+	}
 	type cand struct {
 		name string
 		res  costing.Result
@@ -223,6 +230,18 @@ func topDrivers(method string, r costing.Result, n int) []Driver {
 	return out
 }
 
+// bandUsed is the price row of the first ledger line of item in w, else r.
+func bandUsed(item string, w, r costing.Result) (int, bool) {
+	for _, res := range []costing.Result{w, r} {
+		for _, l := range res.Ledger.Lines {
+			if strings.EqualFold(strings.TrimSpace(l.Demand.Item), strings.TrimSpace(item)) {
+				return l.PriceRow, true
+			}
+		}
+	}
+	return 0, false
+}
+
 // breakEven solves, for one item's unit price p, the equality of cost per
 // gram of the winner w and the runner-up r. Ledger totals are linear in p
 // (up to the rounding of each line to the minor unit):
@@ -231,10 +250,14 @@ func topDrivers(method string, r costing.Result, n int) []Driver {
 //	p*   = p0 − Δ(p0) / (Qw/Gw − Qr/Gr)
 //
 // with Q the item's quantity in its price unit and G grams of product.
+// An item with price bands is solved for the band the winner's (else the
+// runner-up's) lines are priced at; lines at other bands stay as they are.
 func breakEven(item string, t *prices.Table, w, r costing.Result) (Flip, bool) {
-	idx, ok := t.Find(item)
+	idx, ok := bandUsed(item, w, r)
 	if !ok {
-		return Flip{}, false
+		if idx, ok = t.Find(item); !ok {
+			return Flip{}, false
+		}
 	}
 	p0 := t.Items[idx].Price.InexactFloat64()
 	qty := func(res costing.Result) float64 {

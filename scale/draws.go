@@ -270,8 +270,8 @@ func (d *design) addPrices(t *prices.Table, used map[int]bool) {
 	d.price = make([]int, len(t.Items))
 	for i, it := range t.Items {
 		d.price[i] = -1
-		if !used[i] {
-			continue
+		if !used[i] || it.Category == "equipment" {
+			continue // not asked for, or the site's own equipment charges (its equipment table): not drawn
 		}
 		s := it.PriceSpread()
 		if s == 0 {

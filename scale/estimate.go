@@ -34,6 +34,12 @@ func Estimate(p *costing.Plan, t *prices.Table, massesKg []float64) (*Report, er
 
 // EstimateWith is Estimate with chosen sampling options.
 func EstimateWith(p *costing.Plan, t *prices.Table, massesKg []float64, opt Options) (*Report, error) {
+	// The report holds the price table with the site equipment's charges,
+	// so that every ledger line points into it.
+	t, err := p.SitePrices(t)
+	if err != nil {
+		return nil, err
+	}
 	res, err := p.Run(massesKg, t)
 	if err != nil {
 		return nil, err
@@ -49,6 +55,7 @@ func EstimateWith(p *costing.Plan, t *prices.Table, massesKg []float64, opt Opti
 		Results:      res,
 		Coefficients: p.Coefficients(),
 		Cautions:     p.Cautions(),
+		Equipment:    p.Equipment,
 	}
 	r.TargetKg, r.TargetWhy = sc.TargetKg, "target_mass in the scenario"
 	for _, in := range sc.Inputs {
@@ -80,6 +87,29 @@ func EstimateWith(p *costing.Plan, t *prices.Table, massesKg []float64, opt Opti
 		r.Decision.weigh(r.Uncertainty)
 		if r.Decision.Winner != "" && r.Decision.RunnerUp != "" {
 			r.Decision.Explanation = append(r.Decision.Explanation, r.Uncertainty.AdviceLines(3)...)
+		}
+	}
+	if sc.Campaign != nil {
+		sp := *sc.Campaign
+		if !sp.BatchGiven {
+			sp.BatchKg = r.TargetKg
+		}
+		if r.Campaign, err = RunCampaign(p, t, &sp); err != nil {
+			return nil, err
+		}
+		r.Coefficients = append(r.Coefficients, CampaignCoefficients()...)
+		r.Decision.onCampaign(r.Campaign)
+		if w, ok := r.Campaign.Cost(r.Campaign.Winner); ok {
+			// The contingency comes from the draws at the campaign's own
+			// batch mass.
+			u := r.Uncertainty
+			if u != nil && sp.BatchKg != u.TargetKg {
+				if u, err = Sample(p, t, sp.BatchKg, opt.Draws, opt.Seed, nil); err != nil {
+					return nil, err
+				}
+			}
+			r.Budget = NewBudget(w, u)
+			r.Budget.CapitalItems = r.Campaign.Capital[w.Method]
 		}
 	}
 	for _, in := range sc.Inputs {

@@ -11,6 +11,7 @@ import (
 	"sort"
 	"strconv"
 	"strings"
+	"time"
 
 	"github.com/shopspring/decimal"
 
@@ -20,6 +21,7 @@ import (
 	"sepcost/costing/scenario"
 	"sepcost/costing/units"
 	"sepcost/costing/usage"
+	"sepcost/scale/campaign"
 )
 
 // ErrPlan is the sentinel every plan-file error unwraps to.
@@ -46,11 +48,39 @@ func (e *PlanError) Unwrap() error { return ErrPlan }
 // PlanRow is one row of a year's plan: a scenario, a batch mass, how many
 // times the batch is run, and optionally a forced method.
 type PlanRow struct {
-	Line     int
-	Scenario string // path as written (relative to the plan file)
-	MassKg   float64
-	Runs     int
-	Method   string // "" lets the decision choose
+	Line        int
+	Scenario    string // path as written (relative to the plan file)
+	MassKg      float64
+	Runs        int
+	Method      string      // "" lets the decision choose
+	Date        string      // when the runs are planned, YYYY-MM-DD; "" when not given
+	Development Development // where the row's one-time costs are charged
+}
+
+// Development says which rows of a plan bear a method's one-time costs
+// (its development).
+type Development string
+
+// Development choices, written in the plan's development column.
+const (
+	// PerScenario charges a scenario's one-time costs for a method once in
+	// the plan, on the first row that runs it (the default; an empty value
+	// means the same).
+	PerScenario Development = "scenario"
+	// PerRow charges them on this row, as a campaign of its own.
+	PerRow Development = "row"
+	// Developed charges nothing: the method is already developed.
+	Developed Development = "done"
+)
+
+// Quarter is the calendar quarter of a YYYY-MM-DD date, "2026-Q3"; "" when
+// the date is empty or not a date.
+func Quarter(date string) string {
+	d, err := time.Parse("2006-01-02", date)
+	if err != nil {
+		return ""
+	}
+	return fmt.Sprintf("%d-Q%d", d.Year(), (int(d.Month())+2)/3)
 }
 
 // Limits of a plan file: its size, its rows and the runs of one row. A
@@ -65,13 +95,14 @@ const (
 )
 
 // planColumns are the columns a plan may have.
-var planColumns = []string{"scenario", "mass", "runs", "method"}
+var planColumns = []string{"scenario", "mass", "runs", "method", "date", "development"}
 
-// ReadPlan reads a plan CSV with the header scenario,mass,runs and an
-// optional method column. Every problem is reported, each with its line.
-// A plan may have at most MaxPlanSize bytes and MaxPlanRows rows; runs lie
-// from 0 to MaxRunsPerRow, masses within scenario.BatchRange, and each
-// scenario is a .yaml or .yml file.
+// ReadPlan reads a plan CSV with the header scenario,mass,runs and the
+// optional columns method, date (YYYY-MM-DD, for the roll-up by quarter)
+// and development (scenario, row or done: see Development). Every problem
+// is reported, each with its line. A plan may have at most MaxPlanSize
+// bytes and MaxPlanRows rows; runs lie from 0 to MaxRunsPerRow, masses
+// within scenario.BatchRange, and each scenario is a .yaml or .yml file.
 func ReadPlan(r io.Reader, file string) ([]PlanRow, error) {
 	data, err := io.ReadAll(io.LimitReader(r, MaxPlanSize+1))
 	if err != nil {
@@ -128,7 +159,7 @@ func planHeader(file string, header []string) (map[string]int, []error) {
 	for i, h := range header {
 		name := strings.ToLower(strings.TrimSpace(strings.TrimPrefix(h, "\ufeff")))
 		if !slices.Contains(planColumns, name) {
-			errs = append(errs, &PlanError{File: file, Line: 1, Field: quote.Field(name), Msg: "unknown column; valid columns: scenario, mass, runs, method"})
+			errs = append(errs, &PlanError{File: file, Line: 1, Field: quote.Field(name), Msg: "unknown column; valid columns: scenario, mass, runs, method, date, development"})
 			continue
 		}
 		if first, dup := col[name]; dup {
@@ -178,6 +209,17 @@ func planRow(file string, line int, rec []string, col map[string]int) (PlanRow, 
 	} else {
 		row.Runs = n
 	}
+	if row.Date = get("date"); row.Date != "" && Quarter(row.Date) == "" {
+		bad("date", "%s: write the date as YYYY-MM-DD, e.g. 2026-03-31, or leave it empty", quote.Excerpt(row.Date))
+	}
+	switch dev := Development(strings.ToLower(get("development"))); dev {
+	case "":
+		row.Development = PerScenario
+	case PerScenario, PerRow, Developed:
+		row.Development = dev
+	default:
+		bad("development", "%s: write scenario (one-time costs once per scenario in the plan, the default), row (on this row) or done (already developed)", quote.Excerpt(string(dev)))
+	}
 	return row, errs
 }
 
@@ -199,17 +241,28 @@ func csvMessage(err error) string {
 	return err.Error()
 }
 
-// PortfolioLine is one plan row costed: the method chosen (or forced) and
-// the per-batch result, multiplied by the number of runs.
+// PortfolioLine is one plan row costed as a campaign: the method chosen
+// (or forced), one batch priced at the bands of the row's purchases, its
+// recurring cost times the runs, and the one-time costs when this row
+// bears them.
 type PortfolioLine struct {
 	PlanRow
 	Title    string // the scenario's name
 	Method   string // the method used
 	Forced   bool   // the plan forced the method
-	Result   Result // one batch
+	Result   Result // one batch, priced at the row's campaign bands
 	Waste    []WasteRow
-	Total    decimal.Decimal // per-batch total × runs
+	PerBatch decimal.Decimal // recurring cost of one batch (one-time lines left out)
+	OneTime  decimal.Decimal // one-time costs charged on this row (zero when charged elsewhere or done)
+	Total    decimal.Decimal // PerBatch × runs + OneTime
+	Quarter  string          // calendar quarter of Date, "" without a date
 	Cautions []string
+}
+
+// QuarterTotal is the plan's cost in one calendar quarter.
+type QuarterTotal struct {
+	Quarter string // "2026-Q1"; "" for rows without a date
+	Total   decimal.Decimal
 }
 
 // ClassTotal is the waste of one class over the plan.
@@ -241,7 +294,9 @@ type Portfolio struct {
 	Places        int32
 	Lines         []PortfolioLine
 	Total         decimal.Decimal
+	OneTime       decimal.Decimal // one-time costs in Total, each charged once
 	ByMethod      map[string]decimal.Decimal
+	Quarters      []QuarterTotal // by calendar quarter, in order; rows without a date last
 	Classes       []ClassTotal
 	Codes         []CodeTotal
 	Solvents      []SolventTotal
@@ -253,16 +308,18 @@ type Portfolio struct {
 // Loader turns a plan row's scenario path into a prepared plan.
 type Loader func(path string) (*costing.Plan, error)
 
-// BuildPortfolio costs every plan row: the decision's method at the row's
-// mass unless the row forces one, times its runs, and rolls the plan up.
-// Totals are sums of the per-row totals, themselves exact multiples of the
-// per-batch ledger totals, so the year reconciles to the cent.
+// BuildPortfolio costs every plan row as a campaign of its runs: the
+// method cheapest per gram over the row's campaign unless the row forces
+// one, the recurring cost times the runs, and the one-time costs once per
+// scenario and method in the plan (or as the row's development column
+// says), then rolls the plan up. Totals are sums of the row totals, each
+// an exact multiple of a batch's rounded lines plus the rounded one-time
+// lines, so the year reconciles to the cent.
 func BuildPortfolio(file string, rows []PlanRow, load Loader, t *prices.Table) (*Portfolio, error) {
 	pf := &Portfolio{File: file, Currency: t.Currency, Places: prices.MinorUnits(t.Currency), ByMethod: map[string]decimal.Decimal{}}
-	classes := map[usage.WasteClass]*ClassTotal{}
-	codes := map[string]*CodeTotal{}
-	solvents := map[string]*SolventTotal{}
-	cautions := map[string]bool{}
+	roll := &rollUp{classes: map[usage.WasteClass]*ClassTotal{}, codes: map[string]*CodeTotal{}, solvents: map[string]*SolventTotal{},
+		cautions: map[string]bool{}, quarters: map[string]decimal.Decimal{}}
+	charged := map[string]bool{}
 	var errs []error
 	for _, row := range rows {
 		p, err := load(row.Scenario)
@@ -270,70 +327,102 @@ func BuildPortfolio(file string, rows []PlanRow, load Loader, t *prices.Table) (
 			errs = append(errs, &PlanError{File: file, Line: row.Line, Field: "scenario", Msg: err.Error()})
 			continue
 		}
-		line, err := costRow(p, row, t)
+		line, err := costRow(p, row, t, charged)
 		if err != nil {
 			errs = append(errs, &PlanError{File: file, Line: row.Line, Msg: err.Error()})
 			continue
 		}
 		pf.Lines = append(pf.Lines, line)
 		pf.Total = pf.Total.Add(line.Total)
+		pf.OneTime = pf.OneTime.Add(line.OneTime)
 		pf.ByMethod[line.Method] = pf.ByMethod[line.Method].Add(line.Total)
-		runs := float64(row.Runs)
-		el, at := line.Result.Usage.Hours()
-		pf.HoursElapsed += el * runs
-		pf.HoursAttended += at * runs
-		for _, w := range line.Waste {
-			c := classes[w.Stream.Class]
-			if c == nil {
-				c = &ClassTotal{Class: w.Stream.Class}
-				classes[w.Stream.Class] = c
-			}
-			c.Kg += w.Kg * runs
-			c.Disposal = c.Disposal.Add(w.Disposal.Mul(decimal.NewFromInt(int64(row.Runs))))
-			for _, code := range w.Classification.Codes {
-				k := code.Scheme + " " + code.Code
-				ct := codes[k]
-				if ct == nil {
-					ct = &CodeTotal{Scheme: code.Scheme, Code: code.Code, Title: code.Title}
-					codes[k] = ct
-				}
-				ct.Kg += w.Kg * runs
-			}
-		}
-		for _, l := range line.Result.Ledger.Lines {
-			if _, ok := p.Scenario.Solvents.Find(l.Demand.Item); !ok || l.Demand.Dim != units.Volume {
-				continue
-			}
-			st := solvents[l.Demand.Item]
-			if st == nil {
-				st = &SolventTotal{Solvent: l.Demand.Item}
-				solvents[l.Demand.Item] = st
-			}
-			amount := l.Amount.Mul(decimal.NewFromInt(int64(row.Runs)))
-			if l.Demand.Group == usage.Credit {
-				st.RecoveredL += -l.Demand.Qty * 1000 * runs
-				st.RecoveredCr = st.RecoveredCr.Add(amount)
-			} else {
-				st.Litres += l.Demand.Qty * 1000 * runs
-				st.Cost = st.Cost.Add(amount)
-			}
-		}
-		for _, c := range line.Cautions {
-			if !cautions[c] {
-				cautions[c] = true
-				pf.Cautions = append(pf.Cautions, c)
-			}
-		}
+		roll.add(pf, p, line)
 	}
 	if len(errs) > 0 {
 		return nil, errors.Join(errs...)
 	}
+	roll.finish(pf)
+	return pf, nil
+}
+
+// rollUp gathers a plan's waste, solvent, cautions and quarters.
+type rollUp struct {
+	classes  map[usage.WasteClass]*ClassTotal
+	codes    map[string]*CodeTotal
+	solvents map[string]*SolventTotal
+	cautions map[string]bool
+	quarters map[string]decimal.Decimal
+}
+
+// add rolls one costed row into the plan: per-batch quantities times the
+// runs, one-time lines once when the row bears them.
+func (r *rollUp) add(pf *Portfolio, p *costing.Plan, line PortfolioLine) {
+	runs := float64(line.Runs)
+	nRuns := decimal.NewFromInt(int64(line.Runs))
+	r.quarters[line.Quarter] = r.quarters[line.Quarter].Add(line.Total)
+	el, at := line.Result.Usage.Hours()
+	pf.HoursElapsed += el * runs
+	pf.HoursAttended += at * runs
+	for _, w := range line.Waste {
+		c := r.classes[w.Stream.Class]
+		if c == nil {
+			c = &ClassTotal{Class: w.Stream.Class}
+			r.classes[w.Stream.Class] = c
+		}
+		c.Kg += w.Kg * runs
+		c.Disposal = c.Disposal.Add(w.Disposal.Mul(nRuns))
+		for _, code := range w.Classification.Codes {
+			k := code.Scheme + " " + code.Code
+			ct := r.codes[k]
+			if ct == nil {
+				ct = &CodeTotal{Scheme: code.Scheme, Code: code.Code, Title: code.Title}
+				r.codes[k] = ct
+			}
+			ct.Kg += w.Kg * runs
+		}
+	}
+	once := 0.0
+	if line.OneTime.IsPositive() {
+		once = 1
+	}
+	for _, l := range line.Result.Ledger.Lines {
+		if _, ok := p.Scenario.Solvents.Find(l.Demand.Item); !ok || l.Demand.Dim != units.Volume {
+			continue
+		}
+		st := r.solvents[l.Demand.Item]
+		if st == nil {
+			st = &SolventTotal{Solvent: l.Demand.Item}
+			r.solvents[l.Demand.Item] = st
+		}
+		n := runs
+		if l.Demand.Group == usage.OneTime {
+			n = once
+		}
+		amount := l.Amount.Mul(decimal.NewFromFloat(n))
+		if l.Demand.Group == usage.Credit {
+			st.RecoveredL += -l.Demand.Qty * 1000 * n
+			st.RecoveredCr = st.RecoveredCr.Add(amount)
+		} else {
+			st.Litres += l.Demand.Qty * 1000 * n
+			st.Cost = st.Cost.Add(amount)
+		}
+	}
+	for _, c := range line.Cautions {
+		if !r.cautions[c] {
+			r.cautions[c] = true
+			pf.Cautions = append(pf.Cautions, c)
+		}
+	}
+}
+
+// finish sorts the roll-up into the portfolio.
+func (r *rollUp) finish(pf *Portfolio) {
 	for _, c := range usage.WasteClasses {
-		if ct := classes[c]; ct != nil {
+		if ct := r.classes[c]; ct != nil {
 			pf.Classes = append(pf.Classes, *ct)
 		}
 	}
-	for _, ct := range codes {
+	for _, ct := range r.codes {
 		pf.Codes = append(pf.Codes, *ct)
 	}
 	sort.Slice(pf.Codes, func(i, j int) bool {
@@ -342,51 +431,118 @@ func BuildPortfolio(file string, rows []PlanRow, load Loader, t *prices.Table) (
 		}
 		return pf.Codes[i].Code < pf.Codes[j].Code
 	})
-	for _, st := range solvents {
+	for _, st := range r.solvents {
 		pf.Solvents = append(pf.Solvents, *st)
 	}
 	sort.Slice(pf.Solvents, func(i, j int) bool { return pf.Solvents[i].Solvent < pf.Solvents[j].Solvent })
-	return pf, nil
+	for q, v := range r.quarters {
+		pf.Quarters = append(pf.Quarters, QuarterTotal{Quarter: q, Total: v})
+	}
+	sort.Slice(pf.Quarters, func(i, j int) bool {
+		a, b := pf.Quarters[i].Quarter, pf.Quarters[j].Quarter
+		if (a == "") != (b == "") {
+			return b == ""
+		}
+		return a < b
+	})
 }
 
-// costRow runs one plan row.
-func costRow(p *costing.Plan, row PlanRow, t *prices.Table) (PortfolioLine, error) {
-	line := PortfolioLine{PlanRow: row, Title: p.Scenario.Name, Cautions: p.Cautions()}
-	j := -1
+// rowCost is one method costed as a plan row's campaign.
+type rowCost struct {
+	j       int
+	c       campaign.Cost
+	oneTime decimal.Decimal // charged on this row
+	total   decimal.Decimal
+	perGram float64
+}
+
+// costRow runs one plan row as a campaign of its runs. charged records the
+// scenario and method pairs whose one-time costs an earlier row bore.
+func costRow(p *costing.Plan, row PlanRow, t *prices.Table, charged map[string]bool) (PortfolioLine, error) {
+	line := PortfolioLine{PlanRow: row, Title: p.Scenario.Name, Cautions: p.Cautions(), Quarter: Quarter(row.Date)}
+	names := p.MethodNames()
+	cands := make([]int, 0, len(names))
 	if row.Method != "" {
-		for k, name := range p.MethodNames() {
+		for k, name := range names {
 			if name == row.Method {
-				j = k
+				cands = append(cands, k)
 			}
 		}
-		if j < 0 {
-			return line, fmt.Errorf("method %q: write one of %s, or leave it empty to let sepcost choose", row.Method, strings.Join(p.MethodNames(), ", "))
+		if len(cands) == 0 {
+			return line, fmt.Errorf("method %q: write one of %s, or leave it empty to let sepcost choose", row.Method, strings.Join(names, ", "))
 		}
 		line.Forced = true
 	} else {
-		d, err := Decide(p, t, row.MassKg)
+		for k := range names {
+			cands = append(cands, k)
+		}
+	}
+	key := func(j int) string { return row.Scenario + "\x00" + names[j] }
+	var best *rowCost
+	var reasons []string
+	for _, j := range cands {
+		rc, reason, err := costMethod(p, j, row, t, row.Development == PerRow || (row.Development != Developed && !charged[key(j)]))
 		if err != nil {
 			return line, err
 		}
-		if d.Winner == "" {
-			return line, fmt.Errorf("no method is feasible for %s at %s", p.Scenario.Name, scenario.FormatMass(row.MassKg))
+		if reason != "" {
+			reasons = append(reasons, names[j]+": "+reason)
+			continue
 		}
-		for k, name := range p.MethodNames() {
-			if name == d.Winner {
-				j = k
-			}
+		if best == nil || rc.perGram < best.perGram {
+			best = rc
 		}
 	}
-	res, err := p.RunOne(j, row.MassKg, t)
+	if best == nil {
+		if line.Forced {
+			return line, fmt.Errorf("%s is not feasible for %s at %s: %s", row.Method, p.Scenario.Name, scenario.FormatMass(row.MassKg), strings.Join(reasons, "; "))
+		}
+		return line, fmt.Errorf("no method is feasible for %s at %s", p.Scenario.Name, scenario.FormatMass(row.MassKg))
+	}
+	res, err := p.RunOne(best.j, row.MassKg, t)
 	if err != nil {
 		return line, err
 	}
-	if !res.Usage.Feasible {
-		return line, fmt.Errorf("%s is not feasible for %s at %s: %s", p.MethodNames()[j], p.Scenario.Name, scenario.FormatMass(row.MassKg), res.Usage.Reason)
+	res.Ledger = best.c.Ledger
+	if best.oneTime.IsPositive() {
+		charged[key(best.j)] = true
 	}
-	line.Method = p.MethodNames()[j]
+	line.Method = names[best.j]
 	line.Result = res
-	line.Total = res.Ledger.Total.Mul(decimal.NewFromInt(int64(row.Runs)))
+	line.PerBatch, line.OneTime, line.Total = best.c.PerBatch, best.oneTime, best.total
 	line.Waste = wasteRows(p, []float64{row.MassKg}, []string{line.Method}, [][]Result{{res}})
 	return line, nil
+}
+
+// costMethod costs method j as the row's campaign; bears says whether the
+// row pays the method's one-time costs. A method that is not feasible
+// gives its reason instead.
+func costMethod(p *costing.Plan, j int, row PlanRow, t *prices.Table, bears bool) (*rowCost, string, error) {
+	t, err := p.SitePrices(t)
+	if err != nil {
+		return nil, "", err
+	}
+	u, err := chosen(p, j, row.MassKg, t)
+	if err != nil {
+		return nil, "", err
+	}
+	if !u.Feasible || u.ProductOutKg <= 0 {
+		return nil, u.Reason, nil
+	}
+	c, err := campaign.Run(u, t, max(row.Runs, 1), decimal.Zero, campaign.DefaultShifts)
+	if err != nil {
+		return nil, "", err
+	}
+	rc := &rowCost{j: j, c: c}
+	if bears && row.Runs > 0 {
+		rc.oneTime = c.OneTime
+	}
+	rc.total = c.PerBatch.Mul(decimal.NewFromInt(int64(row.Runs))).Add(rc.oneTime)
+	// The choice is made on the campaign as charged; a row of no runs
+	// chooses as one batch would.
+	rc.perGram = rc.total.InexactFloat64() / (float64(row.Runs) * u.ProductOutKg * 1000)
+	if row.Runs == 0 {
+		rc.perGram = c.PerBatch.Add(c.OneTime).InexactFloat64() / (u.ProductOutKg * 1000)
+	}
+	return rc, "", nil
 }

@@ -2,6 +2,7 @@ package scale
 
 import (
 	"sepcost/costing"
+	"sepcost/costing/equipment"
 	"sepcost/costing/prices"
 	"sepcost/costing/source"
 	"sepcost/costing/usage"
@@ -42,5 +43,8 @@ type Report struct {
 	Assumptions  []Assumption // defaults the user did not set that move a method's cost at TargetKg by more than AssumptionSwing
 	Waste        []WasteRow   // every stream of every feasible result, classified
 	Greenness    []SolventGreenness
-	WasteSector  string // the EU List of Waste chapter used for the codes
+	WasteSector  string           // the EU List of Waste chapter used for the codes
+	Campaign     *CampaignReport  // the scenario's campaign (nil when it describes none)
+	Budget       *Budget          // the request for the campaign's chosen method (nil without a campaign)
+	Equipment    *equipment.Table // the site equipment table the models chose from
 }

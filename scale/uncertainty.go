@@ -107,6 +107,10 @@ func Sample(p *costing.Plan, t *prices.Table, targetKg float64, draws int, seed 
 // its own generator seeded from (seed, draw), so results do not depend on
 // how the draws are spread over the cores.
 func SampleAcross(p *costing.Plan, t *prices.Table, targetKg float64, masses []float64, draws int, seed uint64, progress func(done int)) (*Uncertainty, error) {
+	t, err := p.SitePrices(t) // with the equipment's charges, as every ledger of the plan
+	if err != nil {
+		return nil, err
+	}
 	nominal := ledger.NewRates(t)
 	ms := append(append([]float64(nil), masses...), targetKg)
 	d := newDesign(p, t, usedPrices(p, t, ms...))

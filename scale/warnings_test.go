@@ -1,6 +1,7 @@
 package scale
 
 import (
+	"bytes"
 	"strings"
 	"testing"
 
@@ -10,13 +11,16 @@ import (
 
 // Impractical plans are warnings and reach the report: in the solid demo
 // the crystallization's screening (2 g of crude, templates/scenario.yaml)
-// is more than a 500 mg batch, and at 5 kg chromatography needs dozens of
-// runs of the largest column (300 mm, about 50 g of crude per run by the
-// touching-band loading: some 100 runs; usage.ManyRepeats is 10). The same
+// is more than a 500 mg batch, and at 5 kg chromatography on a site whose
+// largest column is 300 mm (column_diameters; the built-in equipment table
+// has process columns) needs dozens of runs (a 300 mm column with a 20 cm
+// bed holds about 7 kg of silica, 50–110 g of crude at the loadings tried:
+// 45–95 runs; usage.ManyRepeats is 10). The same
 // warning at several masses, with other figures, is listed once with all
 // its masses.
 func TestImpracticalPlansWarn(t *testing.T) {
-	p, pt := plan(t, templates.Scenario)
+	y := bytes.Replace(templates.Scenario, []byte("  loading_rule: theory\n"), []byte("  loading_rule: theory\n  column_diameters: [\"100 mm\", \"200 mm\", \"300 mm\"]\n"), 1)
+	p, pt := plan(t, y)
 	r, err := EstimateWith(p, pt, []float64{0.0005, 0.001, 5}, Options{})
 	if err != nil {
 		t.Fatal(err)

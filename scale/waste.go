@@ -104,8 +104,11 @@ func classKey(method string, s usage.Stream) string {
 	return string(b)
 }
 
-// eluentBlends returns the chromatography eluents as made up before use, or
-// nil for other methods.
+// eluentBlends returns the chromatography eluents as made up before use
+// that went into the stream (a blend counts when one of its solvents is in
+// the stream: the dry-load solvent, evaporated before the column and
+// collected on its own, is not a blend of the spent eluent), or nil for
+// other methods.
 func eluentBlends(sc *scenario.Scenario, method string, s usage.Stream) []waste.Blend {
 	ch := sc.Chromatography
 	if method != "chromatography" || ch == nil {
@@ -126,7 +129,25 @@ func eluentBlends(sc *scenario.Scenario, method string, s usage.Stream) []waste.
 	if ch.LoadingSolvent != "" {
 		out = append(out, mix("loading solvent "+ch.LoadingSolvent, scenario.Mix{{Solvent: ch.LoadingSolvent, Fraction: 1}}))
 	}
-	return out
+	in := map[string]bool{}
+	for _, c := range s.Components {
+		if c.Solvent && c.Kg > 0 {
+			in[c.Name] = true
+		}
+	}
+	kept := out[:0]
+	for _, b := range out {
+		for id := range b.Parts {
+			if in[id] {
+				kept = append(kept, b)
+				break
+			}
+		}
+	}
+	if len(kept) == 0 {
+		return nil
+	}
+	return kept
 }
 
 // greenness lists the scenario's solvents with their guide class and the

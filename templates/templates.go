@@ -15,6 +15,12 @@ var Scenario []byte
 //go:embed prices.csv
 var Prices []byte
 
+// Equipment is the starter (and built-in default) site equipment table,
+// CSV with example sizes, rates and prices.
+//
+//go:embed equipment.csv
+var Equipment []byte
+
 // Liquid is a second demo scenario: a liquid product that can be distilled.
 //
 //go:embed liquid.yaml
@@ -22,6 +28,7 @@ var Liquid []byte
 
 // File names written by `sepcost init`.
 const (
-	ScenarioName = "scenario.yaml"
-	PricesName   = "prices.csv"
+	ScenarioName  = "scenario.yaml"
+	PricesName    = "prices.csv"
+	EquipmentName = "equipment.csv"
 )

@@ -94,16 +94,16 @@ func TestBadInput(t *testing.T) {
 		{name: "price table with too many items", files: with(map[string]string{"prices.csv": string(templates.Prices) + manyItems(10001)}),
 			args: []string{"check", "{dir}/s.yaml", "--prices", "{dir}/prices.csv"}, code: 1,
 			want: []string{"prices.csv:", "more than 10000 items"}},
-		{name: "long price field is cut short", files: with(map[string]string{"prices.csv": string(templates.Prices) + strings.Repeat("y", 3000) + ",kg,1,EUR,,,\n" + strings.Repeat("y", 3000) + ",kg,1,EUR,,,\n"}),
+		{name: "long price field is cut short", files: with(map[string]string{"prices.csv": string(templates.Prices) + strings.Repeat("y", 3000) + ",kg,1,EUR,,,,\n" + strings.Repeat("y", 3000) + ",kg,1,EUR,,,,\n"}),
 			args: []string{"check", "{dir}/s.yaml", "--prices", "{dir}/prices.csv"}, code: 1,
 			want: []string{"prices.csv:", "listed twice", `yyy…"`}, notWant: []string{strings.Repeat("y", 41)}},
 		// 6. Settings without ranges.
-		{name: "share above 100 %", files: setting(`chromatography.mixed_fraction_loss: "150 %"`),
+		{name: "share above 100 %", files: setting(`chromatography.silica_retention_loss: "150 %"`),
 			args: []string{"check", "{dir}/s.yaml", "--prices", "{dir}/prices.csv"}, code: 1,
-			want: []string{"s.yaml:9:", "settings.chromatography.mixed_fraction_loss", "outside the range", "0 to 0.5"}},
-		{name: "zero evaporation rate", files: setting(`chromatography.evaporation_rate: "0 L/h"`),
+			want: []string{"s.yaml:9:", "settings.chromatography.silica_retention_loss", "outside the range", "0 to 0.5"}},
+		{name: "zero heater efficiency", files: setting(`chromatography.evaporator_heat_efficiency: "0 %"`),
 			args: []string{"check", "{dir}/s.yaml", "--prices", "{dir}/prices.csv"}, code: 1,
-			want: []string{"s.yaml:9:", "settings.chromatography.evaporation_rate", "0.036 to 3600 L/h"}},
+			want: []string{"s.yaml:9:", "settings.chromatography.evaporator_heat_efficiency", "0.01 to 1"}},
 		{name: "negative time", files: setting(`distillation.cooldown_time: "-30 min"`),
 			args: []string{"check", "{dir}/s.yaml", "--prices", "{dir}/prices.csv"}, code: 1,
 			want: []string{"s.yaml:9:", "settings.distillation.cooldown_time", "0 to 2880 min"}},
@@ -302,7 +302,7 @@ func sparse(name string, size int64) func(*testing.T, string) {
 func manyItems(n int) string {
 	var b strings.Builder
 	for i := range n {
-		fmt.Fprintf(&b, "reagent %d,kg,1.00,EUR,consumable,invented,2026-01-01\n", i)
+		fmt.Fprintf(&b, "reagent %d,kg,1.00,EUR,consumable,invented,2026-01-01,\n", i)
 	}
 	return b.String()
 }

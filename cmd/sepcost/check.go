@@ -16,8 +16,9 @@ import (
 )
 
 type checkOptions struct {
-	scenario string
-	prices   string
+	scenario  string
+	prices    string
+	equipment string
 }
 
 func newCheckCommand() *cobra.Command {
@@ -36,6 +37,7 @@ The exit code is 1 when anything must be fixed.`,
 		},
 	}
 	cmd.Flags().StringVar(&opts.prices, "prices", "", "price table CSV (default: prices.csv beside the scenario)")
+	cmd.Flags().StringVar(&opts.equipment, "equipment", "", "site equipment table CSV (default: equipment.csv beside the scenario if there is one, else the built-in table)")
 	return cmd
 }
 
@@ -58,7 +60,7 @@ func runCheck(_ context.Context, opts *checkOptions, stdout io.Writer) error {
 	}
 	var plan *costing.Plan
 	if sc != nil {
-		plan, err = costing.Prepare(sc)
+		plan, err = preparePlan(sc, opts.equipment, opts.scenario)
 		if err != nil {
 			problems = append(problems, err)
 		}

@@ -11,15 +11,16 @@ import (
 )
 
 type estimateOptions struct {
-	scenario string
-	prices   string
-	masses   massList
-	target   string
-	out      string
-	format   string
-	force    bool
-	draws    int
-	seed     uint64
+	scenario  string
+	prices    string
+	equipment string
+	masses    massList
+	target    string
+	out       string
+	format    string
+	force     bool
+	draws     int
+	seed      uint64
 }
 
 func newEstimateCommand() *cobra.Command {
@@ -43,6 +44,7 @@ at the scenario's target_mass (else its largest mass).`,
 	}
 	f := cmd.Flags()
 	f.StringVar(&opts.prices, "prices", "", "price table CSV (default: prices.csv beside the scenario)")
+	f.StringVar(&opts.equipment, "equipment", "", "site equipment table CSV (default: equipment.csv beside the scenario if there is one, else the built-in table)")
 	f.Var(&opts.masses, "mass", `crude batch masses with units, e.g. "250mg,20g,2kg" (default: the scenario's masses)`)
 	addTargetFlag(cmd, &opts.target)
 	addOutputFlags(cmd, &opts.out, &opts.format, &opts.force)
@@ -81,7 +83,7 @@ func runEstimate(_ context.Context, opts *estimateOptions, stdout, stderr io.Wri
 	if err != nil {
 		return err
 	}
-	plan, t, err := loadPlan(opts.scenario, opts.prices)
+	plan, t, err := loadPlan(opts.scenario, opts.prices, opts.equipment)
 	if err != nil {
 		return err
 	}

@@ -21,10 +21,11 @@ func newInitCommand() *cobra.Command {
 	opts := &initOptions{}
 	cmd := &cobra.Command{
 		Use:   "init [DIR]",
-		Short: "Write a starter scenario.yaml and prices.csv to edit",
-		Long: `Writes a commented starter scenario (scenario.yaml) and a price table with
-example prices (prices.csv) into DIR (default: the current folder), creating
-DIR if needed. Existing files are left alone unless --force.`,
+		Short: "Write a starter scenario.yaml, prices.csv and equipment.csv to edit",
+		Long: `Writes a commented starter scenario (scenario.yaml), a price table with
+example prices (prices.csv) and a site equipment table with example sizes,
+rates and prices (equipment.csv) into DIR (default: the current folder),
+creating DIR if needed. Existing files are left alone unless --force.`,
 		Args: cobra.MaximumNArgs(1),
 		RunE: func(cmd *cobra.Command, args []string) error {
 			opts.dir = "."
@@ -45,7 +46,7 @@ func runInit(_ context.Context, opts *initOptions, stdout io.Writer) error {
 	files := []struct {
 		name string
 		data []byte
-	}{{templates.ScenarioName, templates.Scenario}, {templates.PricesName, templates.Prices}}
+	}{{templates.ScenarioName, templates.Scenario}, {templates.PricesName, templates.Prices}, {templates.EquipmentName, templates.Equipment}}
 	// Check both first so that a refusal writes neither.
 	if !opts.force {
 		for _, f := range files {

@@ -10,6 +10,7 @@ import (
 	"sepcost/cmd/sepcost/internal/plain"
 	"sepcost/cmd/sepcost/internal/workbook"
 	"sepcost/costing"
+	"sepcost/costing/equipment"
 	"sepcost/costing/prices"
 	"sepcost/costing/scenario"
 	"sepcost/scale"
@@ -67,8 +68,36 @@ func deliver(r *scale.Report, format, out string, force bool, stdout, stderr io.
 	return writeOut(buf, out, force, stdout, stderr)
 }
 
-// loadPlan reads a scenario and its price table and prepares the plan.
-func loadPlan(scenarioPath, pricesPath string) (*costing.Plan, *prices.Table, error) {
+// loadEquipment reads --equipment, or else equipment.csv beside the
+// scenario (the layout `sepcost init` writes), or else returns nil for the
+// built-in table.
+func loadEquipment(path, scenarioPath string) (*equipment.Table, error) {
+	if path == "" {
+		guess := filepath.Join(filepath.Dir(scenarioPath), "equipment.csv")
+		if _, err := os.Stat(guess); err != nil {
+			return nil, nil
+		}
+		path = guess
+	}
+	data, err := readInput(path, "equipment table", equipment.MaxFileSize)
+	if err != nil {
+		return nil, err
+	}
+	return equipment.Read(bytes.NewReader(data), path)
+}
+
+// preparePlan prepares a scenario's plan with the site's equipment table.
+func preparePlan(sc *scenario.Scenario, equipmentPath, scenarioPath string) (*costing.Plan, error) {
+	eq, err := loadEquipment(equipmentPath, scenarioPath)
+	if err != nil {
+		return nil, err
+	}
+	return costing.PrepareWith(sc, costing.Options{Equipment: eq})
+}
+
+// loadPlan reads a scenario, its price table and the site's equipment
+// table and prepares the plan.
+func loadPlan(scenarioPath, pricesPath, equipmentPath string) (*costing.Plan, *prices.Table, error) {
 	sc, err := loadScenario(scenarioPath)
 	if err != nil {
 		return nil, nil, err
@@ -77,7 +106,7 @@ func loadPlan(scenarioPath, pricesPath string) (*costing.Plan, *prices.Table, er
 	if err != nil {
 		return nil, nil, err
 	}
-	plan, err := costing.Prepare(sc)
+	plan, err := preparePlan(sc, equipmentPath, scenarioPath)
 	if err != nil {
 		return nil, nil, err
 	}

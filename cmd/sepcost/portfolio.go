@@ -15,11 +15,12 @@ import (
 )
 
 type portfolioOptions struct {
-	plan   string
-	prices string
-	out    string
-	format string
-	force  bool
+	plan      string
+	prices    string
+	equipment string
+	out       string
+	format    string
+	force     bool
 }
 
 func newPortfolioCommand() *cobra.Command {
@@ -27,12 +28,16 @@ func newPortfolioCommand() *cobra.Command {
 	cmd := &cobra.Command{
 		Use:   "portfolio PLAN.csv",
 		Short: "Cost a year's plan of batches and roll up cost, waste, solvent and hours",
-		Long: `Reads a plan CSV with the header scenario,mass,runs and an optional method
-column: a scenario file (relative to the plan), a batch mass with its unit,
-how many times that batch is run, and optionally the method to force. Each
-row takes the cheapest feasible method at its mass unless forced. The
-roll-up gives cost per method, waste by class and by suggested code, solvent
-purchases by solvent and hours; totals reconcile to the cent.`,
+		Long: `Reads a plan CSV with the header scenario,mass,runs and the optional
+columns method, date and development: a scenario file (relative to the
+plan), a batch mass with its unit, how many times that batch is run,
+optionally the method to force, the planned date (YYYY-MM-DD, rolled up by
+quarter) and where one-time development costs are charged (scenario: once
+per scenario and method in the plan, the default; row: on this row; done:
+already developed). Each row is costed as a campaign of its runs and takes
+the method cheapest per gram over that campaign unless forced. The roll-up
+gives cost per method and quarter, waste by class and by suggested code,
+solvent purchases by solvent and hours; totals reconcile to the cent.`,
 		Example: `  sepcost portfolio plan.csv --prices prices.csv -o year.xlsx`,
 		Args:    oneFile("plan file (CSV)", "plan.csv --prices prices.csv"),
 		RunE: func(cmd *cobra.Command, args []string) error {
@@ -41,6 +46,7 @@ purchases by solvent and hours; totals reconcile to the cent.`,
 		},
 	}
 	cmd.Flags().StringVar(&opts.prices, "prices", "", "price table CSV (default: prices.csv beside the plan)")
+	cmd.Flags().StringVar(&opts.equipment, "equipment", "", "site equipment table CSV (default: equipment.csv beside the plan if there is one, else the built-in table)")
 	addOutputFlags(cmd, &opts.out, &opts.format, &opts.force)
 	return cmd
 }
@@ -71,7 +77,7 @@ func runPortfolio(_ context.Context, opts *portfolioOptions, stdout, stderr io.W
 		if err != nil {
 			return nil, err
 		}
-		return costing.Prepare(sc)
+		return preparePlan(sc, opts.equipment, opts.plan)
 	}
 	pf, err := scale.BuildPortfolio(opts.plan, rows, load, t)
 	if err != nil {

@@ -14,17 +14,18 @@ import (
 )
 
 type sweepOptions struct {
-	scenario string
-	prices   string
-	from, to string
-	toGiven  bool // --to was given on the command line
-	points   int
-	target   string
-	out      string
-	format   string
-	force    bool
-	draws    int
-	seed     uint64
+	scenario  string
+	prices    string
+	equipment string
+	from, to  string
+	toGiven   bool // --to was given on the command line
+	points    int
+	target    string
+	out       string
+	format    string
+	force     bool
+	draws     int
+	seed      uint64
 }
 
 func newSweepCommand() *cobra.Command {
@@ -49,6 +50,7 @@ target_mass (else its largest mass).`,
 	}
 	f := cmd.Flags()
 	f.StringVar(&opts.prices, "prices", "", "price table CSV (default: prices.csv beside the scenario)")
+	f.StringVar(&opts.equipment, "equipment", "", "site equipment table CSV (default: equipment.csv beside the scenario if there is one, else the built-in table)")
 	f.StringVar(&opts.from, "from", "100mg", "smallest crude batch mass, with its unit")
 	f.StringVar(&opts.to, "to", "10kg", "largest crude batch mass, with its unit")
 	f.IntVar(&opts.points, "points", 30, "number of log-spaced masses (2 to 10000)")
@@ -94,7 +96,7 @@ func runSweep(_ context.Context, opts *sweepOptions, stdout, stderr io.Writer) e
 	if err != nil {
 		return err
 	}
-	plan, t, err := loadPlan(opts.scenario, opts.prices)
+	plan, t, err := loadPlan(opts.scenario, opts.prices, opts.equipment)
 	if err != nil {
 		return err
 	}

@@ -13,12 +13,13 @@ import (
 )
 
 type wasteOptions struct {
-	scenario string
-	prices   string
-	masses   massList
-	out      string
-	format   string
-	force    bool
+	scenario  string
+	prices    string
+	equipment string
+	masses    massList
+	out       string
+	format    string
+	force     bool
 }
 
 func newWasteCommand() *cobra.Command {
@@ -40,6 +41,7 @@ local rules; the codes are suggestions to start from.`,
 		},
 	}
 	cmd.Flags().StringVar(&opts.prices, "prices", "", "price table CSV (default: prices.csv beside the scenario)")
+	cmd.Flags().StringVar(&opts.equipment, "equipment", "", "site equipment table CSV (default: equipment.csv beside the scenario if there is one, else the built-in table)")
 	cmd.Flags().Var(&opts.masses, "mass", `crude batch masses with units, e.g. "2kg" (default: the scenario's masses)`)
 	addOutputFlags(cmd, &opts.out, &opts.format, &opts.force)
 	return cmd
@@ -50,7 +52,7 @@ func runWaste(_ context.Context, opts *wasteOptions, stdout, stderr io.Writer) e
 	if err != nil {
 		return err
 	}
-	plan, t, err := loadPlan(opts.scenario, opts.prices)
+	plan, t, err := loadPlan(opts.scenario, opts.prices, opts.equipment)
 	if err != nil {
 		return err
 	}

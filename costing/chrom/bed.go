@@ -10,7 +10,7 @@ import "math"
 //
 // ρb packed bed density, ρs skeletal density, vp pore volume (per mass),
 // εe the interparticle porosity. With ρb = 0.5 g/mL and ρs = 2.2 g/mL this
-// is 1.55 mL per g (REFERENCES: derived from Silica gel 60 data).
+// is 1.55 mL per g (derived from the silica gel 60 data of the coefficients).
 func ColumnVolumePerMass(bedDensity, skeletalDensity float64) float64 {
 	return 1/bedDensity - 1/skeletalDensity
 }
@@ -33,33 +33,4 @@ type Column struct {
 	BedHeight float64 // m
 	Runs      int     // how many times the column is packed and run
 	Silica    float64 // kg of silica per run
-}
-
-// ChooseColumn picks the narrowest available diameter whose bed, no taller
-// than hMax, holds the silica needed per run, and packs exactly that silica
-// (a bed shorter than hMin is raised to hMin). Above the largest column the
-// batch is split into the fewest equal runs that fit. diameters must be
-// ascending. Keeping the bed near the 15 cm of Still et al. 1978 rather
-// than at one fixed height avoids packing up to four times the silica
-// needed when the next diameter up is much wider.
-func ChooseColumn(silicaNeeded, hMin, hMax, bedDensity float64, diameters []float64) Column {
-	largest := diameters[len(diameters)-1]
-	capMax := BedSilica(largest, hMax, bedDensity)
-	runs := int(math.Ceil(silicaNeeded/capMax - 1e-9))
-	if runs < 1 {
-		runs = 1
-	}
-	perRun := silicaNeeded / float64(runs)
-	d := largest
-	for _, di := range diameters {
-		if BedSilica(di, hMax, bedDensity) >= perRun*(1-1e-9) {
-			d = di
-			break
-		}
-	}
-	h := perRun / BedSilica(d, 1, bedDensity)
-	if h < hMin {
-		h = hMin
-	}
-	return Column{Diameter: d, BedHeight: h, Runs: runs, Silica: BedSilica(d, h, bedDensity)}
 }

@@ -10,7 +10,7 @@ const Method = "chromatography"
 
 // Coefficient keys (also the keys users write under settings:).
 const (
-	KeyBedHeight        = "chromatography.bed_height"
+	KeyRefBed           = "chromatography.calibration_bed_height"
 	KeyBedMin           = "chromatography.bed_height_min"
 	KeyBedMax           = "chromatography.bed_height_max"
 	KeyBedDensity       = "chromatography.bed_density"
@@ -29,12 +29,10 @@ const (
 	KeyLoadTime         = "chromatography.loading_time"
 	KeyCleanTime        = "chromatography.cleanup_time"
 	KeyCombinePerFrac   = "chromatography.combining_time_per_fraction"
-	KeyEvapRate         = "chromatography.evaporation_rate"
 	KeyEvapAttended     = "chromatography.evaporation_attended_share"
 	KeyHeaterEff        = "chromatography.evaporator_heat_efficiency"
 	KeyChillerCOP       = "chromatography.chiller_cop"
 	KeyBathDelta        = "chromatography.evaporation_warmup"
-	KeyMixedLoss        = "chromatography.mixed_fraction_loss"
 	KeyRetainedLoss     = "chromatography.silica_retention_loss"
 	KeyLoadSolventPerKg = "chromatography.loading_solvent_per_crude"
 	KeyDrySorbent       = "chromatography.dry_load_silica_ratio"
@@ -44,19 +42,18 @@ const (
 	KeyPlateMass        = "chromatography.tlc_plate_mass"
 	KeyRouteTolerance   = "chromatography.route_agreement"
 	KeyQs               = "chromatography.saturation_capacity"
-	KeyPlates           = "chromatography.plate_number"
 )
 
-// Defaults returns the model's coefficients with their sources. Calibrated
-// values (saturation capacity and plate number) are added by Prepare.
+// Defaults returns the model's coefficients with their sources. The
+// calibrated saturation capacity is added by Prepare (AddCalibration).
 func Defaults() []source.Coefficient {
 	c := func(key, label string, si float64, dim units.Dim, unit, src string, mark source.Mark) source.Coefficient {
 		lo, hi := rangeOf(key)
 		return source.Coefficient{Key: key, Method: Method, Label: label, SI: si, Dim: dim, Unit: unit, Source: src, Mark: mark, Lo: lo, Hi: hi}
 	}
 	still := "Still, W. C.; Kahn, M.; Mitra, A. J. Org. Chem. 1978, 43, 2923"
-	return []source.Coefficient{
-		c(KeyBedHeight, "reference bed height (calibration against Still's table)", 0.15, units.Length, "cm", still+`: a bed of about 5–6 in`, source.FromMemory),
+	return append([]source.Coefficient{
+		r(c(KeyRefBed, "bed height of Still's columns (the calibration's reference, not the column packed here)", 0.15, units.Length, "cm", still+`: a bed of about 5–6 in`, source.FromMemory), 0.05, 0.50),
 		c(KeyBedMin, "shortest bed packed", 0.10, units.Length, "cm", "beds much below 10 cm resolve poorly", source.CommonPractice),
 		c(KeyBedMax, "tallest bed packed before a wider column is taken", 0.20, units.Length, "cm", "flash beds of about 10–20 cm", source.CommonPractice),
 		c(KeyBedDensity, "packed bed density of silica gel 60", 500, units.Density, "g/mL", "typical 0.45–0.55 g/mL for 40–63 µm silica gel 60", source.FromMemory),
@@ -75,12 +72,10 @@ func Defaults() []source.Coefficient {
 		c(KeyLoadTime, "time to load the sample", 10*60, units.Time, "min", "", source.CommonPractice),
 		c(KeyCleanTime, "time to empty and clean a column", 15*60, units.Time, "min", "", source.CommonPractice),
 		c(KeyCombinePerFrac, "time to combine one product fraction", 0.5*60, units.Time, "min", "", source.CommonPractice),
-		c(KeyEvapRate, "rotary-evaporator distillation rate", 2e-3/3600, units.VolumeFlow, "L/h", "a bench rotary evaporator with a 1–2 L flask, for common eluents", source.CommonPractice),
 		c(KeyEvapAttended, "share of evaporation time a person attends", 0.25, units.None, "", "", source.CommonPractice),
 		c(KeyHeaterEff, "share of bath electricity that reaches the solvent", 0.6, units.None, "", "heat losses from an open water bath", source.CommonPractice),
 		c(KeyChillerCOP, "coefficient of performance of the condenser chiller", 2.5, units.None, "", "small recirculating chillers, about 2–3", source.CommonPractice),
 		c(KeyBathDelta, "warm-up of the evaporated solvent from room temperature", 20, units.Temperature, "K", "a 40 °C bath from 20 °C", source.CommonPractice),
-		c(KeyMixedLoss, "product lost in mixed fractions", 0.03, units.None, "", "a few per cent of product sits in fractions mixed with the impurity and is set aside", source.CommonPractice),
 		c(KeyRetainedLoss, "product retained on the silica", 0.02, units.None, "", "irreversible adsorption and hold-up on silica", source.CommonPractice),
 		c(KeyLoadSolventPerKg, "solvent to dissolve the crude for liquid loading", 2e-3, units.SpecificVolume, "mL/g", "a minimum volume, about 1–3 mL per g of crude", source.CommonPractice),
 		c(KeyDrySorbent, "silica for dry loading per crude", 2, units.None, "", "2–3 g silica per g crude", source.CommonPractice),
@@ -88,11 +83,12 @@ func Defaults() []source.Coefficient {
 		c(KeySandHeight, "sand layers (below and above the bed, together)", 0.01, units.Length, "cm", still+": a thin sand layer protects the bed surface", source.CommonPractice),
 		c(KeySandDensity, "bulk density of sea sand", 1500, units.Density, "g/mL", "dry quartz sand, about 1.4–1.6 g/mL", source.FromMemory),
 		c(KeyPlateMass, "mass of one TLC plate (waste)", 2e-3, units.Mass, "g", "aluminium-backed silica plate, 5 × 10 cm", source.CommonPractice),
-		c(KeyRouteTolerance, "factor by which the two loading routes may differ before a warning", 1.5, units.None, "", "", source.CommonPractice),
-	}
+		c(KeyRouteTolerance, "factor by which the two loading rules may differ before a warning", 2, units.None, "", "two estimates of the same quantity a factor of two apart are worth a look", source.CommonPractice),
+	}, scaleDefaults(c)...)
 }
 
-// DefaultColumnsM are the column inner diameters a site is assumed to have
-// unless the scenario lists its own: glass flash columns from 10 mm to
-// 300 mm (common practice, no source; larger kilo-lab columns exist).
-var DefaultColumnsM = []float64{0.010, 0.015, 0.020, 0.025, 0.030, 0.040, 0.050, 0.060, 0.080, 0.100, 0.150, 0.200, 0.300}
+// r gives a coefficient its physical range (SI, inclusive).
+func r(c source.Coefficient, lo, hi float64) source.Coefficient {
+	c.Lo, c.Hi = lo, hi
+	return c
+}

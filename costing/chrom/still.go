@@ -4,8 +4,7 @@ import "math"
 
 // StillRow is one row of Table 1 of Still, W. C.; Kahn, M.; Mitra, A.
 // "Rapid chromatographic technique for preparative separations with moderate
-// resolution", J. Org. Chem. 1978, 43, 2923–2925 (confirmed, as reproduced in
-// REFERENCES.md): a column of about 15 cm of 40–63 µm silica run at a solvent
+// resolution", J. Org. Chem. 1978, 43, 2923–2925 (confirmed): a column of about 15 cm of 40–63 µm silica run at a solvent
 // level falling about 5 cm/min.
 type StillRow struct {
 	DiameterM  float64 // column inner diameter, m

@@ -127,8 +127,8 @@ func Defaults() []source.Coefficient {
 		c(KeyEvapAttended, "share of evaporation time a person attends", 0.25, units.None, "", "", source.CommonPractice),
 		c(KeyCropTime, "time to cool, age and filter a second crop", 1.5*h, units.Time, "h", "", source.CommonPractice),
 		c(KeyCropAttended, "share of second-crop time a person attends", 0.5, units.None, "", "", source.CommonPractice),
-		c(KeyScreeningTime, "one-time solvent screening and development", 8*h, units.Time, "h", "a solvent screen in a dozen tubes and one or two trial crystallizations: about a day", source.CommonPractice),
-		c(KeyScreeningMass, "one-time crude used in screening", 2e-3, units.Mass, "g", "a dozen tubes of 50–100 mg and a gram-scale trial", source.CommonPractice),
+		c(KeyScreeningTime, "one-time development of the crystallization", 40*h, units.Time, "h", "developing a crystallization to run at kilogram scale (solvent screen, solubility curve, seeding, filtration and drying trials, polymorph check) commonly takes one to several weeks of a chemist's time; one working week is taken, the short end (a bench-only trial is about a day: set 8 h)", source.CommonPractice),
+		c(KeyScreeningMass, "one-time crude used in development", 20e-3, units.Mass, "g", "a dozen screening tubes of 50–100 mg, a solubility curve and a few trial crystallizations of 2–5 g", source.CommonPractice),
 	}
 	out = append(out, scaleDefaults()...)
 	for i, v := range DefaultFlasksM3 {

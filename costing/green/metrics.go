@@ -72,10 +72,11 @@ func (e *MetricsError) Unwrap() error { return ErrMetrics }
 // m_crude = u.CrudeKg (kg). Σ m_material sums the demands of the
 // "materials" group: mass demands as they are, volume demands times the
 // solvent density from the book (the item must be a solvent in the book).
-// Labour, energy, disposal and product-lost demands are not material
-// inputs and are left out; count demands (items by number) have no mass
-// here, and one-time material (crude used once in screening) is not part
-// of a batch: both are listed in NotCounted. Recovered solvent credited in the
+// Labour, energy, disposal, product-lost and one-time demands are not
+// material inputs and are left out; count demands count by their mass
+// (usage.Demand.Kg, e.g. TLC plates) and, without one, are listed in
+// NotCounted, as is one-time material (crude used once in screening: not
+// part of a batch). Recovered solvent credited in the
 // "credit" group is the recycled mass: the convention here is that it is
 // subtracted from the inputs (it leaves as reusable material, neither
 // product nor waste), whatever the regulations say about recycled solvent.
@@ -134,6 +135,10 @@ func Compute(u usage.Usage, book *solvent.Book) (Metrics, error) {
 				return
 			}
 			return d.Qty * s.Density.V, s, true, true, nil
+		case units.Count:
+			if d.Kg > 0 && !math.IsInf(d.Kg, 0) {
+				return d.Kg, s, isSolvent, true, nil // bought by count, mass known
+			}
 		}
 		return 0, s, isSolvent, false, nil
 	}

@@ -17,6 +17,7 @@ type Line struct {
 	Unit      string          // the price item's unit, e.g. "kg", "L", "h"
 	UnitPrice decimal.Decimal // price per Unit
 	Amount    decimal.Decimal // round(Qty × UnitPrice, minor unit), half away from zero
+	Band      string          // the price band used, "" when the item has one price line
 }
 
 // Ledger is the priced bill of one method at one batch mass.

@@ -54,11 +54,26 @@ const QtyPlaces = 6
 // problems are returned together (errors.Join when there are several
 // kinds), and no ledger is returned with them.
 func Price(u usage.Usage, t *prices.Table) (Ledger, error) {
+	return PriceCampaign(u, t, 1)
+}
+
+// PriceCampaign is Price for one batch of a campaign of batches: each line
+// is priced at the price band its item's campaign purchase falls in
+// (prices.Table.FindFor), the purchase being
+//
+//	P = batches × Σ q_recurring + Σ q_one-time      (SI units of the item)
+//
+// summed over the item's positive demands (credits do not lower it). The
+// lines and Total are still those of one batch; the campaign's cost is
+// batches × the recurring lines plus the one-time lines once. An item with
+// a single price line is priced as Price prices it. batches below 1 count
+// as 1.
+func PriceCampaign(u usage.Usage, t *prices.Table, batches int) (Ledger, error) {
 	if t == nil {
 		return Ledger{}, errors.New("ledger: no price table")
 	}
 	var miss missingSet
-	l, errs := price(u, t, &miss)
+	l, errs := price(u, t, &miss, Purchases(u, batches))
 	if e := miss.err(t.File, t.Currency); e != nil {
 		errs = append(errs, e)
 	}
@@ -81,7 +96,7 @@ func PriceAll(us []usage.Usage, t *prices.Table) ([]Ledger, error) {
 	seen := map[string]bool{}
 	out := make([]Ledger, len(us))
 	for i, u := range us {
-		l, es := price(u, t, &miss)
+		l, es := price(u, t, &miss, Purchases(u, 1))
 		for _, e := range es {
 			// The same model fault repeats at every batch mass; say it once.
 			if s := e.Error(); !seen[s] {
@@ -102,7 +117,7 @@ func PriceAll(us []usage.Usage, t *prices.Table) ([]Ledger, error) {
 
 // price builds the ledger of one usage, adding missing items to miss and
 // returning the other problems.
-func price(u usage.Usage, t *prices.Table, miss *missingSet) (Ledger, []error) {
+func price(u usage.Usage, t *prices.Table, miss *missingSet, purchase map[string]float64) (Ledger, []error) {
 	places := prices.MinorUnits(t.Currency)
 	l := Ledger{Currency: t.Currency, Places: places, Total: decimal.Zero, Lines: make([]Line, 0, len(u.Demands))}
 	var errs []error
@@ -117,7 +132,7 @@ func price(u usage.Usage, t *prices.Table, miss *missingSet) (Ledger, []error) {
 				Msg: fmt.Sprintf("quantity is %v; the model produced no usable number", d.Qty)})
 			continue
 		}
-		idx, ok := t.Find(d.Item)
+		idx, ok := t.FindFor(d.Item, purchase[itemKey(d.Item)])
 		if !ok {
 			miss.add(u.Method, d)
 			continue
@@ -143,10 +158,47 @@ func price(u usage.Usage, t *prices.Table, miss *missingSet) (Ledger, []error) {
 			Unit:      it.Unit,
 			UnitPrice: it.Price,
 			Amount:    amount,
+			Band:      band(t, idx),
 		})
 		l.Total = l.Total.Add(amount)
 	}
 	return l, errs
+}
+
+// Purchases is each item's purchase over a campaign of batches (SI units,
+// keyed by the item name trimmed and lower-cased): batches × its recurring
+// positive demands plus its one-time demands once.
+func Purchases(u usage.Usage, batches int) map[string]float64 {
+	if batches < 1 {
+		batches = 1
+	}
+	out := make(map[string]float64, len(u.Demands))
+	for _, d := range u.Demands {
+		if !(d.Qty > 0) || math.IsInf(d.Qty, 0) {
+			continue
+		}
+		n := float64(batches)
+		if d.Group == usage.OneTime {
+			n = 1
+		}
+		out[itemKey(d.Item)] += d.Qty * n
+	}
+	return out
+}
+
+// itemKey is the form in which Purchases keys item names.
+func itemKey(s string) string { return strings.ToLower(strings.TrimSpace(s)) }
+
+// band describes the price band of line idx, "" when its item has one line.
+func band(t *prices.Table, idx int) string {
+	it := t.Items[idx]
+	if !t.Banded(it.Name) {
+		return ""
+	}
+	if it.FromSI == 0 {
+		return "from zero"
+	}
+	return "from " + it.From
 }
 
 // joinErrors is nil for none, the error itself for one, else errors.Join.

@@ -3,7 +3,7 @@ package ledger
 import (
 	"fmt"
 	"math"
-	"strings"
+	"sort"
 
 	"sepcost/costing/prices"
 	"sepcost/costing/usage"
@@ -15,24 +15,30 @@ import (
 // line half away from zero to the minor unit, the total a sum of rounded
 // lines) in binary floating point, so a total may differ from the decimal
 // ledger's by a rounding step on a line whose exact product lies on a
-// half; the reported ledger is always the decimal one (Price).
+// half; the reported ledger is always the decimal one (Price). An item
+// with price bands is priced at the band its purchase in the usage falls
+// in, as Price does (Purchases of one batch, prices.Table.FindFor).
 type Rates struct {
 	table  *prices.Table
-	index  map[string]int // lower-cased, trimmed item name → row
-	price  []float64      // per row: price per the item's unit
-	factor []float64      // per row: the unit's factor to SI
-	scale  float64        // 10^minor units
+	index  map[string][]int // item name as itemKey → its rows, by ascending From
+	price  []float64        // per row: price per the item's unit
+	factor []float64        // per row: the unit's factor to SI
+	scale  float64          // 10^minor units
 }
 
 // NewRates reads a table into float rates.
 func NewRates(t *prices.Table) *Rates {
-	r := &Rates{table: t, index: make(map[string]int, len(t.Items)),
+	r := &Rates{table: t, index: make(map[string][]int, len(t.Items)),
 		price: make([]float64, len(t.Items)), factor: make([]float64, len(t.Items)),
 		scale: math.Pow(10, float64(prices.MinorUnits(t.Currency)))}
 	for i, it := range t.Items {
-		r.index[strings.ToLower(strings.TrimSpace(it.Name))] = i
+		k := itemKey(it.Name)
+		r.index[k] = append(r.index[k], i)
 		r.price[i] = it.Price.InexactFloat64()
 		r.factor[i] = it.Per.Factor
+	}
+	for _, rows := range r.index {
+		sort.SliceStable(rows, func(a, b int) bool { return t.Items[rows[a]].FromSI < t.Items[rows[b]].FromSI })
 	}
 	return r
 }
@@ -56,14 +62,9 @@ func (r *Rates) Total(u usage.Usage) (float64, error) {
 	const qScale = 1e6 // 10^QtyPlaces
 	total := 0.0
 	for _, d := range u.Demands {
-		i, ok := r.index[d.Item]
+		i, ok := r.row(u, d.Item)
 		if !ok {
-			i, ok = r.index[strings.ToLower(strings.TrimSpace(d.Item))]
-		}
-		if !ok {
-			if i, ok = r.table.Find(d.Item); !ok {
-				return 0, fmt.Errorf("%w: %q", ErrMissingPrice, d.Item)
-			}
+			return 0, fmt.Errorf("%w: %q", ErrMissingPrice, d.Item)
 		}
 		if r.table.Items[i].Per.Dim != d.Dim || math.IsNaN(d.Qty) || math.IsInf(d.Qty, 0) {
 			return 0, fmt.Errorf("%w: %q (%s) cannot be priced per %s", ErrQuantity, d.Label, d.Item, r.table.Items[i].Unit)
@@ -72,4 +73,30 @@ func (r *Rates) Total(u usage.Usage) (float64, error) {
 		total += math.Round(qty*r.price[i]*r.scale) / r.scale
 	}
 	return total, nil
+}
+
+// row is the price row of an item for this usage: its one line, or the
+// band its purchase (the usage's positive demands of it) falls in.
+func (r *Rates) row(u usage.Usage, item string) (int, bool) {
+	key := itemKey(item)
+	rows, ok := r.index[key]
+	if !ok {
+		return r.table.Find(item)
+	}
+	if len(rows) == 1 {
+		return rows[0], true
+	}
+	purchase := 0.0
+	for _, d := range u.Demands {
+		if d.Qty > 0 && !math.IsInf(d.Qty, 0) && itemKey(d.Item) == key {
+			purchase += d.Qty
+		}
+	}
+	i := rows[0]
+	for _, k := range rows {
+		if r.table.Items[k].FromSI <= purchase {
+			i = k
+		}
+	}
+	return i, true
 }

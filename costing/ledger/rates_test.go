@@ -4,9 +4,11 @@ import (
 	"errors"
 	"math"
 	"math/rand/v2"
+	"strings"
 	"testing"
 
 	"sepcost/costing/ledger"
+	"sepcost/costing/prices"
 	"sepcost/costing/usage"
 )
 
@@ -55,5 +57,28 @@ func TestRatesMatchLedger(t *testing.T) {
 	}
 	if _, err := r.Total(usage.Usage{Demands: []usage.Demand{demand("unobtainium", usage.Materials, 1, "kg")}}); !errors.Is(err, ledger.ErrMissingPrice) {
 		t.Errorf("missing item: %v", err)
+	}
+}
+
+// Price bands: the float path takes the band the usage's purchase falls
+// in, as the decimal ledger does. 100 L of ethanol at 10.00 EUR/L is
+// 1000.00; 250 L falls in the band from 200 L at 6.00, 1500.00 (hand
+// computation; prices invented for the test).
+func TestRatesBands(t *testing.T) {
+	csv := "item,unit,price,currency,category,source,date,from\n" +
+		"ethanol,L,10.00,EUR,solvent,,,\n" +
+		"ethanol,L,6.00,EUR,solvent,,,200 L\n"
+	tb, err := prices.Read(strings.NewReader(csv), "bands.csv")
+	if err != nil {
+		t.Fatal(err)
+	}
+	r := ledger.NewRates(tb)
+	for _, c := range []struct{ litres, want float64 }{{100, 1000}, {250, 1500}} {
+		u := usage.Usage{Method: "m", Demands: []usage.Demand{demand("ethanol", usage.Materials, c.litres, "L")}}
+		got, err := r.Total(u)
+		l, lerr := ledger.Price(u, tb)
+		if err != nil || lerr != nil || math.Abs(got-c.want) > 1e-9 || l.Total.InexactFloat64() != c.want {
+			t.Errorf("%g L: float %v (%v), decimal %v (%v), want %g", c.litres, got, err, l.Total, lerr, c.want)
+		}
 	}
 }

@@ -7,9 +7,19 @@ import (
 
 // Find returns the index in t.Items of the item called name, comparing
 // names with surrounding space removed and without regard to letter case
-// ("Silica gel " finds "silica gel"). Read refuses tables in which two
-// items would match the same name.
+// ("Silica gel " finds "silica gel"). When the item has price bands, Find
+// returns its first band (the one that applies from zero). Read refuses
+// tables in which two lines of one name would apply from the same quantity.
 func (t *Table) Find(name string) (int, bool) {
+	return t.FindFor(name, 0)
+}
+
+// FindFor returns the price line of item name that applies to a purchase
+// of qtySI (SI units of the item's dimension): of the item's lines, the
+// one with the largest From not above qtySI. A purchase is the whole
+// amount bought at once, e.g. a campaign's solvent. An item with one line
+// always gives that line.
+func (t *Table) FindFor(name string, qtySI float64) (int, bool) {
 	if t == nil {
 		return 0, false
 	}
@@ -17,12 +27,30 @@ func (t *Table) Find(name string) (int, bool) {
 	if name == "" {
 		return 0, false
 	}
+	best, lowest := -1, -1
 	for i := range t.Items {
-		if strings.EqualFold(strings.TrimSpace(t.Items[i].Name), name) {
-			return i, true
+		it := &t.Items[i]
+		if !sameName(it.Name, name) {
+			continue
+		}
+		if lowest < 0 || it.FromSI < t.Items[lowest].FromSI {
+			lowest = i
+		}
+		if it.FromSI <= qtySI && (best < 0 || it.FromSI > t.Items[best].FromSI) {
+			best = i
 		}
 	}
-	return 0, false
+	if best < 0 {
+		// Read gives every banded item a band from zero; a table built
+		// otherwise falls back on its lowest band.
+		best = lowest
+	}
+	return best, best >= 0
+}
+
+// sameName compares item names as Find does.
+func sameName(a, b string) bool {
+	return strings.EqualFold(strings.TrimSpace(a), strings.TrimSpace(b))
 }
 
 // nameKey is the form in which Read compares item names for duplicates:

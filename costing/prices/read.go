@@ -6,6 +6,7 @@ import (
 	"errors"
 	"fmt"
 	"io"
+	"math"
 	"sort"
 	"strconv"
 	"strings"
@@ -23,12 +24,13 @@ import (
 // seven must be named in the header row.
 var Columns = []string{"item", "unit", "price", "currency", "category", "source", "date"}
 
-// Optional are columns a table may add; old tables without them keep
-// working. spread is the share either way the price may move before it is
+// Optional are columns a table may add; tables without them read as
+// before. from is the purchase from which a line's price applies (price
+// bands). spread is the share either way the price may move before it is
 // paid ("15 %" or 0.15), read as the half-width of a rectangular
 // distribution like a range in a scenario; empty or absent means
 // DefaultSpread.
-var Optional = []string{"spread"}
+var Optional = []string{"from", "spread"}
 
 // DefaultSpread is the half-width, as a share of the price, given to a
 // price without a spread: catalogue prices and quotes move by some tenths
@@ -201,23 +203,19 @@ func Read(r io.Reader, file string) (*Table, error) {
 		if it.Date != "" {
 			checkDate(it.Date, line, add)
 		}
-		if _, ok := col["item"]; ok {
-			key := nameKey(it.Name)
-			if first, dup := firstLine[key]; dup {
-				if firstName[key] == it.Name {
-					add(line, "item", "%q is listed twice, on lines %d and %d; keep one line per item", it.Name, first, line)
-				} else {
-					add(line, "item", "%q is listed twice, on line %d as %q and on line %d (names are compared without regard to letter case); keep one line per item", it.Name, first, firstName[key], line)
-				}
-				continue
-			}
-			firstLine[key], firstName[key] = line, it.Name
+		it.From = get("from")
+		if it.From != "" && it.Per.Dim != (units.Dim{}) {
+			it.FromSI, _ = checkFrom(it.From, it.Per, line, add)
+		}
+		if _, ok := col["item"]; ok && !firstOf(it, firstName, firstLine, add) {
+			continue
 		}
 		if len(errs) == nBefore {
 			t.Items = append(t.Items, it)
 		}
 	}
 
+	checkBands(t.Items, add)
 	oneCurrency(currencies, currencyLines, add)
 	if rows == 0 {
 		add(0, "", "the table has no items; add one line per item under the header, e.g. silica gel,kg,<price>,EUR,consumable,<source>,<date>")
@@ -314,7 +312,7 @@ func readHeader(header []string, line int, add func(int, string, string, ...any)
 		case h == "":
 			add(line, "header", "column %d has no name; the columns are %s", i+1, valid)
 		case !known[low]:
-			add(line, "header", "unknown column %q; the columns are %s", h, valid)
+			add(line, "header", "unknown column %q; the columns are %s, and optionally %s", h, valid, strings.Join(Optional, ", "))
 		default:
 			if j, dup := col[low]; dup {
 				add(line, "header", "column %q is named twice (columns %d and %d); name each of %s once", h, j+1, i+1, valid)
@@ -399,6 +397,82 @@ func checkUnit(s string, line int, add func(int, string, string, ...any)) (units
 	}
 	add(line, "unit", "%q is a unit of %s; a price is per unit of mass, volume, count, time or energy: write one of %s", s, u.Dim.Name(), validUnits)
 	return units.Unit{}, false
+}
+
+// firstOf records an item's line under its name and band, or reports that
+// the same name and band was listed before and returns false.
+func firstOf(it Item, firstName map[string]string, firstLine map[string]int, add func(int, string, string, ...any)) bool {
+	key := nameKey(it.Name) + "\x00" + strconv.FormatFloat(it.FromSI, 'g', -1, 64)
+	first, dup := firstLine[key]
+	if !dup {
+		firstLine[key], firstName[key] = it.Line, it.Name
+		return true
+	}
+	again := "keep one line per item, or give each line its own from (the purchase from which its price applies)"
+	if firstName[key] == it.Name {
+		add(it.Line, "item", "%q is listed twice, on lines %d and %d, from the same purchase; %s", it.Name, first, it.Line, again)
+	} else {
+		add(it.Line, "item", "%q is listed twice, on line %d as %q and on line %d (names are compared without regard to letter case), from the same purchase; %s", it.Name, first, firstName[key], it.Line, again)
+	}
+	return false
+}
+
+// checkFrom reads the purchase from which a price band applies: a
+// quantity with a unit of the line's dimension ("200 L", "25 kg"), or a
+// plain number in the line's own unit. It is zero or more.
+func checkFrom(s string, per units.Unit, line int, add func(int, string, string, ...any)) (float64, bool) {
+	var si float64
+	if plainDecimal(s) {
+		v, err := strconv.ParseFloat(s, 64)
+		if err != nil {
+			add(line, "from", "%q is not a number", s)
+			return 0, false
+		}
+		si = v * per.Factor
+	} else {
+		v, err := units.ParseAs(s, per.Dim)
+		if err != nil {
+			add(line, "from", "%q: write the purchase from which this price applies, in the line's unit or with a unit of %s, e.g. \"200 L\"; leave it empty for the first band", s, per.Dim.Name())
+			return 0, false
+		}
+		si = v
+	}
+	if !(si >= 0) || math.IsInf(si, 0) {
+		add(line, "from", "%q: the purchase from which a price applies is zero or more", s)
+		return 0, false
+	}
+	return si, true
+}
+
+// checkBands checks the items with several price lines: their units are of
+// one dimension, and one line applies from zero, so that every purchase
+// has a price.
+func checkBands(items []Item, add func(int, string, string, ...any)) {
+	byName := map[string][]int{}
+	var order []string
+	for i, it := range items {
+		k := nameKey(it.Name)
+		if _, ok := byName[k]; !ok {
+			order = append(order, k)
+		}
+		byName[k] = append(byName[k], i)
+	}
+	for _, k := range order {
+		idx := byName[k]
+		if len(idx) < 2 {
+			continue
+		}
+		zero := false
+		for _, i := range idx {
+			if items[i].Per.Dim != items[idx[0]].Per.Dim {
+				add(items[i].Line, "unit", "%q: the price bands of %q must all be per unit of %s, as on line %d", items[i].Unit, items[i].Name, items[idx[0]].Per.Dim.Name(), items[idx[0]].Line)
+			}
+			zero = zero || items[i].FromSI == 0
+		}
+		if !zero {
+			add(items[idx[0]].Line, "from", "%q has price bands but none from zero; leave from empty on the line that applies to small purchases", items[idx[0]].Name)
+		}
+	}
 }
 
 // checkPrice parses a price as an exact decimal (never through float64).

@@ -308,3 +308,41 @@ func TestErrorFormat(t *testing.T) {
 		t.Errorf("*Error does not unwrap to ErrInvalid")
 	}
 }
+
+// Price bands: several lines of one item, each from a purchase; the checks
+// that keep every purchase priced once.
+func TestReadBands(t *testing.T) {
+	const h = "item,unit,price,currency,category,source,date,from\n"
+	tb, err := Read(strings.NewReader(h+
+		"n-heptane,L,12.00,EUR,,,,\n"+
+		"n-heptane,mL,0.0041,EUR,,,,200 L\n"+
+		"silica gel,kg,30,EUR,,,,\n"), "p.csv")
+	if err != nil {
+		t.Fatal(err)
+	}
+	// 200 L = 0.2 m³ (SI Brochure, 9th ed., 2019: 1 L = 1 dm³; from memory).
+	if tb.Items[1].FromSI != 0.2 || !tb.Banded("N-Heptane") || tb.Banded("silica gel") {
+		t.Errorf("bands: %+v", tb.Items)
+	}
+	for q, want := range map[float64]int{0: 0, 0.1999: 0, 0.2: 1, 5: 1} {
+		if i, ok := tb.FindFor("n-heptane", q); !ok || i != want {
+			t.Errorf("FindFor(%g m³) = %d, want %d", q, i, want)
+		}
+	}
+	if i, _ := tb.Find("n-heptane"); i != 0 {
+		t.Errorf("Find gives band %d, want the band from zero", i)
+	}
+	bad := []struct{ csv, want string }{
+		{h + "a,L,1,EUR,,,,\na,L,2,EUR,,,,\n", "p.csv:3: item: \"a\" is listed twice"},
+		{h + "a,L,1,EUR,,,,10\na,L,2,EUR,,,,20\n", "p.csv:2: from: \"a\" has price bands but none from zero"},
+		{h + "a,L,1,EUR,,,,\na,kg,2,EUR,,,,20\n", "p.csv:3: unit: \"kg\": the price bands of \"a\" must all be per unit of volume"},
+		{h + "a,L,1,EUR,,,,20 kg\n", "p.csv:2: from: \"20 kg\""},
+		{h + "a,L,1,EUR,,,,-3\n", "p.csv:2: from: \"-3\": the purchase from which a price applies is zero or more"},
+	}
+	for _, c := range bad {
+		_, err := Read(strings.NewReader(c.csv), "p.csv")
+		if err == nil || !strings.Contains(err.Error(), c.want) {
+			t.Errorf("%q: %v, want %q", c.csv, err, c.want)
+		}
+	}
+}

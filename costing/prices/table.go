@@ -22,6 +22,11 @@ type Item struct {
 	// Spread is the share either way the price may move (the half-width of
 	// a rectangular distribution) as written; nil for DefaultSpread.
 	Spread *float64
+	// From is the purchase from which this line's price applies, as written
+	// ("200 L"); empty for the first band (from zero). FromSI is the same in
+	// SI units of Per.Dim. An item may have several lines, one per band.
+	From   string
+	FromSI float64
 }
 
 // PriceSpread is the item's spread, written or DefaultSpread.
@@ -30,6 +35,17 @@ func (it Item) PriceSpread() float64 {
 		return *it.Spread
 	}
 	return DefaultSpread
+}
+
+// Banded reports whether the item has more than one price line.
+func (t *Table) Banded(name string) bool {
+	n := 0
+	for i := range t.Items {
+		if sameName(t.Items[i].Name, name) {
+			n++
+		}
+	}
+	return n > 1
 }
 
 // Table is a price table with a single currency.

@@ -22,7 +22,7 @@ chromatography:
       column_volumes: 2
   loading: dry
 settings:
-  chromatography.bed_height: "12 cm"
+  chromatography.calibration_bed_height: "12 cm"
 `
 
 func TestLoadGood(t *testing.T) {
@@ -90,6 +90,8 @@ func TestLoadBad(t *testing.T) {
 		{"fractions sum", replace("n-heptane: 0.7", "n-heptane: 0.6"), []string{"chromatography.tlc_eluent", "sum to 0.9", "add up to 1"}},
 		{"purity above 1", replace("purity: 0.85", "purity: 1.5"), []string{"crude.purity", "below 1"}},
 		{"loading mode", replace("loading: dry", "loading: sideways"), []string{"chromatography.loading", "liquid or dry"}},
+		{"mixed fractions", replace("  loading: dry", "  loading: dry\n  mixed_fractions: keep"), []string{"chromatography.mixed_fractions", `"keep"`, "set aside", "rerun"}},
+		{"chromatography purity", replace("  loading: dry", "  loading: dry\n  target_purity: 1.5"), []string{"chromatography.target_purity", "0.5 to 0.99999"}},
 		{"unknown field", replace("name: test case", "name: test case\ncolour: blue"), []string{"bad.yaml:2:", "colour", "not a known field", "masses"}},
 		{"unknown nested field", replace("  loading: dry", "  loading: dry\n  speed: fast"), []string{"chromatography.speed", "not a known field"}},
 		{"missing rf", replace("  product_rf: 0.30\n", ""), []string{"chromatography.product_rf", "missing"}},

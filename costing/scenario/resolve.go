@@ -133,6 +133,10 @@ func resolve(c *collector, raw *rawScenario, root *yaml.Node) *Scenario {
 		s.Distillation = c.distillation(raw.Distillation, s, root, echo)
 	}
 
+	if raw.Campaign != nil {
+		s.Campaign = c.campaign(raw.Campaign, s, root, echo)
+	}
+
 	// Settings: checked against the models' coefficient tables later (costing.Prepare).
 	keys := make([]string, 0, len(raw.Settings))
 	for k := range raw.Settings {
@@ -249,6 +253,22 @@ func (c *collector) chromatography(r *rawChrom, s *Scenario, root *yaml.Node, ec
 			ch.RecoverSolvent = v
 			echo("chromatography.recover_solvent", r.RecoverSolvent, fmt.Sprintf("%.3g %% of the spent eluent recovered", v*100))
 		}
+	}
+	if r.TargetPurity.Set {
+		if v, ok := c.fraction(r.TargetPurity, "chromatography.target_purity", 0.5, 0.99999, `the purity asked of the pooled product fractions (product over product and nearest impurity), from 0.5 to 0.99999, e.g. "98 %"`); ok {
+			ch.TargetPurity = v
+			echo("chromatography.target_purity", r.TargetPurity, fmt.Sprintf("%.4g %% purity asked of the product fractions", v*100))
+		}
+	}
+	if r.MixedFractions.Set {
+		switch strings.ToLower(strings.TrimSpace(r.MixedFractions.Value)) {
+		case "set aside":
+		case "rerun":
+			ch.RerunMixed = true
+		default:
+			c.add(r.MixedFractions.Line, "chromatography.mixed_fractions", "%q: write \"set aside\" (the product in them is lost) or rerun (pooled and run once more)", r.MixedFractions.Value)
+		}
+		echo("chromatography.mixed_fractions", r.MixedFractions, map[bool]string{true: "mixed fractions pooled and run once more", false: "mixed fractions set aside"}[ch.RerunMixed])
 	}
 	if r.LoadingRule.Set {
 		switch Rule(strings.ToLower(r.LoadingRule.Value)) {

@@ -55,6 +55,8 @@ type Chromatography struct {
 	RecoverSolvent float64   // fraction of the spent eluent recovered for reuse, 0–1
 	LoadingRule    Rule      // which route sizes the silica
 	ColumnsM       []float64 // available column inner diameters, m, ascending
+	TargetPurity   float64   // purity asked of the pooled product fractions; 0: the model's default
+	RerunMixed     bool      // mixed fractions are pooled and run once more (else set aside)
 }
 
 // Setting is one model default the user overrides.
@@ -79,6 +81,7 @@ type Scenario struct {
 	Chromatography  *Chromatography
 	Crystallization *Crystallization // nil when the scenario has no crystallization section
 	Distillation    *Distillation    // nil when the scenario has no distillation section
+	Campaign        *Campaign        // nil when the scenario has no campaign section
 	Settings        []Setting
 	Solvents        *solvent.Book
 	Notes           string

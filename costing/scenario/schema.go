@@ -13,6 +13,7 @@ type rawScenario struct {
 	Chromatography  *rawChrom         `yaml:"chromatography"`
 	Crystallization *rawCryst         `yaml:"crystallization"`
 	Distillation    *rawDistil        `yaml:"distillation"`
+	Campaign        *rawCampaign      `yaml:"campaign"`
 	Settings        map[string]Text   `yaml:"settings"`
 	Solvents        []rawSolvent      `yaml:"solvents"`
 	Notes           Text              `yaml:"notes"`
@@ -40,6 +41,8 @@ type rawChrom struct {
 	RecoverSolvent Text              `yaml:"recover_solvent"`
 	LoadingRule    Text              `yaml:"loading_rule"`
 	Columns        []Text            `yaml:"column_diameters"`
+	TargetPurity   Text              `yaml:"target_purity"`
+	MixedFractions Text              `yaml:"mixed_fractions"`
 	Extra          map[string]rawAny `yaml:",inline"`
 }
 

@@ -19,17 +19,20 @@ type Group string
 
 // Ledger sections, in the order they are printed.
 const (
-	Materials   Group = "materials"
-	Labour      Group = "labour"
-	Energy      Group = "energy"
-	Disposal    Group = "disposal"
-	ProductLoss Group = "product lost"
-	Credit      Group = "credit"
-	OneTime     Group = "one-time"
+	Materials Group = "materials"
+	Labour    Group = "labour"
+	Energy    Group = "energy"
+	// EquipmentUse is the site's charge for the hours (and uses) of its
+	// equipment, from the equipment table's rates.
+	EquipmentUse Group = "equipment"
+	Disposal     Group = "disposal"
+	ProductLoss  Group = "product lost"
+	Credit       Group = "credit"
+	OneTime      Group = "one-time"
 )
 
 // Groups lists the sections in print order.
-var Groups = []Group{Materials, Labour, Energy, Disposal, ProductLoss, Credit, OneTime}
+var Groups = []Group{Materials, Labour, Energy, EquipmentUse, Disposal, ProductLoss, Credit, OneTime}
 
 // Price-table items every method asks for (solvents are priced by their id,
 // disposal by WasteClass.DisposalItem).
@@ -46,6 +49,10 @@ type Demand struct {
 	Group Group     // ledger section
 	Qty   float64   // SI units of Dim; negative for a credit
 	Dim   units.Dim // mass, volume, count, time or energy
+	// Kg is the mass of a material bought by count (TLC plates,
+	// prepacked cartridges), so that it enters the mass balance; 0 if
+	// unknown or not material.
+	Kg float64
 }
 
 // WasteClass is a disposal class, priced per kilogram.
@@ -175,6 +182,15 @@ type Usage struct {
 	Waste         []Stream
 	Activities    []Activity
 	Notes         []Note
+	Tables        []Table // small tables a model shows beside its figures (e.g. a trade-off)
+}
+
+// Table is a small table of numbers a model shows on its method sheet.
+type Table struct {
+	Key     string
+	Title   string
+	Columns []string
+	Rows    [][]float64
 }
 
 // New starts the usage of a method at a crude mass, feasible until a model
@@ -195,6 +211,12 @@ func (u *Usage) AddFigure(key, label string, si float64, unit string) {
 		return
 	}
 	u.Figures = append(u.Figures, Figure{Key: key, Label: label, SI: si, Unit: unit})
+}
+
+// AddCountedDemand adds a material priced by count whose mass is known
+// (kg in all), so that the mass balance counts it.
+func (u *Usage) AddCountedDemand(item, label string, g Group, count, kg float64) {
+	u.Demands = append(u.Demands, Demand{Item: item, Label: label, Group: g, Qty: count, Dim: units.Count, Kg: kg})
 }
 
 // AddDemand adds a quantity to be priced. A NaN or infinite quantity is

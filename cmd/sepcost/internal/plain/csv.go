@@ -41,6 +41,11 @@ func CSV(w io.Writer, r *scale.Report) error {
 			}
 		}
 	}
+	for _, row := range budgetCSV(r) {
+		if err := cw.Write(row); err != nil {
+			return err
+		}
+	}
 	cw.Flush()
 	return cw.Error()
 }

@@ -23,6 +23,8 @@ type jsonReport struct {
 	Pairwise   []jsonCrossover  `json:"pairwise_crossings,omitempty"`
 	Warnings   []jsonWarning    `json:"warnings"`
 	Assumed    []jsonAssumed    `json:"assumptions"`
+	Campaign   *jsonCampaign    `json:"campaign,omitempty"`
+	Budget     *jsonBudget      `json:"budget,omitempty"`
 	Cautions   []string         `json:"cautions"`
 	Uncertain  *jsonUncertainty `json:"uncertainty,omitempty"`
 }
@@ -210,6 +212,7 @@ func JSON(w io.Writer, r *scale.Report) error {
 	for _, w := range r.Warnings {
 		out.Warnings = append(out.Warnings, jsonWarning{w.Method, string(w.Level), w.Text, w.MassesKg})
 	}
+	out.Campaign, out.Budget = campaignJSON(r)
 	out.Uncertain = uncertaintyJSON(r.Uncertainty)
 	enc := json.NewEncoder(w)
 	enc.SetIndent("", "  ")

@@ -87,6 +87,7 @@ func Text(w io.Writer, r *scale.Report) error {
 		}
 	}
 	assumptions(ew, r)
+	campaignText(ew, r)
 	if r.IsSweep {
 		crossovers(ew, r)
 		if len(r.Warnings) > 0 {

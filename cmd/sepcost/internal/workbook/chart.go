@@ -73,11 +73,11 @@ var axisFont = excelize.Font{Color: "404040"}
 // the name of the chart part that excelize created for it, found as the
 // one part that was not there before.
 func addChart(f *excelize.File, cell string, ch *excelize.Chart) (string, error) {
-	return addChartOn(f, sheetScaleUp, cell, ch)
+	return addChartTo(f, sheetScaleUp, cell, ch)
 }
 
-// addChartOn is addChart on any sheet.
-func addChartOn(f *excelize.File, sheet, cell string, ch *excelize.Chart) (string, error) {
+// addChartTo is addChart on any sheet.
+func addChartTo(f *excelize.File, sheet, cell string, ch *excelize.Chart) (string, error) {
 	before := chartParts(f)
 	if err := f.AddChart(sheet, cell, ch); err != nil {
 		return "", err

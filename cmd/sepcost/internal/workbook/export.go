@@ -41,7 +41,7 @@ func WriteWaste(w io.Writer, r *scale.Report) error {
 func WritePortfolio(w io.Writer, pf *scale.Portfolio) error {
 	var tabs []Table
 	plan := Table{Name: "Plan", Title: "Plan " + pf.File + " (" + pf.Currency + ")",
-		Header: []string{"Line", "Scenario", "Crude batch", "Runs", "Method", "Forced", "Cost per batch", "Cost", "Waste kg", "Hours elapsed", "Hours hands-on"}}
+		Header: []string{"Line", "Scenario", "Crude batch", "Runs", "Method", "Forced", "Cost per batch", "One-time", "Cost", "Waste kg", "Hours elapsed", "Hours hands-on", "Quarter"}}
 	for _, l := range pf.Lines {
 		el, at := l.Result.Usage.Hours()
 		runs := float64(l.Runs)
@@ -50,13 +50,26 @@ func WritePortfolio(w io.Writer, pf *scale.Portfolio) error {
 			forced = "yes"
 		}
 		plan.Rows = append(plan.Rows, []Cell{Num(float64(l.Line)), Text(l.Title), Text(scenario.FormatMass(l.MassKg)), Num(runs), Text(l.Method), Text(forced),
-			Money(l.Result.Ledger.Total), Money(l.Total), Num(l.Result.Usage.WasteKg() * runs), Num(el * runs), Num(at * runs)})
+			Money(l.PerBatch), Money(l.OneTime), Money(l.Total), Num(l.Result.Usage.WasteKg() * runs), Num(el * runs), Num(at * runs), Text(l.Quarter)})
 	}
 	n := len(pf.Lines)
-	total := Money(pf.Total)
-	total.Formula, total.Bold = fmt.Sprintf("SUM(H3:H%d)", n+2), true
-	plan.Rows = append(plan.Rows, []Cell{{}, {Text: "Total", Bold: true}, {}, {}, {}, {}, {}, total, {}, Num(pf.HoursElapsed), Num(pf.HoursAttended)})
+	total, once := Money(pf.Total), Money(pf.OneTime)
+	total.Formula, total.Bold = fmt.Sprintf("SUM(I3:I%d)", n+2), true
+	once.Formula, once.Bold = fmt.Sprintf("SUM(H3:H%d)", n+2), true
+	plan.Rows = append(plan.Rows, []Cell{{}, {Text: "Total", Bold: true}, {}, {}, {}, {}, {}, once, total, {}, Num(pf.HoursElapsed), Num(pf.HoursAttended), {}})
+	plan.Notes = []string{"Each row is a campaign of its runs: cost per batch (without one-time costs) × runs, plus the one-time costs (development) on the row that bears them: once per scenario and method in the plan unless the development column says row or done."}
 	tabs = append(tabs, plan)
+	if len(pf.Quarters) > 1 || (len(pf.Quarters) == 1 && pf.Quarters[0].Quarter != "") {
+		q := Table{Name: "By quarter", Title: "Cost by calendar quarter of the plan's dates", Header: []string{"Quarter", "Cost"}}
+		for _, qt := range pf.Quarters {
+			name := qt.Quarter
+			if name == "" {
+				name = "(no date)"
+			}
+			q.Rows = append(q.Rows, []Cell{Text(name), Money(qt.Total)})
+		}
+		tabs = append(tabs, q)
+	}
 
 	byMethod := Table{Name: "By method", Title: "Cost by method as chosen", Header: []string{"Method", "Cost"}}
 	var ms []string

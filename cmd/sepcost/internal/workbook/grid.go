@@ -42,6 +42,10 @@ type grid struct {
 	maxWidths  map[int]float64 // widths the content may narrow but not widen (wrapped text)
 	printWide  bool            // print in landscape, scaled to one page wide
 	chart      []gridChart     // charts anchored on the sheet
+	// beforeRows, when set, runs after the StreamWriter is made and before
+	// the rows are written: excelize adds charts to a streamed sheet only
+	// before its rows.
+	beforeRows func(f *excelize.File) error
 }
 
 // gridChart is a chart anchored at a cell of a grid's sheet; logX makes
@@ -230,6 +234,11 @@ func (g *grid) flush(f *excelize.File, st *styles, omit bool) error {
 	if err := setWidths(sw, g.name, widths); err != nil {
 		return err
 	}
+	if g.beforeRows != nil {
+		if err := g.beforeRows(f); err != nil {
+			return fmt.Errorf("workbook: sheet %s: %w", g.name, err)
+		}
+	}
 	if g.freezeRows > 0 || g.freezeCols > 0 {
 		if err := sw.SetPanes(g.panes()); err != nil {
 			return fmt.Errorf("workbook: sheet %s: panes: %w", g.name, err)
@@ -239,7 +248,7 @@ func (g *grid) flush(f *excelize.File, st *styles, omit bool) error {
 	// flushed, adding a chart makes excelize read the streamed sheet back.
 	var parts []string
 	for _, c := range g.chart {
-		part, err := addChartOn(f, g.name, c.cell, c.chart)
+		part, err := addChartTo(f, g.name, c.cell, c.chart)
 		if err != nil {
 			return fmt.Errorf("workbook: sheet %s: chart: %w", g.name, err)
 		}

@@ -117,6 +117,7 @@ func buildMethod(g *grid, st *styles, r *scale.Report, m money, j int, lay *layo
 	}
 	ms.time()
 	ms.waste()
+	ms.tables()
 	ms.notes()
 	return methodOut{sheet: g.name, mass: ms.out}, nil
 }
@@ -276,6 +277,7 @@ type ledgerRow struct {
 	group    usage.Group
 	unit     string
 	priceRow int
+	band     string // the price band, "" when the item has one price line
 }
 
 // ledger writes the bill of materials and costs, grouped in usage.Groups
@@ -293,7 +295,7 @@ func (ms *methodSheet) ledger() error {
 	ms.section("Bill of materials and costs", []string{"Item", "Label", "Unit", "Unit price"}, [2]string{"Qty", "Cost"})
 
 	byGroup := map[usage.Group][]*ledgerRow{}
-	rows := map[[2]any]*ledgerRow{}
+	rows := map[[3]any]*ledgerRow{}
 	lines := make([]map[*ledgerRow]ledger.Line, len(ms.res))
 	for i, res := range ms.res {
 		if !ms.feasible(i) {
@@ -307,10 +309,12 @@ func (ms *methodSheet) ledger() error {
 				kr[d.Group] = keyer{}
 			}
 			k := kr[d.Group].key(d.Item, d.Label)
-			id := [2]any{d.Group, k}
+			// A price band is a price row of its own: a line priced from
+			// another band at another mass gets its own row.
+			id := [3]any{d.Group, k, line.PriceRow}
 			lr := rows[id]
 			if lr == nil {
-				lr = &ledgerRow{key: k, group: d.Group, unit: line.Unit, priceRow: line.PriceRow}
+				lr = &ledgerRow{key: k, group: d.Group, unit: line.Unit, priceRow: line.PriceRow, band: line.Band}
 				rows[id] = lr
 				byGroup[d.Group] = append(byGroup[d.Group], lr)
 			}
@@ -336,7 +340,11 @@ func (ms *methodSheet) ledger() error {
 		for _, lr := range list {
 			row := ms.row
 			g.text(row, colTitle, lr.key.a, st.text)
-			g.text(row, colLabel, lr.key.b, st.text)
+			label := lr.key.b
+			if lr.band != "" {
+				label += " (price band " + lr.band + ")"
+			}
+			g.text(row, colLabel, label, st.text)
 			g.text(row, colUnit, lr.unit, st.text)
 			price := ms.r.Prices.Items[lr.priceRow].Price
 			g.formula(row, colUnitPrice, priceRef(lr.priceRow), price.InexactFloat64(), st.priceStyle(price))

@@ -13,6 +13,13 @@ func buildPrices(g *grid, st *styles, r *scale.Report) {
 		g.text(1, c+1, h, st.header)
 	}
 	g.freeze(1, 1)
+	banded := false
+	for _, it := range r.Prices.Items {
+		banded = banded || it.From != ""
+	}
+	if banded {
+		g.text(1, 9, "From (price band)", st.header)
+	}
 	for i, it := range r.Prices.Items {
 		row := i + 2
 		g.text(row, 1, it.Name, st.text)
@@ -24,6 +31,9 @@ func buildPrices(g *grid, st *styles, r *scale.Report) {
 		g.text(row, 7, it.Date, st.text)
 		if it.Line > 0 {
 			g.num(row, 8, float64(it.Line), st.general)
+		}
+		if it.From != "" {
+			g.text(row, 9, it.From, st.text)
 		}
 	}
 	if r.Prices.File != "" {

@@ -150,7 +150,14 @@ func build(r *scale.Report, opt Options, record bool) (*excelize.File, *layout, 
 	}
 	details := detailSheets(r)
 
-	order := []string{sheetSummary, sheetInputs, sheetPrices}
+	order := []string{sheetSummary}
+	if r.Budget != nil && r.Campaign != nil {
+		order = append(order, sheetBudget)
+	}
+	order = append(order, sheetInputs, sheetPrices)
+	if r.Budget != nil && r.Campaign != nil && r.Equipment != nil {
+		order = append(order, sheetEquipment)
+	}
 	if details {
 		order = append(order, names...)
 	}
@@ -197,6 +204,16 @@ func build(r *scale.Report, opt Options, record bool) (*excelize.File, *layout, 
 	waste := newGrid(sheetWaste)
 	buildWaste(waste, st, r, m, details, lay)
 	grids = append(grids, summary, inputs, prices, waste)
+	if r.Budget != nil && r.Campaign != nil {
+		budget := newGrid(sheetBudget)
+		buildBudget(budget, st, r, m, lay)
+		grids = append(grids, budget)
+		if r.Equipment != nil {
+			eq := newGrid(sheetEquipment)
+			buildEquipment(eq, st, r)
+			grids = append(grids, eq)
+		}
+	}
 	var bands *bandRefs
 	if r.Uncertainty != nil {
 		unc := newGrid(sheetUncertainty)
@@ -255,7 +272,7 @@ func validate(r *scale.Report) (money, error) {
 		}
 	}
 	seen := map[string]bool{}
-	for _, name := range []string{sheetSummary, sheetInputs, sheetPrices, sheetScaleUp, sheetWaste, sheetUncertainty, sheetSources} {
+	for _, name := range []string{sheetSummary, sheetBudget, sheetInputs, sheetPrices, sheetEquipment, sheetScaleUp, sheetWaste, sheetUncertainty, sheetSources} {
 		seen[strings.ToLower(name)] = true
 	}
 	for _, meth := range r.Methods {

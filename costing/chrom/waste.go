@@ -1,0 +1,147 @@
+package chrom
+
+import (
+	"math"
+
+	"sepcost/costing/scenario"
+	"sepcost/costing/solvent"
+	"sepcost/costing/source"
+	"sepcost/costing/units"
+	"sepcost/costing/usage"
+)
+
+// wasteAndDemands totals the runs, splits the solvent into the streams as
+// they are collected and asks the ledger for every quantity. Solvent left
+// in the pores of the spent silica goes with the solids; the dry-load
+// solvent, evaporated before the column, is collected on its own; the rest
+// of the eluent, with the impurities and mixed fractions, is liquid waste;
+// a share distilled for reuse leaves as recovered solvent.
+func (p *runPlan) wasteAndDemands(u *usage.Usage, sc *scenario.Scenario, coef source.Set) {
+	ch, get, book := sc.Chromatography, coef.Get, sc.Solvents
+	used := scenario.Volumes{}
+	for id, v := range p.used {
+		used[id] = v * p.runs
+	}
+	dry := scenario.Volumes{}
+	for id, v := range p.dryLoad {
+		dry[id] = v * p.runs
+	}
+	silicaTotal := (p.e.silicaBuy + p.drySilica) * p.runs
+	silicaWaste := (p.e.silicaRun + p.drySilica) * p.runs
+	area := math.Pi * p.e.diameter * p.e.diameter / 4
+	sand := 0.0
+	if p.e.packedByMe {
+		sand = get(KeySandHeight) * area * get(KeySandDensity) * p.runs
+	}
+	tlcPlates := p.plates2 * p.runs
+	u.AddFigure("solvent_total_l", "solvent used", used.Total(), "L")
+	for _, id := range used.IDs() {
+		u.AddFigure("solvent:"+id, "solvent: "+id, used[id], "L")
+	}
+	liquid := scenario.Volumes{}
+	for id, v := range used {
+		liquid[id] = v - dry[id]
+	}
+	wetSolvent := scenario.Volumes{}
+	wetSolvent.Add(ch.TLCEluent, silicaWaste*get(KeyPoreVolume))
+	for id, v := range wetSolvent {
+		liquid[id] -= v
+		if liquid[id] < 0 {
+			wetSolvent[id] += liquid[id]
+			liquid[id] = 0
+		}
+	}
+	recovered := p.recover(u, liquid, coef, ch.RecoverSolvent)
+	impurityInProduct := u.ProductOutKg * (1 - p.cut.Purity) / p.cut.Purity
+	// Mixed fractions sent to a second run leave this pass's waste.
+	lostMixed := (u.ProductInKg-u.ProductInKg*get(KeyRetainedLoss))*p.cut.Mixed - p.rerunP
+	lostSilica := u.ProductInKg * get(KeyRetainedLoss)
+	u.AddFigure("impurity_in_product", "nearest impurity in the isolated product", impurityInProduct, "g")
+	spent := solventStream("spent eluent and mixed fractions", liquid, book)
+	spent.Components = append(spent.Components,
+		usage.Component{Name: "impurities", Kg: u.CrudeKg - u.ProductInKg - impurityInProduct - p.rerunI},
+		usage.Component{Name: "product in mixed fractions", Kg: lostMixed})
+	wet := usage.Stream{Name: "solvent-wet silica, sand and TLC plates", Class: usage.WetSolids}
+	wet.Components = append(wet.Components, usage.Component{Name: "silica gel", Kg: silicaWaste}, usage.Component{Name: "sea sand", Kg: sand}, usage.Component{Name: "TLC plates", Kg: tlcPlates * get(KeyPlateMass)})
+	for _, id := range wetSolvent.IDs() {
+		wet.Components = append(wet.Components, usage.Component{Name: id, Kg: wetSolvent[id] * mustSolvent(book, id).Density.V, Solvent: true})
+	}
+	wet.Components = append(wet.Components, usage.Component{Name: "product retained on silica", Kg: lostSilica})
+	u.Waste = []usage.Stream{spent, wet}
+	if dry.Total() > 0 {
+		u.Waste = append(u.Waste, solventStream("dry-load solvent (evaporated before the column)", dry, book))
+	}
+	p.demands(u, sc, coef, used, recovered, silicaTotal, sand, tlcPlates, lostMixed+lostSilica)
+}
+
+// solventStream is a stream of solvents, halogenated when any is.
+func solventStream(name string, v scenario.Volumes, book *solvent.Book) usage.Stream {
+	st := usage.Stream{Name: name, Class: usage.NonHalogenated, VolumeM3: v.Total()}
+	for _, id := range v.IDs() {
+		s := mustSolvent(book, id)
+		if s.Halogenated && v[id] > 0 {
+			st.Class = usage.Halogenated
+		}
+		st.Components = append(st.Components, usage.Component{Name: id, Kg: v[id] * s.Density.V, Solvent: true})
+	}
+	return st
+}
+
+// recover takes the share of the spent eluent distilled for reuse out of
+// the liquid waste: the scenario's share times the distillation's yield,
+// at most the share of recovered eluent a later run may take.
+func (p *runPlan) recover(u *usage.Usage, liquid scenario.Volumes, coef source.Set, share float64) scenario.Volumes {
+	recovered := scenario.Volumes{}
+	if share <= 0 {
+		return recovered
+	}
+	eff := share * coef.Get(KeyRecoveryYield)
+	limit := coef.Get(KeyReuseShare)
+	for id, v := range liquid {
+		r := math.Min(v*eff, limit*v)
+		recovered[id] = r
+		liquid[id] -= r
+	}
+	u.Notef(usage.Info, "%.0f %% of the spent eluent is sent to distillation for reuse; at a yield of %.0f %% it returns %.0f %% (at most %.0f %% of a later run's eluent may be recovered solvent); recovered solvent is credited at its purchase price and its distillation charged as electricity.",
+		share*100, coef.Get(KeyRecoveryYield)*100, math.Min(eff, limit)*100, limit*100)
+	return recovered
+}
+
+// demands asks the ledger for every quantity of the candidate.
+func (p *runPlan) demands(u *usage.Usage, sc *scenario.Scenario, coef source.Set, used, recovered scenario.Volumes, silica, sand, tlcPlates, lost float64) {
+	book, get := sc.Solvents, coef.Get
+	evap := scenario.Volumes{}
+	for id, v := range p.evaporated {
+		evap[id] = v * p.runs
+	}
+	for id, v := range p.dryLoad {
+		evap[id] += v * p.runs
+	}
+	heat := heatToEvaporate(book, evap, get(KeyBathDelta))
+	u.AddFigure("evaporation_heat", "heat to evaporate product fractions and dry-load solvent", heat, "kWh")
+	_, attended := u.Hours()
+	d := u.AddDemand
+	if silica > 0 {
+		d(ItemSilica, "silica gel 40–63 µm (columns and dry load)", usage.Materials, silica, units.Mass)
+	}
+	if sand > 0 {
+		d(ItemSand, "sand layers", usage.Materials, sand, units.Mass)
+	}
+	for _, id := range used.IDs() {
+		d(id, "solvent: "+id, usage.Materials, used[id], units.Volume)
+	}
+	u.AddCountedDemand(ItemTLCPlate, "TLC plates for fractions", usage.Materials, tlcPlates, tlcPlates*get(KeyPlateMass))
+	d(ItemLabour, "hands-on time", usage.Labour, attended*3600, units.Time)
+	d(ItemElectricity, "evaporator bath and chiller", usage.Energy, evaporationElectricity(coef, heat), units.Energy)
+	addDemandsOfEquipment(u, p.e, p.ev, p.colHours*3600, p.evapHours*3600)
+	for _, s := range u.Waste {
+		d(s.Class.DisposalItem(), s.DisposalLabel(), usage.Disposal, s.Kg(), units.Mass)
+	}
+	d(ItemProduct, "product lost (mixed fractions, retained on silica)", usage.ProductLoss, lost, units.Mass)
+	if len(recovered) > 0 {
+		for _, id := range recovered.IDs() {
+			d(id, "recovered for reuse: "+id, usage.Credit, -recovered[id], units.Volume)
+		}
+		d(ItemElectricity, "distilling the recovered eluent", usage.Energy, evaporationElectricity(coef, heatToEvaporate(book, recovered, get(KeyBathDelta))), units.Energy)
+	}
+}
