@@ -4,6 +4,7 @@ import (
 	"math"
 	"math/rand/v2"
 	"runtime"
+	"slices"
 	"sort"
 	"sync"
 
@@ -302,12 +303,7 @@ func (u *Uncertainty) weighInputs(p *costing.Plan, r *ledger.Rates, x []float64,
 		}
 		ys = append(ys, diff)
 	}
-	ry := make([][]float64, len(ys)) // ranks of a column with no NaN, else nil
-	for c, y := range ys {
-		if !hasNaN(y) {
-			ry[c] = ranks(y)
-		}
-	}
+	groups := rankGroups(ys)
 	nb := netBenefit(perG, u.ProductG)
 	u.EVPI = evpi(nb.rows)
 	sens := make([]Sensitivity, nI)
@@ -318,13 +314,18 @@ func (u *Uncertainty) weighInputs(p *costing.Plan, r *ledger.Rates, x []float64,
 			xi[k] = x[k*nI+i]
 		}
 		order := argsort(xi)
-		rx := ranksOrdered(xi, order)
 		rho := make([]float64, len(ys))
-		for c, y := range ys {
-			if ry[c] != nil {
-				rho[c] = pearson(rx, ry[c])
-			} else {
-				rho[c] = spearman(xi, y)
+		for c := range rho {
+			rho[c] = math.NaN()
+		}
+		full := ranksOrdered(xi, order)
+		for _, g := range groups {
+			rx := full
+			if g.valid != nil {
+				rx = ranks(subset(xi, g.valid))
+			}
+			for n, c := range g.cols {
+				rho[c] = pearson(rx, g.ry[n])
 			}
 		}
 		s := Sensitivity{Input: i, Rho: rho[:len(p.Methods)], Decision: math.NaN()}
@@ -354,13 +355,59 @@ func (u *Uncertainty) weighInputs(p *costing.Plan, r *ledger.Rates, x []float64,
 	sort.SliceStable(u.Worth, func(a, b int) bool { return u.Worth[a].Value > u.Worth[b].Value })
 }
 
-func hasNaN(v []float64) bool {
-	for _, x := range v {
-		if math.IsNaN(x) {
-			return true
+// rankGroup is columns that are numbers in the same draws (valid; nil for
+// all draws), with their ranks over those draws: an input's draws are
+// ranked once per group, not once per column.
+type rankGroup struct {
+	valid []int
+	cols  []int
+	ry    [][]float64
+}
+
+// rankGroups groups the columns by the draws in which they are numbers;
+// a column that is a number in fewer than three draws is left out (its
+// correlations stay NaN).
+func rankGroups(ys [][]float64) []rankGroup {
+	var gs []rankGroup
+	for c, y := range ys {
+		var valid []int
+		for k, v := range y {
+			if !math.IsNaN(v) {
+				valid = append(valid, k)
+			}
 		}
+		if len(valid) < 3 {
+			continue
+		}
+		if len(valid) == len(y) {
+			valid = nil
+		}
+		g := -1
+		for i := range gs {
+			if slices.Equal(gs[i].valid, valid) {
+				g = i
+			}
+		}
+		if g < 0 {
+			gs = append(gs, rankGroup{valid: valid})
+			g = len(gs) - 1
+		}
+		gs[g].cols = append(gs[g].cols, c)
+		gs[g].ry = append(gs[g].ry, ranks(subset(y, valid)))
 	}
-	return false
+	return gs
+}
+
+// subset is v at the indexes given; v itself for nil.
+func subset(v []float64, idx []int) []float64 {
+	if idx == nil {
+		return v
+	}
+	out := make([]float64, len(idx))
+	for n, k := range idx {
+		out[n] = v[k]
+	}
+	return out
 }
 
 // strength is the rank correlation that orders the sensitivity table: with

@@ -1,7 +1,6 @@
 package scale
 
 import (
-	"cmp"
 	"math"
 	"slices"
 )
@@ -138,18 +137,30 @@ func spearman(x, y []float64) float64 {
 	return pearson(ranks(xs), ranks(ys))
 }
 
-// argsort is the order of the indices of v by value, ties by index.
+// argsort is the order of the indices of v by value, ties by index (v
+// holds no NaN).
 func argsort(v []float64) []int {
-	idx := make([]int, len(v))
-	for i := range idx {
-		idx[i] = i
+	type iv struct {
+		v float64
+		i int
 	}
-	slices.SortFunc(idx, func(a, b int) int {
-		if c := cmp.Compare(v[a], v[b]); c != 0 {
-			return c
+	ps := make([]iv, len(v))
+	for i, x := range v {
+		ps[i] = iv{x, i}
+	}
+	slices.SortFunc(ps, func(a, b iv) int {
+		switch {
+		case a.v < b.v:
+			return -1
+		case a.v > b.v:
+			return 1
 		}
-		return a - b
+		return a.i - b.i
 	})
+	idx := make([]int, len(v))
+	for k, p := range ps {
+		idx[k] = p.i
+	}
 	return idx
 }
 
