@@ -23,6 +23,9 @@ func (u *Uncertainty) Advice(w Worth) string {
 	case KindModelForm:
 		act = "settle by a trial column which route sizes the silica"
 	}
+	if in.Act != "" {
+		act = in.Act
+	}
 	return fmt.Sprintf("%s (%s): worth up to %s %s in this decision", act, in.Field, Money(w.Value), u.Currency)
 }
 

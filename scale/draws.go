@@ -126,6 +126,7 @@ type Uncertain struct {
 	Dist    string    // the distribution in words
 	Basis   string    // where the spread comes from, with its source or mark
 	Keys    []string  // coefficient keys that share this draw
+	Act     string    // what to do to know it, in words; "" for the kind's usual words (Advice)
 }
 
 // design says how one draw is made: which inputs, how each is drawn and
@@ -189,9 +190,13 @@ func (d *design) addMeasured(sc *scenario.Scenario) {
 			basis = fmt.Sprintf("written without a range: default for %s (%s; %s)", m.Kind, sp.Source, sp.Mark)
 		}
 		r := m.Range
+		act := "measure the " + m.Label + " again"
+		if m.Kind == scenario.KindEstimate {
+			act = "firm up the estimate of the " + m.Label
+		}
 		d.measured = append(d.measured, d.add(Uncertain{Name: m.Label, Field: m.Field, Kind: KindMeasured, Unit: m.Unit,
 			Nominal: m.Display(r.Nominal), Lo: m.Display(r.Lo()), Hi: m.Display(r.Hi()),
-			Dist: "rectangular", Basis: basis}, rectangular(r.Lo(), r.Hi())))
+			Dist: "rectangular", Basis: basis, Act: act}, rectangular(r.Lo(), r.Hi())))
 	}
 }
 
