@@ -35,7 +35,7 @@ func (p *Plan) Cautions() []string {
 		out = append(out, "Flammable solvents: "+strings.Join(flammable, ", ")+". Work in a fume hood, keep ignition sources (hot plates, heat guns, non-rated electrics, static) away, ground large containers when pouring, and store and move bulk solvent as your site's fire code requires.")
 	}
 	if len(peroxide) > 0 {
-		out = append(out, "Peroxide-forming ethers: "+strings.Join(peroxide, ", ")+". Date containers on opening, test for peroxides before concentrating or distilling, and never evaporate them to dryness.")
+		out = append(out, "Peroxide-forming solvents (ethers, secondary alcohols and others): "+strings.Join(peroxide, ", ")+". Date containers on opening, test for peroxides before concentrating or distilling, and never evaporate them to dryness.")
 	}
 	if len(halogenated) > 0 {
 		out = append(out, "Halogenated solvents: "+strings.Join(halogenated, ", ")+". Toxic by inhalation; handle in a fume hood with suitable gloves (dichloromethane passes through nitrile quickly) and collect separately from non-halogenated waste.")

@@ -38,13 +38,13 @@ func TestSettings(t *testing.T) {
 	if c := p.Coef.Of(chrom.KeyBedDensity); c.SI != 450 || c.Mark != "scenario" {
 		t.Errorf("bed density = %+v", c)
 	}
-	_, err = Prepare(load(t, base+"settings:\n  chromatography.bed_hieght: \"12 cm\"\n  chromatography.bed_density: \"12 cm\"\n"))
+	_, err = Prepare(load(t, base+"settings:\n  chromatography.bed_hieght_max: \"12 cm\"\n  chromatography.bed_density: \"12 cm\"\n"))
 	var ps scenario.Problems
 	if !errors.As(err, &ps) || len(ps) != 2 {
 		t.Fatalf("want 2 problems, got %v", err)
 	}
 	msg := err.Error()
-	for _, w := range []string{"s.yaml:9: settings.chromatography.bed_hieght", "valid settings:", "chromatography.calibration_bed_height", "s.yaml:10:", "is length", "density"} {
+	for _, w := range []string{"s.yaml:9: settings.chromatography.bed_hieght_max", `did you mean "chromatography.bed_height_max"?`, "valid settings of chromatography:", "s.yaml:10:", "is length", "density"} {
 		if !strings.Contains(msg, w) {
 			t.Errorf("error lacks %q:\n%s", w, msg)
 		}
@@ -68,7 +68,7 @@ func TestCautions(t *testing.T) {
 		t.Fatal(err)
 	}
 	all := strings.Join(p.Cautions(), "\n")
-	for _, w := range []string{"diethyl ether (flash point -45 °C)", "Peroxide-forming ethers: diethyl ether", "Silica gel dust", "licensed environmental-health-and-safety"} {
+	for _, w := range []string{"diethyl ether (flash point -45 °C)", "Peroxide-forming solvents (ethers, secondary alcohols and others): diethyl ether", "Silica gel dust", "licensed environmental-health-and-safety"} {
 		if !strings.Contains(all, w) {
 			t.Errorf("cautions lack %q:\n%s", w, all)
 		}

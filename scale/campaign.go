@@ -279,7 +279,7 @@ func (d *Decision) onCampaign(cr *CampaignReport) {
 	}
 	changed := cr.Winner != d.Winner
 	w, _ := cr.Cost(cr.Winner)
-	d.Winner, d.WinnerPerG = cr.Winner, w.PerGram
+	d.Winner, d.WinnerPerG, d.OnCampaign = cr.Winner, w.PerGram, true
 	// A tie found by the Monte Carlo draws stands when the winner is the same.
 	d.RunnerUp, d.RunnerPerG, d.Margin, d.Tie = "", 0, 0, cr.Tie || (d.Tie && !changed)
 	if r, ok := cr.Cost(cr.RunnerUp); ok {

@@ -53,6 +53,10 @@ type Decision struct {
 	Flips       []Flip
 	Infeasible  map[string]string // method → reason
 	Explanation []string          // the decision in words a budget request can quote
+	// OnCampaign is true when the scenario's campaign decided: WinnerPerG,
+	// RunnerPerG and Margin are then per gram over the whole campaign, not
+	// of one batch.
+	OnCampaign bool
 }
 
 // Decide runs every method at the target mass and names the cheapest

@@ -118,5 +118,8 @@ func EstimateWith(p *costing.Plan, t *prices.Table, massesKg []float64, opt Opti
 	if sc.Notes != "" {
 		r.Notes = append(r.Notes, usage.Note{Level: usage.Info, Text: sc.Notes})
 	}
+	if n := UnusedPrices(t, res); n != nil {
+		r.Notes = append(r.Notes, *n)
+	}
 	return r, nil
 }

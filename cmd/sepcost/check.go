@@ -13,11 +13,13 @@ import (
 	"sepcost/costing/prices"
 	"sepcost/costing/scenario"
 	"sepcost/costing/usage"
+	"sepcost/scale"
 )
 
 type checkOptions struct {
 	scenario  string
 	prices    string
+	sheet     string
 	equipment string
 }
 
@@ -36,7 +38,8 @@ The exit code is 1 when anything must be fixed.`,
 			return runCheck(cmd.Context(), opts, cmd.OutOrStdout())
 		},
 	}
-	cmd.Flags().StringVar(&opts.prices, "prices", "", "price table CSV (default: prices.csv beside the scenario)")
+	cmd.Flags().StringVar(&opts.prices, "prices", "", "price table, CSV or .xlsx (default: prices.csv beside the scenario)")
+	addPricesSheetFlag(cmd, &opts.sheet)
 	cmd.Flags().StringVar(&opts.equipment, "equipment", "", "site equipment table CSV (default: equipment.csv beside the scenario if there is one, else the built-in table)")
 	return cmd
 }
@@ -50,7 +53,7 @@ func runCheck(_ context.Context, opts *checkOptions, stdout io.Writer) error {
 	if err != nil {
 		problems = append(problems, err)
 	}
-	t, err := loadPrices(opts.prices, opts.scenario)
+	t, err := loadPrices(opts.prices, opts.sheet, opts.scenario)
 	var ue usageError
 	if errors.As(err, &ue) {
 		return err
@@ -62,6 +65,11 @@ func runCheck(_ context.Context, opts *checkOptions, stdout io.Writer) error {
 	if sc != nil {
 		plan, err = preparePlan(sc, opts.equipment, opts.scenario)
 		if err != nil {
+			problems = append(problems, err)
+		}
+	}
+	if plan != nil && t != nil {
+		if t, err = plan.Prices(t); err != nil {
 			problems = append(problems, err)
 		}
 	}
@@ -77,7 +85,7 @@ func runCheck(_ context.Context, opts *checkOptions, stdout io.Writer) error {
 		n += printProblems(stdout, p)
 	}
 	if n > 0 {
-		fmt.Fprintf(stdout, "\n%d problem(s) to fix.\n", n)
+		fmt.Fprintf(stdout, "\n%s to fix.\n", plural(n, "problem", "problems"))
 		return errCheckFailed
 	}
 	fmt.Fprintf(stdout, "%s: scenario %q reads cleanly (%d batch masses, methods: %v)\n", opts.scenario, sc.Name, len(sc.MassesKg), plan.MethodNames())
@@ -101,6 +109,9 @@ func runCheck(_ context.Context, opts *checkOptions, stdout io.Writer) error {
 			}
 		}
 	}
+	if n := scale.UnusedPrices(t, results); n != nil {
+		fmt.Fprintf(stdout, "note: %s\n", n.Text)
+	}
 	if warned == 0 {
 		fmt.Fprintln(stdout, "no model warnings")
 	}
@@ -123,6 +134,23 @@ func printProblems(w io.Writer, err error) int {
 		}
 		return len(pe)
 	}
+	if j, ok := err.(interface{ Unwrap() []error }); ok {
+		// errors.Join of several problems (the ledger's): count each.
+		n := 0
+		for _, e := range j.Unwrap() {
+			n += printProblems(w, e)
+		}
+		return n
+	}
 	fmt.Fprintln(w, err.Error())
 	return 1
+}
+
+// plural writes a count with the noun in the right number: "1 problem",
+// "6 problems".
+func plural(n int, one, many string) string {
+	if n == 1 {
+		return "1 " + one
+	}
+	return fmt.Sprintf("%d %s", n, many)
 }

@@ -196,3 +196,55 @@ func TestSolventsCommand(t *testing.T) {
 		}
 	}
 }
+
+// --format and the -o extension agree: a contradiction is a usage error,
+// and the demo's default file name takes the format's extension, so JSON
+// never lands in an .xlsx name.
+func TestFormatAndExtensionAgree(t *testing.T) {
+	for _, args := range [][]string{
+		{"demo", "--format", "json", "-o", "x.xlsx"},
+		{"estimate", "x.yaml", "--format", "xlsx", "-o", "x.json"},
+		{"estimate", "x.yaml", "--format", "text", "-o", "x.csv"},
+	} {
+		if _, _, err := runCLI(t, args...); exitCode(err) != 2 || !strings.Contains(err.Error(), "agree") {
+			t.Errorf("%v: exit %d (%v), want 2 naming the disagreement", args, exitCode(err), err)
+		}
+	}
+	dir := t.TempDir()
+	wd, _ := os.Getwd()
+	if err := os.Chdir(dir); err != nil {
+		t.Fatal(err)
+	}
+	defer os.Chdir(wd)
+	if _, _, err := runCLI(t, "demo", "--format", "json"); err != nil {
+		t.Fatal(err)
+	}
+	b, err := os.ReadFile(filepath.Join(dir, "sepcost-demo.json"))
+	if err != nil || !json.Valid(b) {
+		t.Fatalf("demo --format json: sepcost-demo.json %v (valid JSON: %v)", err, json.Valid(b))
+	}
+	if _, err := os.Stat(filepath.Join(dir, "sepcost-demo.xlsx")); err == nil {
+		t.Error("demo --format json wrote sepcost-demo.xlsx")
+	}
+	out, _, err := runCLI(t, "demo", "--format", "text")
+	if err != nil || !strings.Contains(out, "Recommendation at") {
+		t.Errorf("demo --format text: %v; output starts %.80q", err, out)
+	}
+	if _, err := os.Stat(filepath.Join(dir, "sepcost-demo.xlsx")); err == nil {
+		t.Error("demo --format text wrote sepcost-demo.xlsx")
+	}
+}
+
+// --prices-sheet names a sheet of an .xlsx price table; given with a CSV
+// table it is a usage error rather than silently ignored.
+func TestPricesSheetNeedsWorkbook(t *testing.T) {
+	dir := t.TempDir()
+	if _, _, err := runCLI(t, "init", filepath.Join(dir, "case")); err != nil {
+		t.Fatal(err)
+	}
+	sc := filepath.Join(dir, "case", "scenario.yaml")
+	_, _, err := runCLI(t, "check", sc, "--prices-sheet", "Prices")
+	if exitCode(err) != 2 || !strings.Contains(err.Error(), ".xlsx") {
+		t.Errorf("exit %d (%v), want 2 saying the sheet needs an .xlsx table", exitCode(err), err)
+	}
+}

@@ -5,6 +5,7 @@ import (
 	"context"
 	"fmt"
 	"io"
+	"strings"
 
 	"github.com/spf13/cobra"
 
@@ -49,13 +50,22 @@ func runDemo(_ context.Context, opts *demoOptions, stdout, stderr io.Writer) err
 	if opts.liquid {
 		data, name = templates.Liquid, "built-in liquid demo scenario"
 	}
-	if opts.out == "" {
-		opts.out = "sepcost-demo.xlsx"
-		if opts.liquid {
-			opts.out = "sepcost-demo-liquid.xlsx"
+	out := opts.out
+	if out == "" {
+		// The default name takes the extension of the format asked for:
+		// --format json writes sepcost-demo.json, never JSON into an .xlsx
+		// name; --format text prints to the terminal only.
+		f := opts.format
+		if f == "" {
+			f = "xlsx"
 		}
+		base := "sepcost-demo"
+		if opts.liquid {
+			base = "sepcost-demo-liquid"
+		}
+		out = defaultOut(base, strings.ToLower(f))
 	}
-	format, err := formatFor(opts.format, opts.out)
+	format, err := formatFor(opts.format, out)
 	if err != nil {
 		return err
 	}
@@ -75,10 +85,10 @@ func runDemo(_ context.Context, opts *demoOptions, stdout, stderr io.Writer) err
 	if err != nil {
 		return err
 	}
-	if err := emit(buf, opts.out, opts.force, stdout); err != nil {
+	if err := emit(buf, out, opts.force, stdout); err != nil {
 		return err
 	}
-	if format != "text" && opts.out != "" && opts.out != "-" {
+	if format != "text" && out != "" && out != "-" {
 		text, err := render(r, "text")
 		if err != nil {
 			return err
@@ -86,7 +96,11 @@ func runDemo(_ context.Context, opts *demoOptions, stdout, stderr io.Writer) err
 		if _, err := stdout.Write(text.Bytes()); err != nil {
 			return err
 		}
-		fmt.Fprintf(stderr, "\nwrote %s (open it in a spreadsheet program; every cost cell is a live formula on the Prices sheet)\n", opts.out)
+		if format == "xlsx" {
+			fmt.Fprintf(stderr, "\nwrote %s (open it in a spreadsheet program; every cost cell is a live formula on the Prices sheet)\n", out)
+		} else {
+			fmt.Fprintf(stderr, "\nwrote %s\n", out)
+		}
 	}
 	return nil
 }
@@ -95,6 +109,9 @@ func runDemo(_ context.Context, opts *demoOptions, stdout, stderr io.Writer) err
 func buildReport(sc *scenario.Scenario, t *prices.Table, masses []float64) (*scale.Report, error) {
 	plan, err := costing.Prepare(sc)
 	if err != nil {
+		return nil, err
+	}
+	if t, err = plan.Prices(t); err != nil {
 		return nil, err
 	}
 	return scale.Estimate(plan, t, masses)

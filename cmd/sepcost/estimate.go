@@ -13,7 +13,7 @@ import (
 type estimateOptions struct {
 	scenario  string
 	prices    string
-	equipment string
+	sheet     string
 	masses    massList
 	target    string
 	out       string
@@ -21,6 +21,7 @@ type estimateOptions struct {
 	force     bool
 	draws     int
 	seed      uint64
+	equipment string
 }
 
 func newEstimateCommand() *cobra.Command {
@@ -43,7 +44,8 @@ at the scenario's target_mass (else its largest mass).`,
 		},
 	}
 	f := cmd.Flags()
-	f.StringVar(&opts.prices, "prices", "", "price table CSV (default: prices.csv beside the scenario)")
+	f.StringVar(&opts.prices, "prices", "", "price table, CSV or .xlsx (default: prices.csv beside the scenario)")
+	addPricesSheetFlag(cmd, &opts.sheet)
 	f.StringVar(&opts.equipment, "equipment", "", "site equipment table CSV (default: equipment.csv beside the scenario if there is one, else the built-in table)")
 	f.Var(&opts.masses, "mass", `crude batch masses with units, e.g. "250mg,20g,2kg" (default: the scenario's masses)`)
 	addTargetFlag(cmd, &opts.target)
@@ -83,7 +85,7 @@ func runEstimate(_ context.Context, opts *estimateOptions, stdout, stderr io.Wri
 	if err != nil {
 		return err
 	}
-	plan, t, err := loadPlan(opts.scenario, opts.prices, opts.equipment)
+	plan, t, err := loadPlan(opts.scenario, opts.prices, opts.sheet, opts.equipment)
 	if err != nil {
 		return err
 	}

@@ -6,6 +6,9 @@ import (
 	"io"
 	"os"
 	"path/filepath"
+	"strings"
+
+	"github.com/spf13/cobra"
 
 	"sepcost/cmd/sepcost/internal/plain"
 	"sepcost/cmd/sepcost/internal/workbook"
@@ -25,14 +28,27 @@ func loadScenario(path string) (*scenario.Scenario, error) {
 }
 
 // loadPrices reads --prices, or else prices.csv beside the scenario (the
-// layout `sepcost init` writes); the report names the file used.
-func loadPrices(path, scenarioPath string) (*prices.Table, error) {
+// layout `sepcost init` writes); the report names the file used. A file
+// named .xlsx is read from its sheet named by --prices-sheet (default: the
+// first sheet), with the same checks as a CSV table.
+func loadPrices(path, sheet, scenarioPath string) (*prices.Table, error) {
 	if path == "" {
 		guess := filepath.Join(filepath.Dir(scenarioPath), "prices.csv")
 		if _, err := os.Stat(guess); err != nil {
 			return nil, usageError{fmt.Errorf("no price table: give --prices FILE (`sepcost init` writes an example), or put prices.csv beside %s", scenarioPath)}
 		}
 		path = guess
+	}
+	xlsx := strings.EqualFold(filepath.Ext(path), ".xlsx")
+	if sheet != "" && !xlsx {
+		return nil, usageError{fmt.Errorf("--prices-sheet %q: only a price table in an .xlsx workbook has sheets, and %s is not one", sheet, path)}
+	}
+	if xlsx {
+		data, err := readInput(path, "price workbook", workbook.MaxPriceBookBytes)
+		if err != nil {
+			return nil, err
+		}
+		return workbook.ReadPrices(bytes.NewReader(data), path, sheet)
 	}
 	data, err := readInput(path, "price table", prices.MaxFileSize)
 	if err != nil {
@@ -95,19 +111,23 @@ func preparePlan(sc *scenario.Scenario, equipmentPath, scenarioPath string) (*co
 	return costing.PrepareWith(sc, costing.Options{Equipment: eq})
 }
 
-// loadPlan reads a scenario, its price table and the site's equipment
-// table and prepares the plan.
-func loadPlan(scenarioPath, pricesPath, equipmentPath string) (*costing.Plan, *prices.Table, error) {
+// loadPlan reads a scenario, its price table (from the sheet pricesSheet of
+// an .xlsx workbook, or a CSV) and the site's equipment table and prepares
+// the plan.
+func loadPlan(scenarioPath, pricesPath, pricesSheet, equipmentPath string) (*costing.Plan, *prices.Table, error) {
 	sc, err := loadScenario(scenarioPath)
 	if err != nil {
 		return nil, nil, err
 	}
-	t, err := loadPrices(pricesPath, scenarioPath)
+	t, err := loadPrices(pricesPath, pricesSheet, scenarioPath)
 	if err != nil {
 		return nil, nil, err
 	}
 	plan, err := preparePlan(sc, equipmentPath, scenarioPath)
 	if err != nil {
+		return nil, nil, err
+	}
+	if t, err = plan.Prices(t); err != nil {
 		return nil, nil, err
 	}
 	return plan, t, nil
@@ -131,4 +151,9 @@ func writeOut(buf *bytes.Buffer, out string, force bool, stdout, stderr io.Write
 		fmt.Fprintf(stderr, "wrote %s\n", out)
 	}
 	return nil
+}
+
+// addPricesSheetFlag adds --prices-sheet, the sheet of an .xlsx price table.
+func addPricesSheetFlag(cmd *cobra.Command, sheet *string) {
+	cmd.Flags().StringVar(sheet, "prices-sheet", "", "the sheet that holds the price table when --prices is an .xlsx workbook (default: its first sheet)")
 }

@@ -17,10 +17,11 @@ import (
 type portfolioOptions struct {
 	plan      string
 	prices    string
-	equipment string
+	sheet     string
 	out       string
 	format    string
 	force     bool
+	equipment string
 }
 
 func newPortfolioCommand() *cobra.Command {
@@ -45,7 +46,8 @@ solvent purchases by solvent and hours; totals reconcile to the cent.`,
 			return runPortfolio(cmd.Context(), opts, cmd.OutOrStdout(), cmd.ErrOrStderr())
 		},
 	}
-	cmd.Flags().StringVar(&opts.prices, "prices", "", "price table CSV (default: prices.csv beside the plan)")
+	cmd.Flags().StringVar(&opts.prices, "prices", "", "price table, CSV or .xlsx (default: prices.csv beside the plan)")
+	addPricesSheetFlag(cmd, &opts.sheet)
 	cmd.Flags().StringVar(&opts.equipment, "equipment", "", "site equipment table CSV (default: equipment.csv beside the plan if there is one, else the built-in table)")
 	addOutputFlags(cmd, &opts.out, &opts.format, &opts.force)
 	return cmd
@@ -64,7 +66,7 @@ func runPortfolio(_ context.Context, opts *portfolioOptions, stdout, stderr io.W
 	if err != nil {
 		return err
 	}
-	t, err := loadPrices(opts.prices, opts.plan)
+	t, err := loadPrices(opts.prices, opts.sheet, opts.plan)
 	if err != nil {
 		return err
 	}

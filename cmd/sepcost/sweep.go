@@ -16,7 +16,7 @@ import (
 type sweepOptions struct {
 	scenario  string
 	prices    string
-	equipment string
+	sheet     string
 	from, to  string
 	toGiven   bool // --to was given on the command line
 	points    int
@@ -26,6 +26,7 @@ type sweepOptions struct {
 	force     bool
 	draws     int
 	seed      uint64
+	equipment string
 }
 
 func newSweepCommand() *cobra.Command {
@@ -49,7 +50,8 @@ target_mass (else its largest mass).`,
 		},
 	}
 	f := cmd.Flags()
-	f.StringVar(&opts.prices, "prices", "", "price table CSV (default: prices.csv beside the scenario)")
+	f.StringVar(&opts.prices, "prices", "", "price table, CSV or .xlsx (default: prices.csv beside the scenario)")
+	addPricesSheetFlag(cmd, &opts.sheet)
 	f.StringVar(&opts.equipment, "equipment", "", "site equipment table CSV (default: equipment.csv beside the scenario if there is one, else the built-in table)")
 	f.StringVar(&opts.from, "from", "100mg", "smallest crude batch mass, with its unit")
 	f.StringVar(&opts.to, "to", "10kg", "largest crude batch mass, with its unit")
@@ -96,7 +98,7 @@ func runSweep(_ context.Context, opts *sweepOptions, stdout, stderr io.Writer) e
 	if err != nil {
 		return err
 	}
-	plan, t, err := loadPlan(opts.scenario, opts.prices, opts.equipment)
+	plan, t, err := loadPlan(opts.scenario, opts.prices, opts.sheet, opts.equipment)
 	if err != nil {
 		return err
 	}

@@ -15,11 +15,12 @@ import (
 type wasteOptions struct {
 	scenario  string
 	prices    string
-	equipment string
+	sheet     string
 	masses    massList
 	out       string
 	format    string
 	force     bool
+	equipment string
 }
 
 func newWasteCommand() *cobra.Command {
@@ -40,7 +41,8 @@ local rules; the codes are suggestions to start from.`,
 			return runWaste(cmd.Context(), opts, cmd.OutOrStdout(), cmd.ErrOrStderr())
 		},
 	}
-	cmd.Flags().StringVar(&opts.prices, "prices", "", "price table CSV (default: prices.csv beside the scenario)")
+	cmd.Flags().StringVar(&opts.prices, "prices", "", "price table, CSV or .xlsx (default: prices.csv beside the scenario)")
+	addPricesSheetFlag(cmd, &opts.sheet)
 	cmd.Flags().StringVar(&opts.equipment, "equipment", "", "site equipment table CSV (default: equipment.csv beside the scenario if there is one, else the built-in table)")
 	cmd.Flags().Var(&opts.masses, "mass", `crude batch masses with units, e.g. "2kg" (default: the scenario's masses)`)
 	addOutputFlags(cmd, &opts.out, &opts.format, &opts.force)
@@ -52,7 +54,7 @@ func runWaste(_ context.Context, opts *wasteOptions, stdout, stderr io.Writer) e
 	if err != nil {
 		return err
 	}
-	plan, t, err := loadPlan(opts.scenario, opts.prices, opts.equipment)
+	plan, t, err := loadPlan(opts.scenario, opts.prices, opts.sheet, opts.equipment)
 	if err != nil {
 		return err
 	}

@@ -117,7 +117,7 @@ func (a analysis) header(sc *scenario.Scenario, coef source.Set, crudeKg float64
 	fig, note := u.AddFigure, u.Notef
 	fig("k_product", "retention factor k of the product", RetentionFactor(ch.ProductRf), "")
 	fig("cv_product", "product elutes at (column volumes)", ElutionCV(ch.ProductRf), "")
-	fig("delta_cv", "difference in elution volume from the nearest impurity (column volumes)", DeltaCV(ch.ProductRf, ch.ImpurityRf), "")
+	fig("elution_volume_difference_cv", "difference in elution volume from the nearest impurity (column volumes)", DeltaCV(ch.ProductRf, ch.ImpurityRf), "")
 	fig("alpha", "separation factor α", a.sep.Alpha(), "")
 	fig("plates_reference", fmt.Sprintf("theoretical plates of a %.0f cm bed (Knox plate height at the flow used)", coef.Get(KeyRefBed)*100), a.plates, "")
 	fig("target_purity", "purity asked of the product fractions", a.target, "%")

@@ -7,7 +7,7 @@ import (
 
 // Bed properties used to read Still's table. Source: a 15 cm
 // bed (Still et al. 1978, about 5–6 in, from memory) and 0.5 g/mL packed
-// density (silica gel 60, 0.45–0.55 g/mL, from memory).
+// density (flash silica, 40–63 µm, 0.45–0.55 g/mL, from memory).
 const (
 	testBedHeight  = 0.15
 	testBedDensity = 500.0

@@ -25,9 +25,10 @@ func RetentionFactor(rf float64) float64 { return (1 - rf) / rf }
 // (same source as RetentionFactor).
 func ElutionCV(rf float64) float64 { return 1 / rf }
 
-// DeltaCV is the separation of two spots in column volumes:
+// DeltaCV is the difference in elution volume of two spots, in column
+// volumes:
 //
-//	ΔCV = 1/Rf(lower spot) − 1/Rf(upper spot)
+//	ΔV/V0 = 1/Rf(lower spot) − 1/Rf(upper spot)
 func DeltaCV(rfA, rfB float64) float64 {
 	lo, hi := order(rfA, rfB)
 	return 1/lo - 1/hi

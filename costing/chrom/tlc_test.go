@@ -34,7 +34,7 @@ func TestTLCRelations(t *testing.T) {
 
 // Less polar compounds run higher on silica TLC and elute first: the spot
 // with the higher Rf has the smaller k and the smaller CV (common practice,
-// no source). Selectivity and ΔCV do not depend on the order of arguments.
+// no source). Selectivity and the difference in elution volume do not depend on the order of arguments.
 func TestElutionOrderAndSelectivity(t *testing.T) {
 	upper, lower := 0.45, 0.30
 	if !(ElutionCV(upper) < ElutionCV(lower)) {
@@ -45,12 +45,12 @@ func TestElutionOrderAndSelectivity(t *testing.T) {
 		t.Fatalf("α = %g / %g, want equal and > 1", a1, a2)
 	}
 	// Hand computation: k(0.30) = 2.3333, k(0.45) = 1.2222, α = 1.9091;
-	// ΔCV = 3.3333 − 2.2222 = 1.1111.
+	// 1/Rf difference = 3.3333 − 2.2222 = 1.1111.
 	if math.Abs(a1-1.909090909) > 1e-6 {
 		t.Errorf("α = %.7f, want 1.9090909", a1)
 	}
 	if d := DeltaCV(upper, lower); math.Abs(d-1.111111111) > 1e-6 {
-		t.Errorf("ΔCV = %.7f, want 1.1111111", d)
+		t.Errorf("difference in elution volume = %.7f, want 1.1111111", d)
 	}
 	s := Separation{ProductRf: 0.30, ImpurityRf: 0.45, Product: 0.8, Impurity: 0.1}
 	if s.FirstIsProduct() {

@@ -99,7 +99,7 @@ func Defaults() []source.Coefficient {
 		c(KeyExtrapolation, "distance outside the measured solubility range that draws a warning", 10, units.Temperature, "K", "ln S curves in 1/T (large heat capacity of solution), so a van 't Hoff line is a guess beyond a few kelvin", source.CommonPractice),
 		c(KeyDilution, "solvent per product above which the crystallization is called dilute", 50e-3, units.SpecificVolume, "mL/g", "beyond about 50 volumes (mL per g) a crystallization is impractically dilute", source.CommonPractice),
 		c(KeySolidCp, "heat capacity of the organic solid", 1293, SpecificHeatCapacity, "J/(g K)", "naphthalene, 39.601 cal/(mol·K) at 298.15 K (McCullough et al. 1957, in the NIST Chemistry WebBook) ÷ 128.17 g/mol; organic solids lie at about 1.0–1.5 J/(g·K)", source.Derived),
-		c(KeyRoomT, "room temperature (start of heating, cooling-water limit)", 293.15, units.Temperature, "C", "", source.CommonPractice),
+		c(KeyRoomT, "room temperature (start of heating, cooling-water limit)", 293.15, units.Temperature, "°C", "", source.CommonPractice),
 		c(KeyHeatApproach, "jacket or bath above the dissolution temperature while heating", 20, units.Temperature, "K", "", source.CommonPractice),
 		c(KeyCoolApproach, "jacket or bath below the isolation temperature while cooling", 10, units.Temperature, "K", "", source.CommonPractice),
 		c(KeyMaxCoolingRate, "fastest controlled cooling ramp", 30.0/h, CoolingRate, "K/h", "0.1–1 K/min, to grow filterable crystals rather than crash them out", source.CommonPractice),

@@ -40,7 +40,7 @@ func Cautions(sc *scenario.Scenario) []string {
 	}
 	if len(perox) > 0 {
 		sort.Strings(perox)
-		out = append(out, "Peroxide-forming ethers and other peroxidisable compounds: "+strings.Join(perox, ", ")+". Test for peroxides before distilling and remove them first; distillation concentrates peroxides in the pot, so never take it to a small residue.")
+		out = append(out, "Peroxide-forming compounds (ethers, secondary alcohols and others): "+strings.Join(perox, ", ")+". Test for peroxides before distilling and remove them first; distillation concentrates peroxides in the pot, so never take it to a small residue.")
 	}
 	return out
 }

@@ -168,7 +168,7 @@ func failStages(o *outcome, stages float64) string {
 }
 
 func failHoldup(o *outcome) string {
-	return fmt.Sprintf("the still head and column hold about %.2g mL, %.0f %% of the %.2g mL charge in the smallest suitable still (%s): too small a batch for this apparatus; a short-path (Kugelrohr) distillation or a larger batch would suit", o.vHold*1e6, o.holdShare*100, o.st.Charge*1e6, formatL(o.st.Volume))
+	return fmt.Sprintf("the still head and column hold about %.2g mL, %.0f %% of the %.2g mL charge in the smallest suitable still (%s): too small a batch for this apparatus; a bulb-to-bulb short-path distillation or a larger batch would suit", o.vHold*1e6, o.holdShare*100, o.st.Charge*1e6, formatL(o.st.Volume))
 }
 
 func (m *Model) failUnreachable(o *outcome) string {

@@ -40,8 +40,8 @@ func (m *Model) reportPressure(u *usage.Usage, o *outcome) {
 	fig("pot_pressure_needed", "highest pot pressure within the stability limit", o.psatH, "mbar")
 	fig("head_pressure", "operating pressure at the still head", o.pr.Head, "mbar")
 	fig("pot_pressure", "pressure in the pot", o.pr.Pot, "mbar")
-	fig("pot_temperature", "pot temperature (boiling point of the less volatile component at the pot pressure)", o.tPot, "C")
-	fig("head_temperature", "head temperature (boiling point of the more volatile component at the head pressure)", o.tHead, "C")
+	fig("pot_temperature", "pot temperature (boiling point of the less volatile component at the pot pressure)", o.tPot, "°C")
+	fig("head_temperature", "head temperature (boiling point of the more volatile component at the head pressure)", o.tHead, "°C")
 	m.pressureNotes(u, o)
 }
 

@@ -9,6 +9,7 @@ import (
 	"github.com/shopspring/decimal"
 
 	"sepcost/costing/prices"
+	"sepcost/costing/units"
 	"sepcost/costing/usage"
 )
 
@@ -27,6 +28,7 @@ const QtyPlaces = 6
 // line by line; totals are sums of rounded lines.
 //
 //	q      = Q / f                        quantity in the price unit
+//	q      = Q · ρ / f                    a volume of a liquid priced per mass (ρ: Item.Density)
 //	qty    = round(q, QtyPlaces)
 //	amount = round(qty × p, m)            half away from zero
 //	Total  = Σ amount
@@ -138,12 +140,19 @@ func price(u usage.Usage, t *prices.Table, miss *missingSet, purchase map[string
 			continue
 		}
 		it := t.Items[idx]
-		if it.Per.Dim != d.Dim {
+		qSI := d.Qty
+		switch {
+		case it.Per.Dim == d.Dim:
+		case it.Per.Dim == units.Mass && d.Dim == units.Volume && it.Density > 0:
+			// A liquid priced per mass: its volume times its density
+			// (prices.Table.Resolve records the density).
+			qSI = d.Qty * it.Density
+		default:
 			errs = append(errs, &DimensionError{Item: d.Item, Label: d.Label, Group: d.Group,
 				File: t.File, Line: it.Line, Unit: it.Unit, Priced: it.Per.Dim, Used: d.Dim})
 			continue
 		}
-		q := d.Qty / it.Per.Factor
+		q := qSI / it.Per.Factor
 		if math.IsNaN(q) || math.IsInf(q, 0) {
 			errs = append(errs, &QuantityError{Method: u.Method, Item: d.Item, Label: d.Label, Qty: q, Unit: it.Unit,
 				Msg: fmt.Sprintf("quantity is %v %s after conversion to the price unit; the model produced no usable number", q, it.Unit)})

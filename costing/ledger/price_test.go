@@ -538,3 +538,36 @@ func sheetRound(qty, price decimal.Decimal, places int32) decimal.Decimal {
 	}
 	return decimal.NewFromBigInt(q, -places)
 }
+
+// A liquid priced per kg is priced by volume × density once the table has
+// been resolved against the solvents: 2 L of ethyl acetate at 0.902 g/mL
+// (density at 20 °C: CRC Handbook of Chemistry and Physics, from memory)
+// is 1.804 kg; at 11.00 per kg that is 19.844, rounded 19.84.
+func TestLiquidPricedPerMass(t *testing.T) {
+	tb := table(t, "EUR", "EtOAc,kg,11.00,CUR,solvent,,")
+	names := func(n string) (string, float64, bool) {
+		if strings.EqualFold(n, "etoac") || n == "ethyl acetate" {
+			return "ethyl acetate", 902, true
+		}
+		return "", 0, false
+	}
+	u := usage.Usage{Method: "chromatography", Feasible: true, Demands: []usage.Demand{
+		{Item: "ethyl acetate", Label: "solvent: ethyl acetate", Group: usage.Materials, Qty: 2e-3, Dim: units.Volume}}}
+	if _, err := ledger.Price(u, tb); !errors.Is(err, ledger.ErrMissingPrice) {
+		t.Errorf("before Resolve the alias names no item the model demands: %v", err)
+	}
+	if _, err := ledger.Price(u, table(t, "EUR", "ethyl acetate,kg,11.00,CUR,solvent,,")); !errors.Is(err, ledger.ErrDimension) {
+		t.Errorf("without the density a volume cannot be priced per kg: %v", err)
+	}
+	rt, err := tb.Resolve(names)
+	if err != nil {
+		t.Fatal(err)
+	}
+	l, err := ledger.Price(u, rt)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if len(l.Lines) != 1 || l.Lines[0].Qty.String() != "1.804" || l.Lines[0].Unit != "kg" || l.Total.StringFixed(2) != "19.84" {
+		t.Errorf("got %+v", l)
+	}
+}

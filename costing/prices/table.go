@@ -27,6 +27,10 @@ type Item struct {
 	// SI units of Per.Dim. An item may have several lines, one per band.
 	From   string
 	FromSI float64
+
+	// Set by Resolve, not read from the file:
+	Written string  // the name as written when Resolve renamed it to a solvent's canonical name ("heptane" for n-heptane)
+	Density float64 // kg/m³ of the solvent an item priced per mass names, so that a volume of it can be priced; 0 otherwise
 }
 
 // PriceSpread is the item's spread, written or DefaultSpread.

@@ -157,12 +157,12 @@ func (s Solvent) Coefficients() []source.Coefficient {
 			"computed from the formula with IUPAC CIAAW abridged standard atomic weights (Prohaska et al., Pure Appl. Chem. 2022, 94, 573)",
 			source.Derived),
 		c("density", "density at 20 °C", s.Density.V, units.Density, "g/mL", s.Density.Source, s.Density.Mark),
-		c("boiling_point", "normal boiling point", s.BoilingPoint.V, units.Temperature, "C", s.BoilingPoint.Source, s.BoilingPoint.Mark),
+		c("boiling_point", "normal boiling point", s.BoilingPoint.V, units.Temperature, "°C", s.BoilingPoint.Source, s.BoilingPoint.Mark),
 		c("hvap", "enthalpy of vaporization at the normal boiling point", s.HVap.V, units.MolarEnergy, "kJ/mol", s.HVap.Source, s.HVap.Mark),
 		c("cp", "liquid heat capacity near 25 °C", s.Cp.V, units.MolarHeatCapacity, "J/(mol K)", s.Cp.Source, s.Cp.Mark),
 	}
 	if s.HasFlashPoint {
-		out = append(out, c("flash_point", "flash point, closed cup", s.FlashPoint.V, units.Temperature, "C", s.FlashPoint.Source, s.FlashPoint.Mark))
+		out = append(out, c("flash_point", "flash point, closed cup", s.FlashPoint.V, units.Temperature, "°C", s.FlashPoint.Source, s.FlashPoint.Mark))
 	}
 	out = append(out,
 		c("halogenated", "halogenated (1 yes, 0 no)", b2f(s.Halogenated), units.None, "",

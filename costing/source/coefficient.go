@@ -6,7 +6,6 @@ package source
 import (
 	"fmt"
 	"sort"
-	"strings"
 
 	"sepcost/costing/units"
 )
@@ -199,12 +198,13 @@ func (t *table) own() {
 }
 
 // Override replaces the value of a known coefficient with the user's.
-// It returns an error naming the valid keys when the key is unknown, and an
+// It returns an error naming the nearest key and the valid keys of the
+// same method when the key is unknown (suggest), and an
 // error naming the wanted dimension when the quantity has another one.
 func (s Set) Override(key string, q units.Quantity, raw string) error {
 	c, ok := s.Lookup(key)
 	if !ok {
-		return fmt.Errorf("unknown model setting %q; valid settings: %s", key, strings.Join(s.Keys(), ", "))
+		return fmt.Errorf("unknown model setting %q; %s", key, s.suggest(key))
 	}
 	if q.Dim != c.Dim {
 		return fmt.Errorf("%q is %s but %s needs %s", raw, q.Dim.Name(), key, units.Accepted(c.Dim))

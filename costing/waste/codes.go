@@ -265,7 +265,7 @@ func Sources() []source.Coefficient {
 		add("waste.us."+strings.ToLower(e.code), c.Code+" "+c.Title, e.level*1e-3, units.Density, "mg/L", c.Source, c.Mark)
 	}
 	add("waste.us.flash_limit", "D001 flash-point limit (a liquid flashing below it is ignitable)", FlashLimit,
-		units.Temperature, "C", src26121+", paragraph (a)(1): \"flash point less than 60 °C (140 °F)\"; paragraph (b): D001", conf)
+		units.Temperature, "°C", src26121+", paragraph (a)(1): \"flash point less than 60 °C (140 °F)\"; paragraph (b): D001", conf)
 	add("waste.us.alcohol_limit", "D001 exclusion: aqueous solution with less than this alcohol by volume", AlcoholLimit,
 		units.None, "%", src26121+", paragraph (a)(1): \"less than 24 percent alcohol by volume\"", conf)
 	add("waste.us.aqueous_water_min", "D001 exclusion: water by weight that makes a solution aqueous", AqueousWaterMin,

@@ -8,94 +8,41 @@ import (
 	"strings"
 	"text/tabwriter"
 
+	"github.com/shopspring/decimal"
+
 	"sepcost/costing"
 	"sepcost/costing/scenario"
+	"sepcost/costing/units"
 	"sepcost/costing/usage"
 	"sepcost/scale"
 )
 
-// Text writes a terminal summary: per batch mass and method the key
-// figures, the cost and the warnings; then the cautions.
+// hoursPerDay turns elapsed hours into working days of one 8-hour shift
+// (common practice, no source).
+const hoursPerDay = 8.0
+
+// Text writes a terminal summary in the order of the workbook's Summary:
+// the recommendation at the target mass first (method, cost per gram with
+// its P10–P90, batch cost, time, runner-up, margin, methods left out), its
+// explanation and cost drivers, the warnings at the target mass, the
+// crossovers of a sweep; then per batch mass and method the key figures
+// and costs (a sweep: one table); then the cautions.
 func Text(w io.Writer, r *scale.Report) error {
 	ew := &errWriter{w: w}
 	ew.printf("%s\n", r.Title)
 	ew.printf("scenario: %s   prices: %s (%s)\n", r.ScenarioFile, r.PricesFile, r.Prices.Currency)
-	if r.IsSweep {
-		ew.printf("\n")
-		if err := sweepTable(ew, r); err != nil {
-			return err
-		}
-	}
-	for i, m := range r.MassesKg {
-		if r.IsSweep {
-			break
-		}
-		for j, name := range r.Methods {
-			res := r.Results[i][j]
-			u := res.Usage
-			ew.printf("\n== %s of crude by %s ==\n", scenario.FormatMass(m), name)
-			if !u.Feasible {
-				if strings.HasPrefix(u.Reason, costing.NotAssessed) {
-					ew.printf("%s\n", u.Reason)
-				} else {
-					ew.printf("not feasible: %s\n", u.Reason)
-				}
-				continue
-			}
-			tw := tabwriter.NewWriter(ew, 0, 0, 2, ' ', 0)
-			for _, f := range u.Figures {
-				if strings.HasPrefix(f.Key, "solvent:") || f.Key == "k_product" || f.Key == "band_cv" {
-					continue
-				}
-				fmt.Fprintf(tw, "  %s\t%s %s\n", f.Label, num(f.Display()), f.Unit)
-			}
-			el, at := u.Hours()
-			fmt.Fprintf(tw, "  time, elapsed / hands-on\t%s h / %s h\n", num(el), num(at))
-			fmt.Fprintf(tw, "  waste\t%s kg\n", num(u.WasteKg()))
-			for _, g := range usage.Groups {
-				if s := res.Ledger.Subtotal(g); !s.IsZero() {
-					fmt.Fprintf(tw, "  cost: %s\t%s %s\n", g, s.StringFixed(res.Ledger.Places), res.Ledger.Currency)
-				}
-			}
-			fmt.Fprintf(tw, "  TOTAL\t%s %s\n", res.Ledger.Total.StringFixed(res.Ledger.Places), res.Ledger.Currency)
-			if u.ProductOutKg > 0 {
-				fmt.Fprintf(tw, "  per gram of purified product\t%.2f %s/g\n", res.PerGram(), res.Ledger.Currency)
-			}
-			if err := tw.Flush(); err != nil {
-				return err
-			}
-			// Warnings at every mass; the models' notes on what they
-			// assumed at the decision's mass.
-			for _, n := range u.Notes {
-				if n.Level != usage.Info || m == r.TargetKg {
-					ew.printf("  %s: %s\n", n.Level, n.Text)
-				}
-			}
-		}
-	}
-	if d := r.Decision; d != nil {
-		why := ""
-		if r.TargetWhy != "" {
-			why = " (" + r.TargetWhy + ")"
-		}
-		ew.printf("\nDecision at %s of crude%s:\n", scenario.FormatMass(d.TargetKg), why)
-		for _, line := range d.Explanation {
-			ew.printf("  %s\n", line)
-		}
-		for _, dr := range d.Drivers {
-			ew.printf("  %s: %s is %.0f %% of the cost\n", dr.Method, dr.Item, dr.Share*100)
-		}
-	}
+	textDecision(ew, r)
+	textWarnings(ew, r)
 	assumptions(ew, r)
 	campaignText(ew, r)
 	if r.IsSweep {
 		crossovers(ew, r)
-		if len(r.Warnings) > 0 {
-			ew.printf("\nWarnings:\n")
+		ew.printf("\nBy batch mass and method:\n")
+		if err := sweepTable(ew, r); err != nil {
+			return err
 		}
-		for _, w := range r.Warnings {
-			ew.printf("  %s: %s\n", w.Level, w.Line())
-		}
+	} else if err := textDetails(ew, r); err != nil {
+		return err
 	}
 	if len(r.Cautions) > 0 {
 		ew.printf("\nCautions:\n")
@@ -104,6 +51,119 @@ func Text(w io.Writer, r *scale.Report) error {
 		}
 	}
 	return ew.err
+}
+
+// money writes an amount with the currency's places and thousands
+// separators: "1,813.00 EUR".
+func money(d decimal.Decimal, places int32, currency string) string {
+	return units.Group(d.StringFixed(places)) + " " + currency
+}
+
+// perGram writes a cost per gram to three significant figures.
+func perGram(v float64, currency string) string {
+	return units.Sig3(v) + " " + currency + "/g"
+}
+
+// textDecision writes the recommendation at the target mass.
+func textDecision(ew *errWriter, r *scale.Report) {
+	d := r.Decision
+	if d == nil {
+		return
+	}
+	cur := r.Prices.Currency
+	why := ""
+	if r.TargetWhy != "" {
+		why = " (" + r.TargetWhy + ")"
+	}
+	ew.printf("\nRecommendation at %s of crude%s:\n", scenario.FormatMass(d.TargetKg), why)
+	tw := tabwriter.NewWriter(ew, 0, 0, 2, ' ', 0)
+	if d.Winner == "" {
+		fmt.Fprintf(tw, "  recommended\tnone: no method is feasible at this mass\n")
+	} else {
+		line := fmt.Sprintf("%s, %s of purified product", d.Winner, perGram(d.WinnerPerG, cur))
+		one := ""
+		if d.OnCampaign {
+			line += " over the campaign"
+			one = " for one batch"
+		}
+		if b, ok := band(r, d.Winner); ok {
+			line += fmt.Sprintf(" (P10–P90%s %s to %s over %d draws)", one, units.Sig3(b.P10), units.Sig3(b.P90), r.Uncertainty.Draws)
+		}
+		fmt.Fprintf(tw, "  recommended\t%s\n", line)
+		if w := winner(r, d); w != nil {
+			el, _ := w.Usage.Hours()
+			fmt.Fprintf(tw, "  batch cost\t%s; %s elapsed, %s working days of 8 h\n", money(w.Ledger.Total, w.Ledger.Places, cur),
+				units.Readable(el, "h"), units.Sig3(el/hoursPerDay))
+		}
+	}
+	if d.RunnerUp != "" {
+		fmt.Fprintf(tw, "  runner-up\t%s, %s\n", d.RunnerUp, perGram(d.RunnerPerG, cur))
+		margin := fmt.Sprintf("%s cheaper per gram", units.Readable(d.Margin*100, "%"))
+		if d.Tie {
+			margin += fmt.Sprintf(": a tie, within %.0f %% of each other, inside the models' uncertainty", scale.TieMargin*100)
+		}
+		fmt.Fprintf(tw, "  margin\t%s\n", margin)
+	}
+	if d.Confidence > 0 {
+		fmt.Fprintf(tw, "  confidence\tcheapest in %s of the draws\n", units.Readable(d.Confidence*100, "%"))
+	}
+	for _, meth := range sortedReasons(d.Infeasible) {
+		reason := d.Infeasible[meth]
+		fmt.Fprintf(tw, "  %s\t%s: %s\n", costing.StatusOf(false, reason).Words(), meth, costing.Detail(reason))
+	}
+	tw.Flush()
+	for _, line := range d.Explanation {
+		ew.printf("  %s\n", line)
+	}
+	for _, dr := range d.Drivers {
+		ew.printf("  cost driver: %s, %s is %.0f %% of its cost\n", dr.Method, dr.Item, dr.Share*100)
+	}
+}
+
+// band is a method's band of the uncertainty draws, if it has one.
+func band(r *scale.Report, method string) (scale.Band, bool) {
+	if r.Uncertainty == nil {
+		return scale.Band{}, false
+	}
+	for _, b := range r.Uncertainty.Bands {
+		if b.Method == method && b.Feasible > 0 {
+			return b, true
+		}
+	}
+	return scale.Band{}, false
+}
+
+// winner is the winner's result at the target mass, nil when the target
+// mass is not among the report's masses.
+func winner(r *scale.Report, d *scale.Decision) *scale.Result {
+	for i, kg := range r.MassesKg {
+		if diff := kg - d.TargetKg; diff > 1e-9*kg || diff < -1e-9*kg {
+			continue
+		}
+		for j, m := range r.Methods {
+			if m == d.Winner && r.Results[i][j].Usage.Feasible {
+				return &r.Results[i][j]
+			}
+		}
+	}
+	return nil
+}
+
+// textWarnings writes every warning and caution of the models, once per
+// method and wording, with the masses it was raised at, then the report's
+// notes.
+func textWarnings(ew *errWriter, r *scale.Report) {
+	if len(r.Warnings)+len(r.Notes) == 0 {
+		return
+	}
+	ew.printf("\nWarnings and notes:\n")
+	for _, w := range r.Warnings {
+		ew.printf("  %s: %s\n", w.Level, w.Line())
+	}
+	// The report's own notes: the scenario's, and price lines no method used.
+	for _, n := range r.Notes {
+		ew.printf("  %s: %s\n", n.Level, n.Text)
+	}
 }
 
 // assumptions prints the defaults the user did not set that move a
@@ -154,17 +214,55 @@ func crossovers(ew *errWriter, r *scale.Report) {
 	}
 }
 
-// num prints a figure with about four significant digits.
-func num(v float64) string {
-	switch {
-	case v == 0:
-		return "0"
-	case v >= 1000 || v <= -1000:
-		return fmt.Sprintf("%.0f", v)
-	default:
-		return strings.TrimSuffix(strings.TrimRight(fmt.Sprintf("%.4g", v), "."), ".")
+// textDetails writes, per batch mass and method, the key figures, time,
+// waste, costs by group and the warnings.
+func textDetails(ew *errWriter, r *scale.Report) error {
+	cur := r.Prices.Currency
+	for i, m := range r.MassesKg {
+		for j, name := range r.Methods {
+			res := r.Results[i][j]
+			u := res.Usage
+			ew.printf("\n== %s of crude by %s ==\n", scenario.FormatMass(m), name)
+			if !u.Feasible {
+				ew.printf("%s: %s\n", res.Status().Words(), costing.Detail(u.Reason))
+				continue
+			}
+			tw := tabwriter.NewWriter(ew, 0, 0, 2, ' ', 0)
+			for _, f := range u.Figures {
+				if strings.HasPrefix(f.Key, "solvent:") || f.Key == "k_product" || f.Key == "band_cv" {
+					continue
+				}
+				fmt.Fprintf(tw, "  %s\t%s\n", f.Label, units.Readable(f.Display(), f.Unit))
+			}
+			el, at := u.Hours()
+			fmt.Fprintf(tw, "  time, elapsed / hands-on\t%s / %s\n", units.Readable(el, "h"), units.Readable(at, "h"))
+			fmt.Fprintf(tw, "  waste\t%s\n", units.Readable(u.WasteKg(), "kg"))
+			for _, g := range usage.Groups {
+				if s := res.Ledger.Subtotal(g); !s.IsZero() {
+					fmt.Fprintf(tw, "  cost: %s\t%s\n", g, money(s, res.Ledger.Places, cur))
+				}
+			}
+			fmt.Fprintf(tw, "  TOTAL\t%s\n", money(res.Ledger.Total, res.Ledger.Places, cur))
+			if u.ProductOutKg > 0 {
+				fmt.Fprintf(tw, "  per gram of purified product\t%s\n", perGram(res.PerGram(), cur))
+			}
+			if err := tw.Flush(); err != nil {
+				return err
+			}
+			// Warnings at every mass; the models' notes on what they
+			// assumed at the decision's mass.
+			for _, n := range u.Notes {
+				if n.Level != usage.Info || m == r.TargetKg {
+					ew.printf("  %s: %s\n", n.Level, n.Text)
+				}
+			}
+		}
 	}
+	return nil
 }
+
+// num prints a figure to three significant figures.
+func num(v float64) string { return units.Sig3(v) }
 
 type errWriter struct {
 	w   io.Writer

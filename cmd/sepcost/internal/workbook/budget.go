@@ -75,7 +75,7 @@ func buildBudget(g *grid, st *styles, r *scale.Report, m money, lay *layout) {
 	b, c := r.Budget, r.Campaign
 	g.widths[bItem] = 40
 	g.maxWidths[bLabel] = 32 // ledger labels wrap, so the amounts above stay near their headings
-	g.printWide = true
+	// Printed landscape, one page wide, like every sheet (pageSetup).
 	g.set(1, 1, cell{value: "Budget request: " + r.Title, style: st.title, spill: true})
 	mergedCell(g, 2, 1, bBand, cell{value: strings.Join(c.Explanation, " "), style: st.wrap, wrap: true})
 	facts := []struct {
@@ -134,7 +134,7 @@ func buildBudget(g *grid, st *styles, r *scale.Report, m money, lay *layout) {
 	budgetLedger(g, st, r, m, lay)
 	first, last, methods := budgetCampaigns(g, st, r, bLedgerHead+len(lines)+3)
 	if len(methods) > 0 {
-		g.beforeRows = func(f *excelize.File) error {
+		g.extra = func(f *excelize.File, _ map[int]float64) error {
 			part, err := addChartTo(f, sheetBudget, cellName(len(methods)+3, first-2), paybackChart(first, last, methods))
 			if err != nil {
 				return err

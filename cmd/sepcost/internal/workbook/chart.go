@@ -70,13 +70,14 @@ func (sp chartSpec) chart(r *scale.Report, block func(j int) (int, int), methods
 var axisFont = excelize.Font{Color: "404040"}
 
 // addChart adds a chart anchored at cell of the Scale-up sheet and returns
-// the name of the chart part that excelize created for it, found as the
-// one part that was not there before.
+// the name of the chart part that excelize created for it.
 func addChart(f *excelize.File, cell string, ch *excelize.Chart) (string, error) {
 	return addChartTo(f, sheetScaleUp, cell, ch)
 }
 
-// addChartTo is addChart on any sheet.
+// addChartTo adds a chart anchored at cell of a sheet and returns the name
+// of the chart part that excelize created for it, found as the one part
+// that was not there before.
 func addChartTo(f *excelize.File, sheet, cell string, ch *excelize.Chart) (string, error) {
 	before := chartParts(f)
 	if err := f.AddChart(sheet, cell, ch); err != nil {
@@ -216,7 +217,25 @@ func logXAxis(b []byte) ([]byte, error) {
 	res = bytes.ReplaceAll(res, []byte("<"+p+"xVal><"+p+"strRef>"), []byte("<"+p+"xVal><"+p+"numRef>"))
 	res = bytes.ReplaceAll(res, []byte("</"+p+"strRef></"+p+"xVal>"), []byte("</"+p+"numRef></"+p+"xVal>"))
 	res = bytes.ReplaceAll(res, []byte("<"+p+`scatterStyle val="smoothMarker"`), []byte("<"+p+`scatterStyle val="lineMarker"`))
-	return res, nil
+	return uprightTitles(res, p), nil
+}
+
+// uprightTitles turns the Y axis title upright (read from bottom to top)
+// in a chart part whose chart namespace prefix is p. excelize rotates the
+// title's rich text by −90° (bodyPr rot="-5400000") but follows it with a
+// text-properties element whose bodyPr says rot="0", which LibreOffice
+// obeys: the title then lies across the chart and squeezes the plot. The
+// second bodyPr is given the same rotation.
+func uprightTitles(b []byte, p string) []byte {
+	title := regexp.MustCompile(`(?s)<` + regexp.QuoteMeta(p) + `title>.*?</` + regexp.QuoteMeta(p) + `title>`)
+	flat := []byte("<" + p + `txPr><a:bodyPr anchorCtr="false" rot="0"`)
+	upright := []byte("<" + p + `txPr><a:bodyPr anchorCtr="false" rot="-5400000" vert="horz"`)
+	return title.ReplaceAllFunc(b, func(t []byte) []byte {
+		if !bytes.Contains(t, []byte(`rot="-5400000"`)) {
+			return t
+		}
+		return bytes.Replace(t, flat, upright, 1)
+	})
 }
 
 // chartXML is the part of a chart part that checkLogChart reads; element

@@ -50,7 +50,7 @@ func TestSummaryCheapestPerGram(t *testing.T) {
 	}
 	col := -1
 	for c, h := range head {
-		if h == "Cheapest" {
+		if h == "Cheapest per gram" {
 			col = c
 		}
 	}
@@ -65,8 +65,8 @@ func TestSummaryCheapestPerGram(t *testing.T) {
 		marked++
 		ref, _ := excelize.CoordinatesToCellName(col+1, k+1)
 		fo, _ := f.GetCellFormula(sheetSummary, ref)
-		if !strings.HasPrefix(fo, "IF(D") {
-			t.Errorf("%s: the mark compares %q, not the cost-per-gram column D", ref, fo)
+		if !strings.HasPrefix(fo, "IF(E") {
+			t.Errorf("%s: the mark compares %q, not the cost-per-gram column E", ref, fo)
 		}
 		i := indexMass(r, row[0])
 		j := indexMethod(r, row[1])

@@ -2,20 +2,13 @@ package workbook
 
 import (
 	"fmt"
-	"sort"
 
 	"sepcost/scale"
 )
 
 // writeDecision writes, after a blank row, the decision at the target
-// mass (scale.Decision): its explanation in words, the cheapest method and
-// the runner-up with their cost per gram of purified product, the margin
-//
-//	margin = (c_runner − c_winner) / c_runner
-//
-// (c in currency per g; scale.Decide computes it, the sheet only shows
-// it), whether that is a tie, the methods not feasible with their reasons,
-// each method's largest cost drivers with their share of its total, and
+// mass (scale.Decision) in words (the figures are on the Summary), each
+// method's largest cost drivers with their share of its total, and
 // the break-even prices at which the decision would flip with how far each
 // is from today's price (break-even ÷ price now, a formula). The price now
 // is a reference to the Prices sheet, so it follows an edit; the other
@@ -45,60 +38,8 @@ func writeDecision(g *grid, st *styles, r *scale.Report, m money, row, lastCol i
 		g.set(row, 1, cell{value: "No explanation recorded.", style: st.note, spill: true})
 		row++
 	}
-	row++
-	perGram := func(row int, label, method string, v float64) {
-		g.text(row, 1, label, st.bold)
-		g.text(row, 2, capitalize(method), st.text)
-		g.num(row, 3, v, st.perGram)
-		g.set(row, 4, cell{value: "per gram of purified product", style: st.text, spill: true})
-	}
-	switch {
-	case d.Winner == "":
-		g.text(row, 1, "Cheapest method", st.bold)
-		g.set(row, 2, cell{value: "none: no method is feasible at this mass", style: st.text, spill: true})
-		row++
-	default:
-		perGram(row, "Cheapest method", d.Winner, d.WinnerPerG)
-		row++
-		if d.RunnerUp == "" {
-			g.text(row, 1, "Runner-up", st.bold)
-			g.set(row, 2, cell{value: "none: the only feasible method", style: st.text, spill: true})
-			row++
-			break
-		}
-		perGram(row, "Runner-up", d.RunnerUp, d.RunnerPerG)
-		row++
-		g.text(row, 1, "Margin", st.bold)
-		g.num(row, 3, d.Margin, st.percent)
-		g.set(row, 4, cell{value: "cheaper per gram than the runner-up", style: st.text, spill: true})
-		row++
-		g.text(row, 1, "Tie", st.bold)
-		tie := "no"
-		if d.Tie {
-			tie = fmt.Sprintf("yes: within %.0f %% of each other, inside the models' uncertainty; choose on other grounds", scale.TieMargin*100)
-		}
-		g.set(row, 2, cell{value: tie, style: st.text, spill: true})
-		row++
-	}
-	if d.Winner != "" && d.Confidence > 0 && finite(d.Confidence) {
-		g.text(row, 1, "Confidence", st.bold)
-		g.num(row, 3, d.Confidence, st.percent)
-		g.set(row, 4, cell{value: "of the Monte Carlo draws in which " + d.Winner + " is cheapest", style: st.text, spill: true})
-		row++
-	}
-	infeasible := make([]string, 0, len(d.Infeasible))
-	for meth := range d.Infeasible {
-		infeasible = append(infeasible, meth)
-	}
-	sort.Strings(infeasible) // a map has no order; the workbook must not change between runs
-	for _, meth := range infeasible {
-		g.text(row, 1, "Not feasible", st.bold)
-		g.text(row, 2, capitalize(meth), st.text)
-		g.set(row, 3, cell{value: d.Infeasible[meth], style: st.text, spill: true})
-		row++
-	}
-	g.set(row, 1, cell{value: "The decision, cost drivers and break-even prices were worked out with the prices as read; " +
-		"unlike the totals, they do not follow an edit on the Prices sheet.", style: st.note, spill: true})
+	g.set(row, 1, cell{value: "The explanation, cost drivers and break-even prices were worked out with the prices as read; " +
+		"unlike the totals and the recommendation on the Summary, they do not follow an edit on the Prices sheet.", style: st.note, spill: true})
 	row++
 
 	row++
@@ -138,7 +79,7 @@ func writeDecision(g *grid, st *styles, r *scale.Report, m money, row, lastCol i
 			style := st.priceStyle(fl.Price)
 			if k, ok := r.Prices.Find(fl.Item); ok && r.Prices.Items[k].Price.Equal(fl.Price) {
 				g.formula(row, 3, priceRef(k), fl.Price.InexactFloat64(), style)
-				lay.add(sheetSummary, cellName(3, row), fl.Price, "unit price")
+				lay.add(sheetDecision, cellName(3, row), fl.Price, "unit price")
 			} else {
 				g.num(row, 3, fl.Price.InexactFloat64(), style)
 			}
@@ -229,4 +170,39 @@ func crossoverTable(g *grid, st *styles, cs []scale.Crossover, row int) int {
 		row++
 	}
 	return row
+}
+
+// sheetDecision explains the decision the Summary shows.
+const sheetDecision = "Decision"
+
+// decisionCols is the width of the Decision sheet in columns: the
+// break-even table's.
+const decisionCols = 6
+
+// buildDecisionSheet writes the Decision sheet: the decision in words, the
+// cost drivers and break-even prices (writeDecision), the crossover masses
+// (writeCrossovers) and the report's notes of every level.
+func buildDecisionSheet(g *grid, st *styles, r *scale.Report, m money, lay *layout) {
+	title := "Decision"
+	if r.Title != "" {
+		title += ": " + r.Title
+	}
+	g.set(1, 1, cell{value: title, style: st.title, spill: true})
+	row := writeDecision(g, st, r, m, 1, decisionCols, lay)
+	row = writeCrossovers(g, st, r, row, decisionCols)
+	row++
+	g.set(row, 1, cell{value: "Notes", style: st.heading, spill: true})
+	row++
+	if len(r.Notes) == 0 {
+		g.set(row, 1, cell{value: "No notes.", style: st.note, spill: true})
+	}
+	for _, n := range r.Notes {
+		g.text(row, 1, string(n.Level), st.text)
+		g.set(row, 2, cell{value: n.Text, style: st.wrap, wrap: true})
+		for k := 3; k <= decisionCols; k++ {
+			g.blank(row, k, st.wrap)
+		}
+		g.merge(row, 2, decisionCols)
+		row++
+	}
 }

@@ -24,10 +24,24 @@ func liquidDemoReport(t *testing.T) *scale.Report {
 
 func demoReportOf(t *testing.T, yaml []byte, name string) *scale.Report {
 	t.Helper()
+	return demoReportEdited(t, yaml, name, func(*scenario.Scenario) {})
+}
+
+// batchDemoReport is the demo without its campaign: the decision is made
+// on one batch at the target mass, so the Summary's recommendation is made
+// of formulas on the batch table.
+func batchDemoReport(t *testing.T) *scale.Report {
+	return demoReportEdited(t, templates.Scenario, "built-in demo scenario", func(sc *scenario.Scenario) { sc.Campaign = nil })
+}
+
+// demoReportEdited runs a demo scenario after edit has changed it.
+func demoReportEdited(t *testing.T, yaml []byte, name string, edit func(*scenario.Scenario)) *scale.Report {
+	t.Helper()
 	sc, err := scenario.Load(bytes.NewReader(yaml), name)
 	if err != nil {
 		t.Fatal(err)
 	}
+	edit(sc)
 	pt, err := prices.Read(bytes.NewReader(templates.Prices), "built-in example prices")
 	if err != nil {
 		t.Fatal(err)

@@ -27,7 +27,7 @@ func ExampleWrite() {
 		}
 	}
 	// Output:
-	// C8 num 119.71 formula "Chromatography!F41" format "#,##0.00 \"EUR\""
-	// C9 num 758.57 formula "Chromatography!H41" format "#,##0.00 \"EUR\""
-	// C10 num 51080.61 formula "Chromatography!J41" format "#,##0.00 \"EUR\""
+	// D10 num 119.71 formula "Chromatography!F41" format "#,##0.00 \"EUR\""
+	// D11 num 758.57 formula "Chromatography!H41" format "#,##0.00 \"EUR\""
+	// D12 num 51080.61 formula "Chromatography!J41" format "#,##0.00 \"EUR\""
 }

@@ -16,7 +16,11 @@ import (
 // shape an EHS office can paste into its forecast.
 func WriteWaste(w io.Writer, r *scale.Report) error {
 	t := Table{Name: "Waste forecast", Title: "Waste forecast: " + r.Title + " (codes from " + r.WasteSector + ")",
-		Header: []string{"Crude batch", "Method", "Recommended", "Stream", "Class", "kg", "L", "Composition by mass", "EU List of Waste", "US EPA", "Rules applied", "Disposal cost"}}
+		Header: []string{"Crude batch", "Method", "Recommended", "Stream", "Class", "kg", "L", "Composition by mass", "EU List of Waste", "US EPA", "Rules applied (below)", "Disposal cost"}}
+	// The same rules apply to many streams: each is written once, numbered,
+	// below the table, and a stream's row lists the numbers.
+	ruleNo := map[string]int{}
+	var rules []string
 	for _, row := range r.Waste {
 		rec := ""
 		if d := r.Decision; d != nil && d.TargetKg == row.CrudeKg && d.Winner == row.Method {
@@ -28,9 +32,13 @@ func WriteWaste(w io.Writer, r *scale.Report) error {
 		}
 		t.Rows = append(t.Rows, []Cell{Text(scenario.FormatMass(row.CrudeKg)), Text(row.Method), Text(rec), Text(row.Stream.Name), Text(string(row.Stream.Class)),
 			Num(row.Kg), Num(row.Litres), Text(row.Stream.Composition()), Text(row.Classification.SchemeCodes("EU LoW")), Text(row.Classification.SchemeCodes("US EPA")),
-			Text(strings.Join(row.Classification.Rules, " | ")), cost})
+			Text(ruleRefs(row.Classification.Rules, ruleNo, &rules)), cost})
 	}
 	t.Notes = []string{waste.Caution}
+	for k, rule := range rules {
+		t.Notes = append(t.Notes, fmt.Sprintf("Rule %d: %s", k+1, rule))
+	}
+	t.Chart = &TableChart{Title: "Waste by stream, kg", LabelCol: 4, Col: 6, N: len(t.Rows), ValueAxisTitle: "kg"}
 	places := prices.MinorUnits(r.Prices.Currency)
 	return WriteTables(w, r.Prices.Currency, places, []Table{t})
 }
@@ -80,6 +88,7 @@ func WritePortfolio(w io.Writer, pf *scale.Portfolio) error {
 	for _, m := range ms {
 		byMethod.Rows = append(byMethod.Rows, []Cell{Text(m), Money(pf.ByMethod[m])})
 	}
+	byMethod.Chart = &TableChart{Title: "Cost over the plan by method, " + pf.Currency, LabelCol: 1, Col: 2, N: len(byMethod.Rows), ValueAxisTitle: pf.Currency}
 	tabs = append(tabs, byMethod)
 
 	wasteT := Table{Name: "Waste", Title: "Waste over the plan", Header: []string{"Class", "kg", "Disposal cost"}}
@@ -105,4 +114,20 @@ func WritePortfolio(w io.Writer, pf *scale.Portfolio) error {
 	}
 	tabs = append(tabs, caut)
 	return WriteTables(w, pf.Currency, pf.Places, tabs)
+}
+
+// ruleRefs numbers each rule at its first use (appending it to rules) and
+// returns a stream's rules as their numbers: "1, 2, 4".
+func ruleRefs(list []string, no map[string]int, rules *[]string) string {
+	refs := make([]string, 0, len(list))
+	for _, rule := range list {
+		n, ok := no[rule]
+		if !ok {
+			*rules = append(*rules, rule)
+			n = len(*rules)
+			no[rule] = n
+		}
+		refs = append(refs, fmt.Sprint(n))
+	}
+	return strings.Join(refs, ", ")
 }

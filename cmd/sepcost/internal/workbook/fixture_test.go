@@ -28,7 +28,7 @@ import (
 // ethyl acetate 0.902 g/mL, n-heptane 0.684 g/mL (CRC Handbook of Chemistry
 // and Physics, "Physical Constants of Organic Compounds"; from memory).
 // Solvent held in the spent silica: 0.75 mL per g of silica, the pore
-// volume of silica gel 60 (REFERENCES.md; from memory).
+// volume of flash silica, 40–63 µm (from memory).
 
 // fixturePrices is an example price table in EUR, invented for this test
 // (not quotes). Item i sits on Prices row i + 2.
@@ -316,8 +316,8 @@ func fixtureReport() *scale.Report {
 				Source: "Still, W. C.; Kahn, M.; Mitra, A. J. Org. Chem. 1978, 43, 2923 (5–6 in bed)", Mark: source.FromMemory},
 			{Key: "linear_velocity", Method: "chromatography", Label: "Solvent front speed", SI: 0.05 / 60, Dim: units.Velocity,
 				Unit: "cm/min", Source: "Still, Kahn and Mitra 1978 (2 in/min); J. Chem. Educ. 1984, 61, 649", Mark: source.FromMemory},
-			{Key: "pore_volume", Method: "chromatography", Label: "Pore volume of silica gel 60", SI: 0.75e-6 / 1e-3,
-				Dim: units.SpecificVolume, Unit: "mL/g", Source: "REFERENCES.md, silica gel 60", Mark: source.FromMemory},
+			{Key: "pore_volume", Method: "chromatography", Label: "Pore volume of flash silica, 40–63 µm", SI: 0.75e-6 / 1e-3,
+				Dim: units.SpecificVolume, Unit: "mL/g", Source: "typical flash silica, 40–63 µm (from memory)", Mark: source.FromMemory},
 			{Key: "silica_ratio_easy", Method: "chromatography", Label: "Silica : sample at ΔRf ≥ 0.2", SI: 60,
 				Source: "derived from Still, Kahn and Mitra 1978, Table 1, with a 15 cm bed at 0.5 g/mL", Mark: source.Derived},
 			{Key: "tlc_every", Method: "chromatography", Label: "Fractions per TLC lane", SI: 2,

@@ -5,6 +5,7 @@ import (
 	"math"
 	"sort"
 	"strconv"
+	"strings"
 
 	"github.com/xuri/excelize/v2"
 )
@@ -24,6 +25,7 @@ type cell struct {
 	style   int
 	wrap    bool // wrapped text: sets the row height, counts at most maxWidth for the column
 	spill   bool // text that may run over empty neighbours: not used to fit widths
+	small   bool // wrapped text in the 9 pt font (wrapSmall): more characters to a line
 }
 
 type merge struct{ row, first, last int }
@@ -40,20 +42,13 @@ type grid struct {
 	widths     map[int]float64 // widths fixed by the sheet's builder
 	minWidths  map[int]float64 // widths the content may widen but not narrow
 	maxWidths  map[int]float64 // widths the content may narrow but not widen (wrapped text)
-	printWide  bool            // print in landscape, scaled to one page wide
-	chart      []gridChart     // charts anchored on the sheet
-	// beforeRows, when set, runs after the StreamWriter is made and before
-	// the rows are written: excelize adds charts to a streamed sheet only
-	// before its rows.
-	beforeRows func(f *excelize.File) error
-}
-
-// gridChart is a chart anchored at a cell of a grid's sheet; logX makes
-// its X axis (crude mass) logarithmic, as logXAxes does.
-type gridChart struct {
-	cell  string
-	chart *excelize.Chart
-	logX  bool
+	titleRows  int             // rows repeated atop every printed page; 0: the frozen rows
+	onePage    bool            // print on one page, wide and tall
+	printCols  int             // columns printed (the print area), 0 for all
+	printRows  int             // rows printed, with printCols
+	// extra runs once the sheet's StreamWriter exists and the column
+	// widths are known, before any row is written (charts are added here).
+	extra func(f *excelize.File, widths map[int]float64) error
 }
 
 func newGrid(name string) *grid {
@@ -218,13 +213,18 @@ func (g *grid) fitWidths(st *styles) map[int]float64 {
 // flush writes the grid to its sheet with a StreamWriter: widths and panes
 // first, rows in ascending order, merges, then one Flush (DESIGN §9).
 // With omit set, formulas are written without their cached values.
-func (g *grid) flush(f *excelize.File, st *styles, omit bool) error {
-	if g.printWide {
-		// Before the StreamWriter: it copies the sheet's page setup and
-		// properties as they stand when it is made.
-		if err := printWide(f, g.name); err != nil {
-			return err
-		}
+func (g *grid) flush(f *excelize.File, st *styles, omit bool, title string) error {
+	// Before the StreamWriter: it copies the sheet's page setup and
+	// properties as they stand when it is made.
+	if err := pageSetup(f, g.name, title, g.onePage); err != nil {
+		return err
+	}
+	titles := g.titleRows
+	if titles == 0 {
+		titles = g.freezeRows
+	}
+	if err := printTitles(f, g.name, titles); err != nil {
+		return err
 	}
 	sw, err := f.NewStreamWriter(g.name)
 	if err != nil {
@@ -234,30 +234,15 @@ func (g *grid) flush(f *excelize.File, st *styles, omit bool) error {
 	if err := setWidths(sw, g.name, widths); err != nil {
 		return err
 	}
-	if g.beforeRows != nil {
-		if err := g.beforeRows(f); err != nil {
-			return fmt.Errorf("workbook: sheet %s: %w", g.name, err)
+	if g.extra != nil {
+		if err := g.extra(f, widths); err != nil {
+			return err
 		}
 	}
 	if g.freezeRows > 0 || g.freezeCols > 0 {
 		if err := sw.SetPanes(g.panes()); err != nil {
 			return fmt.Errorf("workbook: sheet %s: panes: %w", g.name, err)
 		}
-	}
-	// Charts before the rows and before Flush: after a StreamWriter has
-	// flushed, adding a chart makes excelize read the streamed sheet back.
-	var parts []string
-	for _, c := range g.chart {
-		part, err := addChartTo(f, g.name, c.cell, c.chart)
-		if err != nil {
-			return fmt.Errorf("workbook: sheet %s: chart: %w", g.name, err)
-		}
-		if c.logX {
-			parts = append(parts, part)
-		}
-	}
-	if err := logXAxes(f, parts); err != nil {
-		return fmt.Errorf("workbook: sheet %s: %w", g.name, err)
 	}
 	for row := 1; row <= g.maxRow; row++ {
 		cols := g.cells[row]
@@ -292,6 +277,9 @@ func (g *grid) flush(f *excelize.File, st *styles, omit bool) error {
 						w += widths[k]
 					}
 				}
+				if c.small {
+					w *= 11.0 / 9 // characters scale with the font size
+				}
 				if n := wrappedLines(s, w); n > lines {
 					lines = n
 				}
@@ -315,19 +303,67 @@ func (g *grid) flush(f *excelize.File, st *styles, omit bool) error {
 	if err := sw.Flush(); err != nil {
 		return fmt.Errorf("workbook: sheet %s: %w", g.name, err)
 	}
+	if g.printCols > 0 {
+		dn := excelize.DefinedName{Name: "_xlnm.Print_Area", RefersTo: sheetRef(g.name, absName(1, 1)+":"+absName(g.printCols, g.printRows)), Scope: g.name}
+		if err := f.SetDefinedName(&dn); err != nil {
+			return fmt.Errorf("workbook: sheet %s: print area: %w", g.name, err)
+		}
+	}
 	return nil
 }
 
-// printWide sets a sheet to print in landscape, scaled to fit one page
-// wide and as many pages down as it needs, so that a wide table prints
-// whole rather than split into column strips on separate pages.
-func printWide(f *excelize.File, sheet string) error {
-	landscape, one, down, fit := "landscape", 1, 0, true
-	if err := f.SetPageLayout(sheet, &excelize.PageLayoutOptions{Orientation: &landscape, FitToWidth: &one, FitToHeight: &down}); err != nil {
+// pageSetup sets a sheet to print in landscape on A4, scaled to fit one
+// page wide and as many pages down as it needs (one page with onePage), so that a wide table
+// prints whole rather than split into column strips on separate pages;
+// every page is headed by the sheet's name and the report's title and
+// numbered "page n of m" (the &A, &P and &N fields of the header and
+// footer syntax, ECMA-376 Part 1, §18.3.1.46, from memory). Call it before
+// the sheet's StreamWriter is made: the writer copies the page setup as it
+// stands then.
+func pageSetup(f *excelize.File, sheet, title string, onePage bool) error {
+	landscape, one, down, fit, a4 := "landscape", 1, 0, true, 9
+	if onePage {
+		down = 1
+	}
+	if err := f.SetPageLayout(sheet, &excelize.PageLayoutOptions{Orientation: &landscape, FitToWidth: &one, FitToHeight: &down, Size: &a4}); err != nil {
 		return fmt.Errorf("workbook: sheet %s: page layout: %w", sheet, err)
 	}
 	if err := f.SetSheetProps(sheet, &excelize.SheetPropsOptions{FitToPage: &fit}); err != nil {
 		return fmt.Errorf("workbook: sheet %s: page layout: %w", sheet, err)
+	}
+	narrow, edge := 0.5, 0.3 // inches: room for the header and footer lines
+	if err := f.SetPageMargins(sheet, &excelize.PageLayoutMarginsOptions{Left: &narrow, Right: &narrow, Top: &narrow, Bottom: &narrow, Header: &edge, Footer: &edge}); err != nil {
+		return fmt.Errorf("workbook: sheet %s: page margins: %w", sheet, err)
+	}
+	hf := &excelize.HeaderFooterOptions{
+		OddHeader: "&L&\"-,Bold\"&A&R" + headerText(title),
+		OddFooter: "&RPage &P of &N",
+	}
+	if err := f.SetHeaderFooter(sheet, hf); err != nil {
+		return fmt.Errorf("workbook: sheet %s: header and footer: %w", sheet, err)
+	}
+	return nil
+}
+
+// headerText makes text safe in a header or footer, where "&" starts a
+// field code ("&&" is a literal ampersand), and short enough for the
+// 255-character limit of the header string.
+func headerText(s string) string {
+	r := []rune(s)
+	if len(r) > 100 {
+		s = string(r[:99]) + "…"
+	}
+	return strings.ReplaceAll(s, "&", "&&")
+}
+
+// printTitles repeats rows 1 to rows at the top of every printed page.
+func printTitles(f *excelize.File, sheet string, rows int) error {
+	if rows <= 0 {
+		return nil
+	}
+	dn := excelize.DefinedName{Name: "_xlnm.Print_Titles", RefersTo: sheetRef(sheet, fmt.Sprintf("$1:$%d", rows)), Scope: sheet}
+	if err := f.SetDefinedName(&dn); err != nil {
+		return fmt.Errorf("workbook: sheet %s: print titles: %w", sheet, err)
 	}
 	return nil
 }

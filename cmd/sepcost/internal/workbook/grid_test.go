@@ -42,3 +42,14 @@ func TestRound15(t *testing.T) {
 		}
 	}
 }
+
+// Units on the sheets are written with superscript powers, as in print
+// (SI Brochure, 9th ed., 2019, section 5.4: m² for square metre, from
+// memory).
+func TestUnitLabel(t *testing.T) {
+	for in, want := range map[string]string{"W/(m^2·K)": "W/(m²·K)", "m3": "m³", "cm^2": "cm²", "kg": "kg", "mL/g": "mL/g"} {
+		if got := unitLabel(in); got != want {
+			t.Errorf("unitLabel(%q) = %q, want %q", in, got, want)
+		}
+	}
+}

@@ -233,7 +233,7 @@ func (ms *methodSheet) figures() error {
 		f0 := first[k.a]
 		g.text(ms.row, colTitle, f0.Label, st.text)
 		g.text(ms.row, colLabel, f0.Key, st.text)
-		g.text(ms.row, colUnit, f0.Unit, st.text)
+		g.text(ms.row, colUnit, unitLabel(f0.Unit), st.text)
 		for i, res := range ms.res {
 			if !ms.feasible(i) {
 				continue
@@ -355,7 +355,7 @@ func (ms *methodSheet) ledger() error {
 					continue
 				}
 				q, c := blockCol(i), blockCol(i)+1
-				g.num(row, q, line.Qty.InexactFloat64(), st.general)
+				g.num(row, q, line.Qty.InexactFloat64(), st.figure) // the cell keeps every priced digit; the format shows about three significant figures
 				f := fmt.Sprintf("ROUND(%s*%s,%d)", cellName(q, row), absName(colUnitPrice, row), places)
 				g.formula(row, c, f, line.Amount.InexactFloat64(), st.money)
 				ms.lay.add(ms.name, cellName(c, row), line.Amount, "line")
@@ -386,7 +386,7 @@ func (ms *methodSheet) ledger() error {
 	for i, res := range ms.res {
 		c := blockCol(i) + 1
 		if !ms.feasible(i) {
-			g.text(totalRow, c, "not feasible", st.bold)
+			g.text(totalRow, c, res.Status().Words(), st.bold)
 			continue
 		}
 		total := res.Ledger.Total

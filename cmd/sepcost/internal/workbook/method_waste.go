@@ -2,6 +2,7 @@ package workbook
 
 import (
 	"fmt"
+	"strings"
 
 	"sepcost/costing/units"
 )
@@ -78,21 +79,39 @@ func (ms *methodSheet) notes() {
 	g, st := ms.g, ms.st
 	g.set(ms.row, 1, cell{value: "Notes", style: st.heading, spill: true})
 	ms.row++
+	last := max(blockCol(len(ms.res)-1)+1, 4)
 	g.text(ms.row, 1, "Batch mass", st.header)
 	g.text(ms.row, 2, "Level", st.header)
-	g.set(ms.row, 3, cell{value: "Note", style: st.header, spill: true})
+	g.text(ms.row, 3, "Note", st.header)
+	for c := 4; c <= last; c++ {
+		g.blank(ms.row, c, st.header)
+	}
 	ms.row++
-	found := false
+	// A note the model makes at several masses in the same words is
+	// written once, with those masses.
+	type key struct{ level, text string }
+	var order []key
+	masses := map[key][]string{}
 	for i, res := range ms.res {
 		for _, n := range res.Usage.Notes {
-			g.text(ms.row, 1, massLabel(ms.r.MassesKg[i]), st.text)
-			g.text(ms.row, 2, string(n.Level), st.text)
-			g.set(ms.row, 3, cell{value: n.Text, style: st.text, spill: true})
-			ms.row++
-			found = true
+			k := key{string(n.Level), n.Text}
+			if _, ok := masses[k]; !ok {
+				order = append(order, k)
+			}
+			masses[k] = append(masses[k], massLabel(ms.r.MassesKg[i]))
 		}
 	}
-	if !found {
+	for _, k := range order {
+		g.set(ms.row, 1, cell{value: strings.Join(masses[k], ", "), style: st.wrap, wrap: true})
+		g.text(ms.row, 2, k.level, st.text)
+		g.set(ms.row, 3, cell{value: k.text, style: st.wrap, wrap: true})
+		for c := 4; c <= last; c++ {
+			g.blank(ms.row, c, st.wrap)
+		}
+		g.merge(ms.row, 3, last)
+		ms.row++
+	}
+	if len(order) == 0 {
 		g.set(ms.row, 1, cell{value: "No notes.", style: st.note, spill: true})
 	}
 }

@@ -9,7 +9,7 @@ const priceCol = 3
 
 // buildPrices lays out the price table, one row per item in file order.
 func buildPrices(g *grid, st *styles, r *scale.Report) {
-	for c, h := range []string{"Item", "Unit", "Price", "Currency", "Category", "Source", "Date", "File line"} {
+	for c, h := range []string{"Item", "Unit", "Price", "Category", "Source", "Date", "File line"} {
 		g.text(1, c+1, h, st.header)
 	}
 	g.freeze(1, 1)
@@ -22,15 +22,16 @@ func buildPrices(g *grid, st *styles, r *scale.Report) {
 	}
 	for i, it := range r.Prices.Items {
 		row := i + 2
-		g.text(row, 1, it.Name, st.text)
+		g.text(row, 1, it.Label(), st.text)
 		g.text(row, 2, it.Unit, st.text)
 		g.num(row, priceCol, it.Price.InexactFloat64(), st.priceStyle(it.Price))
-		g.text(row, 4, it.Currency, st.text)
-		g.text(row, 5, it.Category, st.text)
-		g.set(row, 6, cell{value: it.Source, style: st.wrap, wrap: true})
-		g.text(row, 7, it.Date, st.text)
+		// The price's number format carries the currency code
+		// ("22.50 USD"); a column of codes beside it would say it twice.
+		g.text(row, 4, it.Category, st.text)
+		g.set(row, 5, cell{value: it.Source, style: st.wrap, wrap: true})
+		g.text(row, 6, it.Date, st.text)
 		if it.Line > 0 {
-			g.num(row, 8, float64(it.Line), st.general)
+			g.num(row, 7, float64(it.Line), st.general)
 		}
 		if it.From != "" {
 			g.text(row, 9, it.From, st.text)

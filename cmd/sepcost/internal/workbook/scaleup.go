@@ -38,11 +38,11 @@ const (
 const (
 	suTitleRow  = 1
 	suChartRow  = 5   // charts' top row
-	suChartW    = 480 // chart width, px
-	suChartH    = 300 // chart height, px: 15 rows of the default 20 px
+	suChartW    = 560 // chart width, px
+	suChartH    = 340 // chart height, px: 17 rows of the default 20 px
 	suChartGap  = 16  // px between charts
-	suNoteRow   = 22  // above the header: what the quantity columns are
-	suHeaderRow = 23
+	suNoteRow   = 24  // above the header: what the quantity columns are
+	suHeaderRow = 25
 	suFirstRow  = suHeaderRow + 1
 	suHeaderMax = 16.0 // header cells wrap beyond this many characters
 	pxPerChar   = 8.0  // excelize's column width to pixels (convertColWidthToPixels)
@@ -106,65 +106,14 @@ func writeScaleUp(f *excelize.File, st *styles, r *scale.Report, m money, method
 	// Pass 1: column widths, and whether each plotted figure is positive
 	// throughout, which a logarithmic axis needs.
 	head := scaleUpHeader(m, qty)
-	w := newWidths(st, lastCol)
-	for c, h := range head {
-		w.text(c+1, longestWord(h))
-		w.text(c+1, min(textWidth(h), int(suHeaderMax)))
-	}
-	for _, q := range qty {
-		// Quantities are written as the ledger rounds them, a few digits
-		// each; the header sets the width.
-		w.text(q.col, 10)
-	}
-	totals := make([]float64, len(rows))   // the ledger totals as numbers, converted once
-	var positive [suFirstQty]bool          // by column: every plotted value above zero
-	var points [suFirstQty]int             // by column: number of plotted values
-	plotted := make([][suFirstQty]int, nm) // by method and column: number of plotted values
-	for _, c := range []int{suPerGram, suEFactor, suElapsed} {
-		positive[c] = true
-	}
-	for j := range r.Methods {
-		w.text(suMethod, textWidth(methods[j].sheet))
-		for i := range r.MassesKg {
-			row := at(i, j)
-			w.num(suMass, row.CrudeKg*1000, st.figure)
-			if !row.Feasible {
-				continue
-			}
-			totals[i*nm+j] = smallOf(row.Total).float(row.Total)
-			w.num(suTotal, totals[i*nm+j], st.money)
-			w.num(suPerGram, row.PerGram, st.perGram)
-			w.num(suProduct, row.ProductKg*1000, st.figure)
-			w.num(suSolvent, row.SolventL, st.litres)
-			w.num(suWaste, row.WasteKg, st.kg)
-			w.num(suEFactor, row.EFactor, st.figure)
-			w.num(suPMI, row.PMI, st.figure)
-			w.num(suElapsed, row.HoursElapsed, st.hours)
-			w.num(suAttended, row.HoursAttended, st.hours)
-			w.text(suEquipment, textWidth(row.Equipment))
-			plot := func(col int, v float64) {
-				if finite(v) {
-					points[col]++
-					plotted[j][col]++
-					positive[col] = positive[col] && v > 0
-				}
-			}
-			plot(suPerGram, perGramValue(row))
-			plot(suEFactor, row.EFactor)
-			plot(suElapsed, row.HoursElapsed)
-		}
-	}
-	widths := w.fit()
+	p1 := scaleUpPass1(st, r, methods, rows, qty, head, lastCol)
+	widths, totals, positive, points, plotted := p1.widths, p1.totals, p1.positive, p1.points, p1.plotted
 
 	// Printed landscape, one page wide: the three charts side by side.
 	// The sheet properties are written when the stream starts, so they
 	// come first.
-	fit, landscape, wide, tall := true, "landscape", 1, 0
-	if err := f.SetSheetProps(sheetScaleUp, &excelize.SheetPropsOptions{FitToPage: &fit}); err != nil {
-		return fmt.Errorf("workbook: sheet %s: %w", sheetScaleUp, err)
-	}
-	if err := f.SetPageLayout(sheetScaleUp, &excelize.PageLayoutOptions{Orientation: &landscape, FitToWidth: &wide, FitToHeight: &tall}); err != nil {
-		return fmt.Errorf("workbook: sheet %s: %w", sheetScaleUp, err)
+	if err := pageSetup(f, sheetScaleUp, r.Title, false); err != nil {
+		return err
 	}
 	sw, err := f.NewStreamWriter(sheetScaleUp)
 	if err != nil {
@@ -177,92 +126,13 @@ func writeScaleUp(f *excelize.File, st *styles, r *scale.Report, m money, method
 	// Charts before the rows and before Flush (DESIGN §9).
 	n := len(r.MassesKg)
 	block := func(j int) (first, last int) { first = suFirstRow + j*n; return first, first + n - 1 }
-	specs := []chartSpec{
-		{"Cost per gram of purified product", m.currency + " per g", suPerGram},
-		{"Waste per gram of purified product (E-factor)", "kg waste per kg product", suEFactor},
-		{"Hours elapsed", "hours", suElapsed},
-	}
-	var parts []string
-	offset := 0 // px from the sheet's left edge to the next chart
-	for _, sp := range specs {
-		// A method with no point in this chart (never feasible) gets no
-		// series, so that the legend names only what is drawn; a chart
-		// with no point at all is left out.
-		var series []int
-		for j := range r.Methods {
-			if plotted[j][sp.col] > 0 {
-				series = append(series, j)
-			}
-		}
-		if len(series) == 0 {
-			continue
-		}
-		// The anchor is the column holding the offset, in excelize's pixel
-		// measure of the widths (which also places the chart's far edge),
-		// and the offset within it.
-		col, px := 1, 0
-		for px+colPixels(widths, col) <= offset {
-			px += colPixels(widths, col)
-			col++
-		}
-		ch := sp.chart(r, block, series, points[sp.col], positive[sp.col])
-		if sp.col == suPerGram {
-			// The P10–P90 band of the Monte Carlo draws (Uncertainty sheet).
-			ch.Series = append(ch.Series, bands.series()...)
-		}
-		ch.Format.OffsetX = offset - px
-		part, err := addChart(f, cellName(col, suChartRow), ch)
-		if err != nil {
-			return fmt.Errorf("workbook: sheet %s: chart %q: %w", sheetScaleUp, sp.title, err)
-		}
-		parts = append(parts, part)
-		offset += suChartW + suChartGap
-	}
-	if err := logXAxes(f, parts); err != nil {
-		return fmt.Errorf("workbook: sheet %s: %w", sheetScaleUp, err)
+	if err := addScaleUpCharts(f, r, m, widths, block, plotted, points, positive, bands); err != nil {
+		return err
 	}
 
 	// Pass 2: the rows.
-	title := "Scale-up"
-	if r.Title != "" {
-		title += ": " + r.Title
-	}
-	if err := sw.SetRow(cellName(1, suTitleRow), []any{excelize.Cell{StyleID: st.title, Value: title}}); err != nil {
-		return fmt.Errorf("workbook: sheet %s: %w", sheetScaleUp, err)
-	}
-	notes := []string{
-		"Against crude batch mass on logarithmic axes: cost per gram of purified product, waste per gram of product " +
-			"(the E-factor, kg per kg) and hours elapsed. An empty cell means the method is not feasible at that mass " +
-			"(or the figure is not a number); the charts leave a gap there.",
-		"Total cost refers to the TOTAL on each method sheet; an edit on the Prices sheet moves it, the cost per gram and the charts.",
-	}
-	if !details {
-		notes[1] = fmt.Sprintf("Per-mass detail sheets are omitted for a sweep of %d masses (at most %d get them). "+
-			"Total cost is the sum of the rounded ledger lines, ROUND(quantity × unit price, %d), from the quantities "+
-			"in the columns right of Equipment and the prices on the Prices sheet, so an edit there moves it, the cost "+
-			"per gram and the charts. Run `sepcost estimate SCENARIO --mass %s` for the details at chosen masses.",
-			n, MaxDetailMasses, m.places, massFlag(exampleMass(r)))
-	}
-	for k, s := range notes {
-		if err := sw.SetRow(cellName(1, suTitleRow+1+k), []any{excelize.Cell{StyleID: st.note, Value: s}}); err != nil {
-			return fmt.Errorf("workbook: sheet %s: %w", sheetScaleUp, err)
-		}
-	}
-	if len(qty) > 0 {
-		vals := make([]any, suFirstQty)
-		vals[suFirstQty-1] = excelize.Cell{StyleID: st.bold, Value: "Quantities billed, in the unit of each price"}
-		if err := sw.SetRow(cellName(1, suNoteRow), vals); err != nil {
-			return fmt.Errorf("workbook: sheet %s: %w", sheetScaleUp, err)
-		}
-	}
-	vals := make([]any, lastCol)
-	lines := 1
-	for c, h := range head {
-		vals[c] = excelize.Cell{StyleID: st.header, Value: h}
-		lines = max(lines, wrappedLines(h, widths[c+1]))
-	}
-	if err := sw.SetRow(cellName(1, suHeaderRow), vals, excelize.RowOpts{Height: lineHeight * float64(lines)}); err != nil {
-		return fmt.Errorf("workbook: sheet %s: %w", sheetScaleUp, err)
+	if err := scaleUpHead(sw, st, r, m, details, len(qty) > 0, head, widths, lastCol); err != nil {
+		return err
 	}
 
 	rw := newRowWriter(st, omit, lastCol)
@@ -274,7 +144,7 @@ func writeScaleUp(f *excelize.File, st *styles, r *scale.Report, m money, method
 			k := first + i
 			rw.reset(k)
 			rw.num(suMass, row.CrudeKg*1000, st.figure, false)
-			rw.text(suMethod, methods[j].sheet, st.text)
+			rw.text(suMethod, methods[j].sheet, st.textIndent) // set off from the mass on its left
 			if !row.Feasible {
 				rw.text(suFeasible, notFeasible(row.Reason), st.text)
 				if err := rw.write(sw); err != nil {
@@ -319,7 +189,7 @@ func writeScaleUp(f *excelize.File, st *styles, r *scale.Report, m money, method
 			rw.num(suElapsed, row.HoursElapsed, st.hours, false)
 			rw.num(suAttended, row.HoursAttended, st.hours, true)
 			if row.Equipment != "" {
-				rw.text(suEquipment, row.Equipment, st.text)
+				rw.text(suEquipment, row.Equipment, st.textIndent) // set off from the hours on its left
 			}
 			if err := rw.write(sw); err != nil {
 				return err
@@ -634,4 +504,167 @@ func longestWord(s string) int {
 		n = max(n, textWidth(w))
 	}
 	return n
+}
+
+// addScaleUpCharts adds the Scale-up sheet's three charts side by side: cost
+// per gram, waste per gram (E-factor) and hours elapsed against crude
+// mass, one series per method with a point in the chart.
+func addScaleUpCharts(f *excelize.File, r *scale.Report, m money, widths map[int]float64, block func(int) (int, int),
+	plotted [][suFirstQty]int, points [suFirstQty]int, positive [suFirstQty]bool, bands *bandRefs) error {
+	specs := []chartSpec{
+		{"Cost per gram of purified product", m.currency + " per g", suPerGram},
+		{"Waste per gram of purified product (E-factor)", "kg waste per kg product", suEFactor},
+		{"Hours elapsed", "hours", suElapsed},
+	}
+	var parts []string
+	offset := 0 // px from the sheet's left edge to the next chart
+	for _, sp := range specs {
+		// A method with no point in this chart (never feasible) gets no
+		// series, so that the legend names only what is drawn; a chart
+		// with no point at all is left out.
+		var series []int
+		for j := range r.Methods {
+			if plotted[j][sp.col] > 0 {
+				series = append(series, j)
+			}
+		}
+		if len(series) == 0 {
+			continue
+		}
+		// The anchor is the column holding the offset, in excelize's pixel
+		// measure of the widths (which also places the chart's far edge),
+		// and the offset within it.
+		col, px := 1, 0
+		for px+colPixels(widths, col) <= offset {
+			px += colPixels(widths, col)
+			col++
+		}
+		ch := sp.chart(r, block, series, points[sp.col], positive[sp.col])
+		if sp.col == suPerGram {
+			// The P10–P90 band of the Monte Carlo draws (Uncertainty sheet).
+			ch.Series = append(ch.Series, bands.series()...)
+		}
+		ch.Format.OffsetX = offset - px
+		part, err := addChart(f, cellName(col, suChartRow), ch)
+		if err != nil {
+			return fmt.Errorf("workbook: sheet %s: chart %q: %w", sheetScaleUp, sp.title, err)
+		}
+		parts = append(parts, part)
+		offset += suChartW + suChartGap
+	}
+	if err := logXAxes(f, parts); err != nil {
+		return fmt.Errorf("workbook: sheet %s: %w", sheetScaleUp, err)
+	}
+	return nil
+}
+
+// scaleUpFirst is what the first pass over the Scale-up rows finds.
+type scaleUpFirst struct {
+	widths   map[int]float64
+	totals   []float64         // the ledger totals as numbers, converted once
+	positive [suFirstQty]bool  // by column: every plotted value above zero
+	points   [suFirstQty]int   // by column: number of plotted values
+	plotted  [][suFirstQty]int // by method and column: number of plotted values
+}
+
+// scaleUpPass1 fits the column widths to the rows and counts, per chart
+// column, the values plotted and whether all are positive.
+func scaleUpPass1(st *styles, r *scale.Report, methods []methodOut, rows []scale.Row, qty []*qtyCol, head []string, lastCol int) scaleUpFirst {
+	nm := len(r.Methods)
+	at := func(i, j int) *scale.Row { return &rows[i*nm+j] }
+	w := newWidths(st, lastCol)
+	for c, h := range head {
+		w.text(c+1, longestWord(h))
+		w.text(c+1, min(textWidth(h), int(suHeaderMax)))
+	}
+	for _, q := range qty {
+		// Quantities are written as the ledger rounds them, a few digits
+		// each; the header sets the width.
+		w.text(q.col, 10)
+	}
+	totals := make([]float64, len(rows))   // the ledger totals as numbers, converted once
+	var positive [suFirstQty]bool          // by column: every plotted value above zero
+	var points [suFirstQty]int             // by column: number of plotted values
+	plotted := make([][suFirstQty]int, nm) // by method and column: number of plotted values
+	for _, c := range []int{suPerGram, suEFactor, suElapsed} {
+		positive[c] = true
+	}
+	for j := range r.Methods {
+		w.text(suMethod, textWidth(methods[j].sheet))
+		for i := range r.MassesKg {
+			row := at(i, j)
+			w.num(suMass, row.CrudeKg*1000, st.figure)
+			if !row.Feasible {
+				continue
+			}
+			totals[i*nm+j] = smallOf(row.Total).float(row.Total)
+			w.num(suTotal, totals[i*nm+j], st.money)
+			w.num(suPerGram, row.PerGram, st.perGram)
+			w.num(suProduct, row.ProductKg*1000, st.figure)
+			w.num(suSolvent, row.SolventL, st.litres)
+			w.num(suWaste, row.WasteKg, st.kg)
+			w.num(suEFactor, row.EFactor, st.figure)
+			w.num(suPMI, row.PMI, st.figure)
+			w.num(suElapsed, row.HoursElapsed, st.hours)
+			w.num(suAttended, row.HoursAttended, st.hours)
+			w.text(suEquipment, textWidth(row.Equipment))
+			plot := func(col int, v float64) {
+				if finite(v) {
+					points[col]++
+					plotted[j][col]++
+					positive[col] = positive[col] && v > 0
+				}
+			}
+			plot(suPerGram, perGramValue(row))
+			plot(suEFactor, row.EFactor)
+			plot(suElapsed, row.HoursElapsed)
+		}
+	}
+	return scaleUpFirst{w.fit(), totals, positive, points, plotted}
+}
+
+// scaleUpHead writes the Scale-up sheet's title, notes and header rows.
+func scaleUpHead(sw *excelize.StreamWriter, st *styles, r *scale.Report, m money, details, hasQty bool, head []string, widths map[int]float64, lastCol int) error {
+	title := "Scale-up"
+	if r.Title != "" {
+		title += ": " + r.Title
+	}
+	if err := sw.SetRow(cellName(1, suTitleRow), []any{excelize.Cell{StyleID: st.title, Value: title}}); err != nil {
+		return fmt.Errorf("workbook: sheet %s: %w", sheetScaleUp, err)
+	}
+	notes := []string{
+		"Against crude batch mass on logarithmic axes: cost per gram of purified product, waste per gram of product " +
+			"(the E-factor, kg per kg) and hours elapsed. An empty cell means the method is not feasible at that mass " +
+			"(or the figure is not a number); the charts leave a gap there.",
+		"Total cost refers to the TOTAL on each method sheet; an edit on the Prices sheet moves it, the cost per gram and the charts.",
+	}
+	if !details {
+		notes[1] = fmt.Sprintf("Per-mass detail sheets are omitted for a sweep of %d masses (at most %d get them). "+
+			"Total cost is the sum of the rounded ledger lines, ROUND(quantity × unit price, %d), from the quantities "+
+			"in the columns right of Equipment and the prices on the Prices sheet, so an edit there moves it, the cost "+
+			"per gram and the charts. Run `sepcost estimate SCENARIO --mass %s` for the details at chosen masses.",
+			len(r.MassesKg), MaxDetailMasses, m.places, massFlag(exampleMass(r)))
+	}
+	for k, s := range notes {
+		if err := sw.SetRow(cellName(1, suTitleRow+1+k), []any{excelize.Cell{StyleID: st.note, Value: s}}); err != nil {
+			return fmt.Errorf("workbook: sheet %s: %w", sheetScaleUp, err)
+		}
+	}
+	if hasQty {
+		vals := make([]any, suFirstQty)
+		vals[suFirstQty-1] = excelize.Cell{StyleID: st.bold, Value: "Quantities billed, in the unit of each price"}
+		if err := sw.SetRow(cellName(1, suNoteRow), vals); err != nil {
+			return fmt.Errorf("workbook: sheet %s: %w", sheetScaleUp, err)
+		}
+	}
+	vals := make([]any, lastCol)
+	lines := 1
+	for c, h := range head {
+		vals[c] = excelize.Cell{StyleID: st.header, Value: h}
+		lines = max(lines, wrappedLines(h, widths[c+1]))
+	}
+	if err := sw.SetRow(cellName(1, suHeaderRow), vals, excelize.RowOpts{Height: lineHeight * float64(lines)}); err != nil {
+		return fmt.Errorf("workbook: sheet %s: %w", sheetScaleUp, err)
+	}
+	return nil
 }

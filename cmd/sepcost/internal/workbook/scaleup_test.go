@@ -344,9 +344,9 @@ func TestDetailSheetsLimit(t *testing.T) {
 	}{
 		// Source: DESIGN §4, the sheet order; the detail limit is this
 		// package's choice (MaxDetailMasses).
-		{MaxDetailMasses, true, "Summary,Inputs,Prices,Chromatography,Crystallization,Scale-up,Waste,Sources"},
-		{MaxDetailMasses + 1, true, "Summary,Inputs,Prices,Scale-up,Waste,Sources"},
-		{MaxDetailMasses + 1, false, "Summary,Inputs,Prices,Chromatography,Crystallization,Waste,Sources"},
+		{MaxDetailMasses, true, "Summary,Decision,Inputs,Prices,Chromatography,Crystallization,Scale-up,Waste,Sources"},
+		{MaxDetailMasses + 1, true, "Summary,Decision,Inputs,Prices,Scale-up,Waste,Sources"},
+		{MaxDetailMasses + 1, false, "Summary,Decision,Inputs,Prices,Chromatography,Crystallization,Waste,Sources"},
 	} {
 		r := syntheticSweep(tc.n, 2)
 		r.IsSweep = tc.sweep
@@ -483,9 +483,9 @@ func TestScaleUpNoNaN(t *testing.T) {
 }
 
 // TestSummaryDecision: the Summary lists methods that are not feasible in
-// name order whatever the map order, names the break-even price cell of
-// each flip after its own Prices row, and says so when a sweep finds no
-// crossover or has a single method.
+// name order whatever the map order; the Decision sheet names the
+// break-even price cell of each flip after its own Prices row, and says so
+// when a sweep finds no crossover or has a single method.
 func TestSummaryDecision(t *testing.T) {
 	r := sweepReport()
 	r.Decision.Infeasible = map[string]string{"distillation": "no volatile product", "adsorption": "no adsorbent priced", "membrane": "no membrane data"}
@@ -503,6 +503,7 @@ func TestSummaryDecision(t *testing.T) {
 		t.Errorf("methods not feasible listed as %v", order)
 	}
 	prices, _ := f.GetRows(sheetPrices)
+	rows, _ = f.GetRows(sheetDecision)
 	flips := 0
 	// Source: sweepReport's hand computation, break-even ÷ price now:
 	// 51.1627 / 68 = 0.75239, 29.3064 / 18.90 = 1.55060, 202.9983 / 95 = 2.13682.
@@ -512,13 +513,13 @@ func TestSummaryDecision(t *testing.T) {
 			continue
 		}
 		flips++
-		got, err := f.CalcCellValue(sheetSummary, cellName(5, k+1), excelize.Options{RawCellValue: true})
+		got, err := f.CalcCellValue(sheetDecision, cellName(5, k+1), excelize.Options{RawCellValue: true})
 		v, perr := strconv.ParseFloat(got, 64)
 		// 1e-5 relative: the hand ratios are rounded to five significant digits.
 		if want := ratios[row[0]]; err != nil || perr != nil || math.Abs(v-want) > 1e-5*want {
 			t.Errorf("row %d: break-even ÷ price now of %s is %q (%v), want %v", k+1, row[0], got, err, want)
 		}
-		fo, _ := f.GetCellFormula(sheetSummary, cellName(3, k+1))
+		fo, _ := f.GetCellFormula(sheetDecision, cellName(3, k+1))
 		m := regexp.MustCompile(`^Prices!\$C\$(\d+)$`).FindStringSubmatch(fo)
 		if m == nil {
 			t.Errorf("row %d: price now %q is not a Prices reference", k+1, fo)

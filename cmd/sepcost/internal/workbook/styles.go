@@ -33,6 +33,10 @@ type styles struct {
 	headerRight                        int // the header of a column of numbers, aligned with them
 	headerIndent, wrapIndent           int // header and wrapped text set off from numbers on their left
 	kgFine                             int // kg with up to six decimals, for batches of milligrams
+	days                               int // working days, "2.5 working days of 8 h"
+	textIndent                         int // words beside a figure, set off from it
+	wrapSmall                          int // wrapped text in a smaller font (cautions)
+	wrapNote                           int // wrapped italic text (a reason in a table)
 	minPlaces, maxPlaces               int32
 	meta                               map[int]fmtMeta
 }
@@ -55,13 +59,20 @@ func currencyFormat(code string, places int32, per string) string {
 	return n + ` "` + code + per + `"`
 }
 
+// sig3 shows a mass or volume to about three significant figures:
+// "2,732", "14.03", "0.363", "0.002".
+const sig3 = "[>=100]#,##0;[>=1]#,##0.0#;0.00##"
+
 func newStyles(f *excelize.File, m money) (*styles, error) {
 	st := &styles{meta: map[int]fmtMeta{}}
 	bottom := []excelize.Border{{Type: "bottom", Color: "000000", Style: 1}}
 	top := []excelize.Border{{Type: "top", Color: "000000", Style: 1}}
 	str := func(s string) *string { return &s }
 	moneyFmt := currencyFormat(m.currency, m.places, "")
-	perGramFmt := currencyFormat(m.currency, m.places+2, "/g")
+	// Cost per gram to about three significant figures: whole units from
+	// 100, the minor unit from 1, four places below (a rate, not an amount
+	// paid, so not held to the minor unit).
+	perGramFmt := fmt.Sprintf(`[>=100]#,##0" %[1]s/g";[>=1]#,##0.00" %[1]s/g";0.0000" %[1]s/g"`, m.currency)
 	suffix := len(m.currency) + 1
 	defs := []struct {
 		id   *int
@@ -79,18 +90,21 @@ func newStyles(f *excelize.File, m money) (*styles, error) {
 		{&st.wrap, excelize.Style{Alignment: &excelize.Alignment{WrapText: true, Vertical: "top"}}, fmtMeta{places: -1}},
 		{&st.note, excelize.Style{Font: &excelize.Font{Italic: true}}, fmtMeta{places: -1}},
 		{&st.general, excelize.Style{Alignment: &excelize.Alignment{Vertical: "top"}}, fmtMeta{places: -1}},
-		{&st.figure, excelize.Style{CustomNumFmt: str("#,##0.###"), Alignment: &excelize.Alignment{Vertical: "top"}}, fmtMeta{3, true, 0}},
+		// Physical figures to about three significant figures: whole
+		// numbers from 100, up to three decimals from 1, up to six below
+		// ("517,147", "42.6", "0.000691"); never "99999.999999969".
+		{&st.figure, excelize.Style{CustomNumFmt: str("[>=100]#,##0;[>=1]#,##0.0##;0.000###"), Alignment: &excelize.Alignment{Vertical: "top"}}, fmtMeta{3, true, 0}},
 		{&st.generalBold, excelize.Style{Font: &excelize.Font{Bold: true}, Border: top}, fmtMeta{places: -1}},
 		{&st.money, excelize.Style{CustomNumFmt: str(moneyFmt), Alignment: &excelize.Alignment{Vertical: "top"}}, fmtMeta{int(m.places), true, suffix}},
 		{&st.moneyBold, excelize.Style{CustomNumFmt: str(moneyFmt), Font: &excelize.Font{Bold: true}, Border: top},
 			fmtMeta{int(m.places), true, suffix}},
 		{&st.perGram, excelize.Style{CustomNumFmt: str(perGramFmt), Alignment: &excelize.Alignment{Vertical: "top"}},
-			fmtMeta{int(m.places) + 2, true, suffix + 2}},
-		{&st.hours, excelize.Style{CustomNumFmt: str("0.00"), Alignment: &excelize.Alignment{Vertical: "top"}}, fmtMeta{places: 2}},
-		{&st.hoursBold, excelize.Style{CustomNumFmt: str("0.00"), Font: &excelize.Font{Bold: true}, Border: top}, fmtMeta{places: 2}},
-		{&st.kg, excelize.Style{CustomNumFmt: str("#,##0.000"), Alignment: &excelize.Alignment{Vertical: "top"}}, fmtMeta{3, true, 0}},
+			fmtMeta{2, true, suffix + 2}},
+		{&st.hours, excelize.Style{CustomNumFmt: str("[>=100]#,##0;0.00"), Alignment: &excelize.Alignment{Vertical: "top"}}, fmtMeta{places: 2}},
+		{&st.hoursBold, excelize.Style{CustomNumFmt: str("[>=100]#,##0;0.00"), Font: &excelize.Font{Bold: true}, Border: top}, fmtMeta{places: 2}},
+		{&st.kg, excelize.Style{CustomNumFmt: str(sig3), Alignment: &excelize.Alignment{Vertical: "top"}}, fmtMeta{3, true, 0}},
 		{&st.kgBold, excelize.Style{CustomNumFmt: str("#,##0.000"), Font: &excelize.Font{Bold: true}, Border: top}, fmtMeta{3, true, 0}},
-		{&st.litres, excelize.Style{CustomNumFmt: str("#,##0.000"), Alignment: &excelize.Alignment{Vertical: "top"}}, fmtMeta{3, true, 0}},
+		{&st.litres, excelize.Style{CustomNumFmt: str(sig3), Alignment: &excelize.Alignment{Vertical: "top"}}, fmtMeta{3, true, 0}},
 		{&st.percent, excelize.Style{CustomNumFmt: str("0.0%"), Alignment: &excelize.Alignment{Vertical: "top"}}, fmtMeta{1, false, 1}},
 		{&st.factor, excelize.Style{CustomNumFmt: str(`#,##0.00"×"`), Alignment: &excelize.Alignment{Vertical: "top"}}, fmtMeta{2, true, 1}},
 		{&st.ratio, excelize.Style{CustomNumFmt: str("#,##0.00"), Alignment: &excelize.Alignment{Vertical: "top"}}, fmtMeta{2, true, 0}},
@@ -100,6 +114,10 @@ func newStyles(f *excelize.File, m money) (*styles, error) {
 			Alignment: &excelize.Alignment{WrapText: true, Vertical: "bottom", Horizontal: "left", Indent: 1}}, fmtMeta{places: -1}},
 		{&st.wrapIndent, excelize.Style{Alignment: &excelize.Alignment{WrapText: true, Vertical: "top", Horizontal: "left", Indent: 1}}, fmtMeta{places: -1}},
 		{&st.kgFine, excelize.Style{CustomNumFmt: str("[<1]0.000###;#,##0.000"), Alignment: &excelize.Alignment{Vertical: "top"}}, fmtMeta{6, true, 0}},
+		{&st.days, excelize.Style{CustomNumFmt: str(`0.0" working days of 8 h"`), Alignment: &excelize.Alignment{Vertical: "top", Horizontal: "left", Indent: 1}}, fmtMeta{1, false, 22}},
+		{&st.textIndent, excelize.Style{Alignment: &excelize.Alignment{Vertical: "top", Horizontal: "left", Indent: 1}}, fmtMeta{places: -1}},
+		{&st.wrapNote, excelize.Style{Font: &excelize.Font{Italic: true}, Alignment: &excelize.Alignment{WrapText: true, Vertical: "top"}}, fmtMeta{places: -1}},
+		{&st.wrapSmall, excelize.Style{Font: &excelize.Font{Size: 9}, Alignment: &excelize.Alignment{WrapText: true, Vertical: "top"}}, fmtMeta{places: -1}},
 		{&st.ruleNumber, excelize.Style{Alignment: &excelize.Alignment{Horizontal: "left", Vertical: "top"}}, fmtMeta{places: -1}},
 	}
 	for _, d := range defs {

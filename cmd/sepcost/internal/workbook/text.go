@@ -137,3 +137,10 @@ func wrappedLines(s string, width float64) int {
 	}
 	return lines
 }
+
+// unitPowers writes the powers in a unit as a reader writes them: m^2 as
+// m², m3 as m³ (the units package spells them for typing).
+var unitPowers = strings.NewReplacer("^2", "²", "^3", "³", "m3", "m³", "m2", "m²")
+
+// unitLabel is a unit as a sheet shows it: "W/(m²·K)" for "W/(m^2·K)".
+func unitLabel(u string) string { return unitPowers.Replace(u) }

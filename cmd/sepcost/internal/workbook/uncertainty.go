@@ -5,6 +5,7 @@ import (
 	"math"
 	"strconv"
 
+	"sepcost/costing"
 	"sepcost/costing/source"
 	"sepcost/scale"
 )
@@ -51,7 +52,6 @@ const (
 // (uncertaintySpreads).
 func buildUncertainty(g *grid, st *styles, r *scale.Report) *bandRefs {
 	u := r.Uncertainty
-	g.printWide = true
 	g.widths[uLabel] = 46
 	g.maxWidths[6], g.maxWidths[7] = 24, 48 // the inputs table's wrapped text
 	for c := uP10; c <= uLast; c++ {
@@ -88,10 +88,21 @@ func buildUncertainty(g *grid, st *styles, r *scale.Report) *bandRefs {
 			g.num(row, uP90, b.P90, st.perGram)
 		} else {
 			// No cost in any draw: words in place of the three quantiles,
-			// with the reason where the decision records one.
+			// with the reason where the decision records one. A method the
+			// scenario does not describe was never drawn: its shares are
+			// not 0 % but not applicable.
 			text := "not feasible in any draw"
-			if d := r.Decision; d != nil && d.Infeasible[b.Method] != "" {
-				text = notFeasible(d.Infeasible[b.Method])
+			reason := ""
+			if d := r.Decision; d != nil {
+				reason = d.Infeasible[b.Method]
+			}
+			if reason != "" {
+				text = notFeasible(reason)
+			}
+			if costing.StatusOf(false, reason) == costing.StatusNotAssessed {
+				mergedCell(g, row, uP10, uCheapest, cell{value: text, style: st.wrap, wrap: true})
+				row++
+				continue
 			}
 			mergedCell(g, row, uP10, uP90, cell{value: text, style: st.wrap, wrap: true})
 		}
@@ -119,8 +130,10 @@ func buildUncertainty(g *grid, st *styles, r *scale.Report) *bandRefs {
 	}
 
 	row = uncertaintyWorth(g, st, u, row+1)
-	row = uncertaintySensitivity(g, st, r, row+1)
-	row, refs := uncertaintyAcross(g, st, r, row+1)
+	var charts []gridChart
+	row = uncertaintySensitivity(g, st, r, row+1, &charts)
+	row, refs := uncertaintyAcross(g, st, r, row+1, &charts)
+	chartsOn(g, charts)
 	row = uncertaintyInputs(g, st, u, row+1)
 	uncertaintySpreads(g, st, row+1)
 	return refs

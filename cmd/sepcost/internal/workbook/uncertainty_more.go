@@ -14,6 +14,44 @@ import (
 	"sepcost/scale"
 )
 
+// gridChart is a chart anchored at a cell of the Uncertainty sheet; logX
+// makes its X axis (crude mass) logarithmic, as logXAxes does.
+type gridChart struct {
+	cell  string
+	chart *excelize.Chart
+	logX  bool
+}
+
+// The Uncertainty sheet's charts stand one above the other at the top
+// right, beside the bands at the target mass, so that no page break of the
+// printed sheet cuts through one.
+const (
+	chartCol  = uLast + 2 // column of their left edge
+	chartRow  = 3         // row of the first's top edge
+	chartRows = 16        // rows between their top edges (a chart is suChartH px, 15 rows of 20 px)
+)
+
+// chartsOn adds the charts to the grid's sheet once its StreamWriter
+// exists and before its rows (the grid's extra hook).
+func chartsOn(g *grid, charts []gridChart) {
+	if len(charts) == 0 {
+		return
+	}
+	g.extra = func(f *excelize.File, _ map[int]float64) error {
+		var parts []string
+		for _, c := range charts {
+			part, err := addChartTo(f, g.name, c.cell, c.chart)
+			if err != nil {
+				return fmt.Errorf("workbook: sheet %s: chart: %w", g.name, err)
+			}
+			if c.logX {
+				parts = append(parts, part)
+			}
+		}
+		return logXAxes(f, parts)
+	}
+}
+
 // maxRanked is how many inputs the value-of-information and sensitivity
 // tables list; the inputs table below them lists every one.
 const maxRanked = 15
@@ -88,7 +126,7 @@ func assessed(u *scale.Uncertainty) []int {
 
 // uncertaintySensitivity writes the rank correlation of each input with
 // cost per gram at the target mass, strongest first.
-func uncertaintySensitivity(g *grid, st *styles, r *scale.Report, row int) int {
+func uncertaintySensitivity(g *grid, st *styles, r *scale.Report, row int, charts *[]gridChart) int {
 	u := r.Uncertainty
 	g.set(row, 1, cell{value: "What moves the cost per gram: rank correlation with each input", style: st.heading, spill: true})
 	row++
@@ -122,7 +160,7 @@ func uncertaintySensitivity(g *grid, st *styles, r *scale.Report, row int) int {
 		if !diff {
 			col = 2
 		}
-		g.chart = append(g.chart, gridChart{cell: cellName(len(heads)+2, first-1), chart: sensitivityChart(heads[col-1], first, row-1, col)})
+		*charts = append(*charts, gridChart{cell: cellName(chartCol, chartRow+chartRows), chart: sensitivityChart(heads[col-1], first, row-1, col)})
 	}
 	wrapped(g, st, row, "Spearman's rank correlation (Spearman, Am. J. Psychol. 1904, 15, 72) between the drawn input and the cost per gram "+
 		"at the target mass over the draws: +1 when the cost rises with the input in every draw, −1 when it falls, near 0 when "+
@@ -157,7 +195,7 @@ func sensitivityChart(what string, first, last, col int) *excelize.Chart {
 
 // uncertaintyAcross writes the bands and cheapest shares at every mass
 // with a chart of the shares, and the crossover masses as intervals.
-func uncertaintyAcross(g *grid, st *styles, r *scale.Report, row int) (int, *bandRefs) {
+func uncertaintyAcross(g *grid, st *styles, r *scale.Report, row int, charts *[]gridChart) (int, *bandRefs) {
 	u := r.Uncertainty
 	if len(u.Across) == 0 {
 		return row, nil
@@ -192,7 +230,7 @@ func uncertaintyAcross(g *grid, st *styles, r *scale.Report, row int) (int, *ban
 		}
 	}
 	last := row
-	g.chart = append(g.chart, gridChart{cell: cellName(2+4*nJ, first-1), chart: shareChart(r, shown, first, last), logX: true})
+	*charts = append(*charts, gridChart{cell: cellName(chartCol, chartRow), chart: shareChart(r, shown, first, last), logX: true})
 	refs := &bandRefs{first: first, last: last}
 	for c, j := range shown {
 		refs.cols = append(refs.cols, bandCol{method: r.Methods[j], p10: 2 + 3*c, p90: 4 + 3*c})
@@ -278,13 +316,15 @@ func shareChart(r *scale.Report, shown []int, first, last int) *excelize.Chart {
 // nominal value and limits, the distribution and where the spread comes
 // from.
 func uncertaintyInputs(g *grid, st *styles, u *scale.Uncertainty, row int) int {
-	g.set(row, 1, cell{value: "Every input drawn", style: st.heading, spill: true})
+	g.set(row, 1, cell{value: "The inputs drawn", style: st.heading, spill: true})
 	row++
+	shown, quiet := listedInputs(u)
 	header(g, st, row, "Input", "As used", "Low", "High", "Unit")
 	g.set(row, 6, cell{value: "Drawn from", style: st.headerIndent, wrap: true})
 	g.set(row, 7, cell{value: "Where it is written; where the spread comes from", style: st.headerIndent, wrap: true})
 	row++
-	for _, in := range u.Inputs {
+	for _, i := range shown {
+		in := u.Inputs[i]
 		g.set(row, 1, cell{value: in.Name, style: st.wrap, wrap: true})
 		g.num(row, 2, in.Nominal, st.general)
 		g.num(row, 3, in.Lo, st.general)
@@ -294,12 +334,49 @@ func uncertaintyInputs(g *grid, st *styles, u *scale.Uncertainty, row int) int {
 		g.set(row, 7, cell{value: in.Field + "; " + in.Basis, style: st.wrapIndent, wrap: true})
 		row++
 	}
+	if quiet > 0 {
+		wrapped(g, st, row, fmt.Sprintf("Also drawn: %d further model defaults, each by how sure its source is (the spreads below; "+
+			"each default with its mark on the Sources sheet). None moves the cost per gram at the target mass with a rank "+
+			"correlation of %s or more, nor is worth knowing before choosing; the JSON output lists every input.", quiet, sigFigs(quietRho, 2)), uLast)
+		row++
+	}
 	wrapped(g, st, row, "Low and High: the limits of a rectangular distribution (a value written with a range, \"0.30 ± 0.03\" or "+
 		"\"12–18 g/L\", is taken to lie anywhere between its limits with equal chance: JCGM 100:2008, Guide to the expression of "+
 		"uncertainty in measurement, §4.3.7, standard uncertainty = half-width/√3), or the 10th and 90th percentiles of a "+
 		"log-normal one. Not drawn: temperatures, the site's own equipment (flask, reactor, still and column sizes, fill limits) and "+
 		"thresholds that decide when to warn. One draw serves every method that shares a physical quantity (the chiller, the heater).", uLast)
 	return row + 1
+}
+
+// quietRho is the rank correlation below which a model default that is
+// worth nothing to know is left off the inputs table (common practice, no
+// source: a correlation under 0.1 is commonly read as negligible).
+const quietRho = 0.1
+
+// listedInputs are the inputs the sheet lists: every measured value,
+// ranged setting, price and model form, and the model defaults that move
+// the cost (a rank correlation of quietRho or more) or are worth knowing;
+// quiet counts the defaults left off.
+func listedInputs(u *scale.Uncertainty) (shown []int, quiet int) {
+	loud := map[int]bool{}
+	for _, s := range u.Sensitivity {
+		for _, r := range append([]float64{s.Decision}, s.Rho...) {
+			if math.Abs(r) >= quietRho {
+				loud[s.Input] = true
+			}
+		}
+	}
+	for _, w := range u.Worth {
+		loud[w.Input] = true
+	}
+	for i, in := range u.Inputs {
+		if in.Kind == scale.KindCoefficient && !loud[i] {
+			quiet++
+			continue
+		}
+		shown = append(shown, i)
+	}
+	return shown, quiet
 }
 
 // uncertaintySpreads lists the default spreads: of a value written

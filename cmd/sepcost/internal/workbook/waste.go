@@ -100,7 +100,6 @@ func buildWaste(g *grid, st *styles, r *scale.Report, m money, details bool, lay
 		g.set(1, c+1, cell{value: h, style: style, wrap: true})
 	}
 	g.freeze(1, 2)
-	g.printWide = true
 	g.maxWidths[wStream] = wStreamWidth
 	g.maxWidths[wComposition] = wCompositionWidth
 	if codes {

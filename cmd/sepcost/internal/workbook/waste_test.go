@@ -421,7 +421,7 @@ func TestUncertaintySheet(t *testing.T) {
 	r.Uncertainty = handUncertainty()
 	b, _ := render(t, r, Options{})
 	f := open(t, b)
-	want := "Summary,Inputs,Prices,Chromatography,Crystallization,Waste,Uncertainty,Sources"
+	want := "Summary,Decision,Inputs,Prices,Chromatography,Crystallization,Waste,Uncertainty,Sources"
 	if got := strings.Join(f.GetSheetList(), ","); got != want {
 		t.Fatalf("sheets %s, want %s", got, want)
 	}
@@ -497,7 +497,7 @@ func TestUncertaintyWins(t *testing.T) {
 	}}
 	b, _ := render(t, r, Options{})
 	f := open(t, b)
-	want := "Summary,Inputs,Prices,Chromatography,Crystallization,Scale-up,Waste,Uncertainty,Sources"
+	want := "Summary,Decision,Inputs,Prices,Chromatography,Crystallization,Scale-up,Waste,Uncertainty,Sources"
 	if got := strings.Join(f.GetSheetList(), ","); got != want {
 		t.Fatalf("sheets %s, want %s", got, want)
 	}
@@ -523,7 +523,17 @@ func TestRowHeightLimit(t *testing.T) {
 	r.Coefficients[0].Source = strings.Repeat("a long explanation ", 2000)
 	b, _ := render(t, r, Options{})
 	f := open(t, b)
-	h, err := f.GetRowHeight(sheetSources, 2)
+	rows, _ := f.GetRows(sheetSources)
+	at := 0
+	for k, row := range rows {
+		if len(row) > 5 && strings.Contains(row[5], "a long explanation") {
+			at = k + 1
+		}
+	}
+	if at == 0 {
+		t.Fatal("the long source is not on the Sources sheet")
+	}
+	h, err := f.GetRowHeight(sheetSources, at)
 	if err != nil {
 		t.Fatal(err)
 	}

@@ -96,7 +96,7 @@ func Write(w io.Writer, r *scale.Report, opt Options) error {
 type checkCell struct {
 	sheet, ref string
 	want       decimal.Decimal
-	kind       string // "unit price", "line", "subtotal", "total", "summary total", "disposal", "scale-up total"
+	kind       string // "unit price", "line", "subtotal", "total", "summary total", "batch cost", "disposal", "scale-up total"
 }
 
 // layout records where the writer put the money cells.
@@ -150,7 +150,7 @@ func build(r *scale.Report, opt Options, record bool) (*excelize.File, *layout, 
 	}
 	details := detailSheets(r)
 
-	order := []string{sheetSummary}
+	order := []string{sheetSummary, sheetDecision}
 	if r.Budget != nil && r.Campaign != nil {
 		order = append(order, sheetBudget)
 	}
@@ -196,14 +196,19 @@ func build(r *scale.Report, opt Options, record bool) (*excelize.File, *layout, 
 		grids = append(grids, g)
 	}
 	summary := newGrid(sheetSummary)
-	buildSummary(summary, st, r, m, methods, details, lay)
+	plan := buildSummary(summary, st, r, m, methods, details, lay)
+	summary.extra = func(f *excelize.File, widths map[int]float64) error {
+		return summaryChart(f, plan, widths, m.currency)
+	}
+	decision := newGrid(sheetDecision)
+	buildDecisionSheet(decision, st, r, m, lay)
 	inputs := newGrid(sheetInputs)
 	buildInputs(inputs, st, r)
 	prices := newGrid(sheetPrices)
 	buildPrices(prices, st, r)
 	waste := newGrid(sheetWaste)
 	buildWaste(waste, st, r, m, details, lay)
-	grids = append(grids, summary, inputs, prices, waste)
+	grids = append(grids, summary, decision, inputs, prices, waste)
 	if r.Budget != nil && r.Campaign != nil {
 		budget := newGrid(sheetBudget)
 		buildBudget(budget, st, r, m, lay)
@@ -226,7 +231,7 @@ func build(r *scale.Report, opt Options, record bool) (*excelize.File, *layout, 
 	}
 	grids = append(grids, sources)
 	for _, g := range grids {
-		if err := g.flush(f, st, opt.OmitCachedValues); err != nil {
+		if err := g.flush(f, st, opt.OmitCachedValues, r.Title); err != nil {
 			return nil, nil, err
 		}
 	}
@@ -272,7 +277,7 @@ func validate(r *scale.Report) (money, error) {
 		}
 	}
 	seen := map[string]bool{}
-	for _, name := range []string{sheetSummary, sheetBudget, sheetInputs, sheetPrices, sheetEquipment, sheetScaleUp, sheetWaste, sheetUncertainty, sheetSources} {
+	for _, name := range []string{sheetSummary, sheetDecision, sheetBudget, sheetInputs, sheetPrices, sheetEquipment, sheetScaleUp, sheetWaste, sheetUncertainty, sheetSources} {
 		seen[strings.ToLower(name)] = true
 	}
 	for _, meth := range r.Methods {
