@@ -326,9 +326,10 @@ func uncertaintyInputs(g *grid, st *styles, u *scale.Uncertainty, row int) int {
 	for _, i := range shown {
 		in := u.Inputs[i]
 		g.set(row, 1, cell{value: in.Name, style: st.wrap, wrap: true})
-		g.num(row, 2, in.Nominal, st.general)
-		g.num(row, 3, in.Lo, st.general)
-		g.num(row, 4, in.Hi, st.general)
+		// Four significant figures: limits of a spread, not quantities to add.
+		g.num(row, 2, sig(in.Nominal, 4), st.general)
+		g.num(row, 3, sig(in.Lo, 4), st.general)
+		g.num(row, 4, sig(in.Hi, 4), st.general)
 		g.text(row, 5, in.Unit, st.text)
 		g.set(row, 6, cell{value: in.Dist, style: st.wrapIndent, wrap: true})
 		g.set(row, 7, cell{value: in.Field + "; " + in.Basis, style: st.wrapIndent, wrap: true})
@@ -346,6 +347,15 @@ func uncertaintyInputs(g *grid, st *styles, u *scale.Uncertainty, row int) int {
 		"log-normal one. Not drawn: temperatures, the site's own equipment (flask, reactor, still and column sizes, fill limits) and "+
 		"thresholds that decide when to warn. One draw serves every method that shares a physical quantity (the chiller, the heater).", uLast)
 	return row + 1
+}
+
+// sig rounds v to n significant figures (v itself when 0 or not finite).
+func sig(v float64, n int) float64 {
+	if v == 0 || !finite(v) {
+		return v
+	}
+	p := math.Pow(10, float64(n-1)-math.Floor(math.Log10(math.Abs(v))))
+	return math.Round(v*p) / p
 }
 
 // quietRho is the rank correlation below which a model default that is

@@ -157,3 +157,12 @@ func TestScaleUpBand(t *testing.T) {
 		t.Errorf("%d rank-correlation and %d share charts, want one each", bars, shares)
 	}
 }
+
+// Limits are shown to four significant figures (hand-rounded cases).
+func TestSig(t *testing.T) {
+	for _, c := range []struct{ v, want float64 }{{0.412557406503199, 0.4126}, {12.3787221, 12.38}, {1234567, 1235000}, {-0.000123456, -0.0001235}, {0, 0}} {
+		if got := sig(c.v, 4); math.Abs(got-c.want) > 1e-12*math.Abs(c.want) {
+			t.Errorf("sig(%g) = %g, want %g", c.v, got, c.want)
+		}
+	}
+}
