@@ -54,7 +54,7 @@ func FuzzModels(f *testing.F) {
 		// Settings as a scenario would write them, each within its range.
 		var set []scenario.Setting
 		for i := 0; i+2 < len(settings) && i < 60; i += 3 {
-			c := defaults[keys[(int(settings[i])<<8|int(settings[i+1]))%len(keys)]]
+			c := defaults.Of(keys[(int(settings[i])<<8|int(settings[i+1]))%len(keys)])
 			v := within(c, float64(settings[i+2])/255)
 			set = append(set, scenario.Setting{Key: c.Key, Value: units.Quantity{SI: v, Dim: c.Dim}, Written: fmt.Sprint(v), Line: 1})
 		}

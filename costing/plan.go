@@ -110,7 +110,15 @@ func PrepareWith(sc *scenario.Scenario, opt Options) (*Plan, error) {
 			if calibrated[s.Key] != later {
 				continue
 			}
-			if err := coef.Override(s.Key, s.Value, s.Written); err != nil {
+			err := coef.Override(s.Key, s.Value, s.Written)
+			if c, ok := coef.Lookup(s.Key); err == nil && ok && s.Range.Half > 0 && s.Range.Lo() < 0 && c.Dim != units.Temperature {
+				err = fmt.Errorf("%q reaches below zero; a range of %s must stay at zero or above", s.Written, s.Key)
+			} else if err == nil && ok && s.Range.Half > 0 && !(c.InRange(s.Range.Lo()) && c.InRange(s.Range.Hi())) {
+				lo, hi := c, c
+				lo.SI, hi.SI = c.Lo, c.Hi
+				err = fmt.Errorf("%q reaches outside the range %s accepts: %.4g to %.4g %s", s.Written, s.Key, lo.Display(), hi.Display(), c.Unit)
+			}
+			if err != nil {
 				problems = append(problems, &scenario.Problem{File: sc.File, Line: s.Line, Field: "settings." + s.Key, Msg: err.Error()})
 			}
 		}
@@ -152,6 +160,48 @@ func newPlan(sc *scenario.Scenario, coef source.Set, eq *equipment.Table) *Plan 
 // WithCoefficients is the same plan on another coefficient set (used to
 // sample the models' uncertainty).
 func (p *Plan) WithCoefficients(coef source.Set) *Plan { return newPlan(p.Scenario, coef, p.Equipment) }
+
+// With is the plan on a drawn scenario and coefficient set (a Monte Carlo
+// draw: scenario.Scenario.With, source.Set.WithValues).
+func (p *Plan) With(sc *scenario.Scenario, coef source.Set) *Plan {
+	return newPlan(sc, coef, p.Equipment)
+}
+
+// PerGramLean is method j's cost per gram of purified product at one mass
+// priced with float rates: the lean path for Monte Carlo draws (no
+// decimal ledger, no green metrics), choosing among a method's candidate
+// plans (loading and equipment) the cheapest per gram as runPriced does.
+// NaN when the method is not feasible or recovers nothing.
+func (p *Plan) PerGramLean(j int, crudeKg float64, r *ledger.Rates) (float64, error) {
+	m := p.Methods[j]
+	if m.Choices == nil {
+		return perGramRates(m.Run(crudeKg), r)
+	}
+	best := math.NaN()
+	for _, u := range m.Choices(crudeKg) {
+		v, err := perGramRates(u, r)
+		if err != nil {
+			return 0, err
+		}
+		if v == v && !(v >= best) { // a number, and below best (or best still NaN)
+			best = v
+		}
+	}
+	return best, nil
+}
+
+// perGramRates is one usage's cost per gram of purified product with float
+// rates; NaN when it is not feasible or recovers nothing.
+func perGramRates(u usage.Usage, r *ledger.Rates) (float64, error) {
+	if !u.Feasible || u.ProductOutKg <= 0 {
+		return math.NaN(), nil
+	}
+	total, err := r.Total(u)
+	if err != nil {
+		return 0, err
+	}
+	return total / (u.ProductOutKg * 1000), nil
+}
 
 // add registers a method. A method the scenario does not describe stays in
 // the plan as "not assessed", with the reason, so that no report silently
@@ -331,7 +381,7 @@ func (r Result) PerGram() float64 {
 // si (in the coefficient's SI unit): the coefficients are settled again,
 // calibrations included, exactly as for a setting written in the file.
 func (p *Plan) WithSetting(key string, si float64) (*Plan, error) {
-	co, ok := p.Coef[key]
+	co, ok := p.Coef.Lookup(key)
 	if !ok {
 		return nil, fmt.Errorf("unknown model setting %q", key)
 	}

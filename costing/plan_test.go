@@ -2,6 +2,7 @@ package costing
 
 import (
 	"errors"
+	"math"
 	"strings"
 	"testing"
 
@@ -34,7 +35,7 @@ func TestSettings(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	if c := p.Coef[chrom.KeyBedDensity]; c.SI != 450 || c.Mark != "scenario" {
+	if c := p.Coef.Of(chrom.KeyBedDensity); c.SI != 450 || c.Mark != "scenario" {
 		t.Errorf("bed density = %+v", c)
 	}
 	_, err = Prepare(load(t, base+"settings:\n  chromatography.bed_hieght_max: \"12 cm\"\n  chromatography.bed_density: \"12 cm\"\n"))
@@ -74,5 +75,28 @@ func TestCautions(t *testing.T) {
 	}
 	if strings.Contains(all, "Halogenated") {
 		t.Errorf("no halogenated solvent here")
+	}
+}
+
+// A setting written with a range takes its midpoint (each limit is checked
+// against the coefficient's physical range as a single value would be); a
+// range reaching below zero is refused (no negative mass, time or share).
+func TestSettingRange(t *testing.T) {
+	p, err := Prepare(load(t, base+"settings:\n  chromatography.bed_density: \"0.40–0.50 g/mL\"\n"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	if c := p.Coef.Of(chrom.KeyBedDensity); math.Abs(c.SI-450) > 1e-9 {
+		t.Errorf("bed density = %g kg/m³, want the midpoint 450", c.SI)
+	}
+	// silica_retention_loss accepts 0 to 0.5 (its physical range): 0.4 ± 0.2
+	// reaches 0.6.
+	_, err = Prepare(load(t, base+"settings:\n  chromatography.silica_retention_loss: \"0.4 ± 0.2\"\n"))
+	if err == nil || !strings.Contains(err.Error(), "reaches outside the range") || !strings.Contains(err.Error(), "0 to 0.5") {
+		t.Errorf("err = %v", err)
+	}
+	_, err = Prepare(load(t, base+"settings:\n  chromatography.silica_retention_loss: \"0.03 ± 0.05\"\n"))
+	if err == nil || !strings.Contains(err.Error(), "reaches below zero") || !strings.Contains(err.Error(), "settings.chromatography.silica_retention_loss") {
+		t.Errorf("err = %v", err)
 	}
 }

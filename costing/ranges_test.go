@@ -16,8 +16,8 @@ func TestEveryCoefficientBounded(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	if len(plan.Coef) < 100 {
-		t.Fatalf("only %d coefficients; the three models have more", len(plan.Coef))
+	if plan.Coef.Len() < 100 {
+		t.Fatalf("only %d coefficients; the three models have more", plan.Coef.Len())
 	}
 	for _, c := range plan.Coef.Sorted() {
 		switch {

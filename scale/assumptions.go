@@ -104,7 +104,7 @@ func FindAssumptions(p *costing.Plan, t *prices.Table, targetKg float64) ([]Assu
 	}
 	var out []Assumption
 	for _, key := range p.Coef.Keys() {
-		co := p.Coef[key]
+		co := p.Coef.Of(key)
 		if co.Mark == source.Override {
 			continue
 		}

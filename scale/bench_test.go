@@ -1,8 +1,13 @@
 package scale
 
 import (
+	"math"
+	"math/rand/v2"
+	"time"
+
 	"testing"
 
+	"sepcost/costing/ledger"
 	"sepcost/templates"
 )
 
@@ -36,5 +41,67 @@ func BenchmarkSample400(b *testing.B) {
 		if _, err := Sample(p, pt, 2, 400, 1, nil); err != nil {
 			b.Fatal(err)
 		}
+	}
+}
+
+// BenchmarkDraws10k: 10,000 draws of every uncertain input at the solid
+// demo's target mass, both methods, with the rank correlations and the
+// value of information of every input (the figure the uncertainty work is
+// held to: under 1 s on two cores).
+func BenchmarkDraws10k(b *testing.B) {
+	p, pt := plan(b, templates.Scenario)
+	b.ReportAllocs()
+	defer reportCPU(b, cpuTime())
+	for b.Loop() {
+		if _, err := Sample(p, pt, p.Scenario.TargetKg, 10000, 1, nil); err != nil {
+			b.Fatal(err)
+		}
+	}
+}
+
+// BenchmarkBands50x1000: bands over a 50-mass sweep with 1,000 draws (each
+// draw runs both methods of the solid demo at 50 masses and the target).
+func BenchmarkBands50x1000(b *testing.B) {
+	p, pt := plan(b, templates.Scenario)
+	masses, _ := LogSpace(1e-4, 10, 50)
+	b.ReportAllocs()
+	defer reportCPU(b, cpuTime())
+	for b.Loop() {
+		if _, err := SampleAcross(p, pt, p.Scenario.TargetKg, masses, 1000, 1, nil); err != nil {
+			b.Fatal(err)
+		}
+	}
+}
+
+// BenchmarkValueOfInformation: the rank correlations and the value of
+// perfect information of every input from 10,000 draws already made.
+func BenchmarkValueOfInformation(b *testing.B) {
+	p, pt := plan(b, templates.Scenario)
+	u, err := Sample(p, pt, p.Scenario.TargetKg, 10000, 1, nil)
+	if err != nil {
+		b.Fatal(err)
+	}
+	d := newDesign(p, pt, usedPrices(p, pt, u.TargetKg))
+	nI := len(d.inputs)
+	x := make([]float64, 10000*nI)
+	perG := make([][]float64, 10000)
+	for k := range perG {
+		d.sample(rand.New(rand.NewPCG(1, uint64(k))), x[k*nI:(k+1)*nI])
+		perG[k] = []float64{float64(k % 7), float64(k % 5), math.NaN()}
+	}
+	r := ledger.NewRates(pt)
+	b.ResetTimer()
+	defer reportCPU(b, cpuTime())
+	for b.Loop() {
+		v := &Uncertainty{TargetKg: u.TargetKg, Inputs: d.inputs, ProductG: u.ProductG}
+		v.weighInputs(p, r, x, perG)
+	}
+}
+
+// reportCPU adds the processor time per operation, all threads together:
+// on a shared machine it varies much less than the clock time.
+func reportCPU(b *testing.B, start time.Duration) {
+	if b.N > 0 && start > 0 {
+		b.ReportMetric((cpuTime()-start).Seconds()/float64(b.N), "cpu-s/op")
 	}
 }

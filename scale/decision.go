@@ -161,7 +161,7 @@ func DecisionCoefficients() []source.Coefficient {
 		c("decision.tie_margin", "relative difference in cost per gram below which methods tie", TieMargin, "inputs such as Rf values, solubilities and prices are rarely known better than about ±15 %"),
 		c("decision.flip_range", "largest price change (factor) reported as a plausible flip", FlipRange, "a tenfold move is beyond what a budget plans for"),
 		c("decision.confident_share", "share of Monte Carlo draws the winner must be cheapest in", ConfidentShare, "four draws in five"),
-		c("uncertainty.price_spread", "σ of ln(price) in the Monte Carlo draws", PriceSpread, "quotes and catalogue prices drift by about a tenth within a budget year"),
+		c("uncertainty.price_spread", "share either way a price without a spread may move in the Monte Carlo draws", prices.DefaultSpread, "quotes and catalogue prices move by some tenths within a budget year"),
 	}
 }
 
@@ -196,7 +196,7 @@ func (d *Decision) weigh(u *Uncertainty) {
 			continue
 		}
 		d.Confidence = b.Cheapest
-		line := fmt.Sprintf("In %d draws of the models' coefficients and the prices within their stated uncertainty, %s is cheapest in %.0f %% (P10–P90 %.2f–%.2f per gram).", u.Draws, d.Winner, b.Cheapest*100, b.P10, b.P90)
+		line := fmt.Sprintf("In %d draws of the measured values, the models' coefficients and the prices within their stated uncertainty, %s is cheapest in %.0f %% (P10–P90 %.2f–%.2f per gram).", u.Draws, d.Winner, b.Cheapest*100, b.P10, b.P90)
 		if b.Cheapest < ConfidentShare && !d.Tie {
 			d.Tie = true
 			line += " That is not a clear win: treat the methods as tied and choose on other grounds."

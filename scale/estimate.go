@@ -81,10 +81,13 @@ func EstimateWith(p *costing.Plan, t *prices.Table, massesKg []float64, opt Opti
 	}
 	markFlips(r.Assumptions, r.Decision)
 	if opt.Draws > 0 {
-		if r.Uncertainty, err = Sample(p, t, r.TargetKg, opt.Draws, opt.Seed, opt.Progress); err != nil {
+		if r.Uncertainty, err = SampleAcross(p, t, r.TargetKg, Thin(massesKg, MaxBandMasses), opt.Draws, opt.Seed, opt.Progress); err != nil {
 			return nil, err
 		}
 		r.Decision.weigh(r.Uncertainty)
+		if r.Decision.Winner != "" && r.Decision.RunnerUp != "" {
+			r.Decision.Explanation = append(r.Decision.Explanation, r.Uncertainty.AdviceLines(3)...)
+		}
 	}
 	if sc.Campaign != nil {
 		sp := *sc.Campaign

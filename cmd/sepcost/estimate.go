@@ -59,7 +59,7 @@ at the scenario's target_mass (else its largest mass).`,
 const maxDraws = 1_000_000
 
 func addDrawFlags(cmd *cobra.Command, draws *int, seed *uint64) {
-	cmd.Flags().IntVar(draws, "draws", scale.DefaultOptions.Draws, "Monte Carlo draws of the uncertainty at the target mass (0 to skip)")
+	cmd.Flags().IntVar(draws, "draws", scale.DefaultOptions.Draws, "Monte Carlo draws of the uncertain inputs: bands at every mass, what to measure at the target mass (0 to skip)")
 	cmd.Flags().Uint64Var(seed, "seed", scale.DefaultOptions.Seed, "seed of the draws; the same seed gives the same bands")
 }
 

@@ -1,10 +1,8 @@
 package main
 
 import (
-	"fmt"
 	"io"
 	"os"
-	"sync"
 
 	"github.com/schollz/progressbar/v3"
 	"golang.org/x/term"
@@ -14,25 +12,17 @@ import (
 const progressFrom = 1000
 
 // newProgress returns a callback for the Monte Carlo draws: a bar on
-// stderr when stderr is a terminal, else a plain line every 10 %; nil for
-// small runs.
+// stderr when stderr is a terminal; nil (nothing written) when it is not —
+// a log file or a pipe gets no progress lines — or for small runs.
 func newProgress(stderr io.Writer, total int) func(done int) {
 	if total < progressFrom {
 		return nil
 	}
-	if f, ok := stderr.(*os.File); ok && term.IsTerminal(int(f.Fd())) {
-		bar := progressbar.NewOptions(total, progressbar.OptionSetWriter(stderr), progressbar.OptionSetDescription("uncertainty draws"),
-			progressbar.OptionClearOnFinish(), progressbar.OptionThrottle(100_000_000))
-		return func(done int) { _ = bar.Set(done) }
+	f, ok := stderr.(*os.File)
+	if !ok || !term.IsTerminal(int(f.Fd())) {
+		return nil
 	}
-	var mu sync.Mutex
-	next := 10
-	return func(done int) {
-		mu.Lock()
-		defer mu.Unlock()
-		if pct := done * 100 / total; pct >= next {
-			fmt.Fprintf(stderr, "uncertainty draws: %d %%\n", pct)
-			next = pct/10*10 + 10
-		}
-	}
+	bar := progressbar.NewOptions(total, progressbar.OptionSetWriter(stderr), progressbar.OptionSetDescription("uncertainty draws"),
+		progressbar.OptionClearOnFinish(), progressbar.OptionThrottle(100_000_000))
+	return func(done int) { _ = bar.Set(done) }
 }

@@ -420,7 +420,7 @@ func TestRunRefusesBadSettings(t *testing.T) {
 		v   float64
 	}{{KeyCoolApproach, 0}, {KeyCakePorosity, 1}, {KeyUReactor, -5}, {KeyHeaterEff, 1.5}, {KeyAging, -60}} {
 		coef := source.NewSet(Defaults())
-		cc := coef[c.key]
+		cc := coef.Of(c.key)
 		cc.SI = c.v
 		coef.Put(cc)
 		u := Run(sc, coef, 1)

@@ -76,25 +76,25 @@ func checkCoefficients(coef source.Set) string {
 		KeyVacuumDrop, KeyPressureDrop, KeyFilterAreaFactor, KeyDryingFlux, KeyTrayDepth, KeyDischargeRate}
 	for _, k := range positive {
 		if v := coef.Get(k); !(v > 0) || math.IsInf(v, 0) {
-			return fmt.Sprintf("setting %s = %s must be above zero", k, coef[k].String())
+			return fmt.Sprintf("setting %s = %s must be above zero", k, coef.Of(k).String())
 		}
 	}
 	unit := []string{KeyCakeSaturation, KeyWashSaturation, KeyFlaskFill, KeyReactorFill, KeyHeaterEff, KeyHeatAttended, KeyCoolAttended,
 		KeyFilterAttended, KeyDryAttended, KeyEvapAttended, KeyCropAttended, KeyDistribution, KeyCleanAttended}
 	for _, k := range unit {
 		if v := coef.Get(k); !(v >= 0 && v <= 1) {
-			return fmt.Sprintf("setting %s = %s must lie between 0 and 1", k, coef[k].String())
+			return fmt.Sprintf("setting %s = %s must lie between 0 and 1", k, coef.Of(k).String())
 		}
 	}
 	if v := coef.Get(KeyCakePorosity); !(v > 0 && v < 1) {
-		return fmt.Sprintf("setting %s = %s must lie above 0 and below 1", KeyCakePorosity, coef[KeyCakePorosity].String())
+		return fmt.Sprintf("setting %s = %s must lie above 0 and below 1", KeyCakePorosity, coef.Of(KeyCakePorosity).String())
 	}
 	nonNeg := []string{KeyExcess, KeyWashCakeVolumes, KeyInclusion, KeyExtrapolation, KeyDilution, KeySetupTime, KeyHotHold,
 		KeyAging, KeyFilterSetup, KeyCheckTime, KeyCleanTime, KeyDryWarmup, KeyCropTime, KeyScreeningTime, KeyScreeningMass,
 		KeyMediumResistance, KeyLODTarget, KeyDrySetup, KeyCleanPerArea}
 	for _, k := range nonNeg {
 		if v := coef.Get(k); !(v >= 0) || math.IsInf(v, 0) {
-			return fmt.Sprintf("setting %s = %s must be zero or more", k, coef[k].String())
+			return fmt.Sprintf("setting %s = %s must be zero or more", k, coef.Of(k).String())
 		}
 	}
 	return ""
@@ -105,7 +105,7 @@ func checkCoefficients(coef source.Set) string {
 func seriesFrom(coef source.Set, key func(int) string) []float64 {
 	var out []float64
 	for i := 1; ; i++ {
-		c, ok := coef[key(i)]
+		c, ok := coef.Lookup(key(i))
 		if !ok {
 			break
 		}

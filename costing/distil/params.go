@@ -37,7 +37,7 @@ func readParams(coef source.Set) (params, string) {
 	}
 	for _, k := range []string{KeyTransferRate, KeyPlantStill, KeyCrew} {
 		if v := coef.Get(k); !(v > 0) {
-			return p, fmt.Sprintf("setting %s = %s must be above zero", k, coef[k].String())
+			return p, fmt.Sprintf("setting %s = %s must be above zero", k, coef.Of(k).String())
 		}
 	}
 	return p, ""

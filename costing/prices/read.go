@@ -24,9 +24,18 @@ import (
 // seven must be named in the header row.
 var Columns = []string{"item", "unit", "price", "currency", "category", "source", "date"}
 
-// Optional are columns a table may add: from, the purchase from which a
-// line's price applies (price bands). Tables without it read as before.
-var Optional = []string{"from"}
+// Optional are columns a table may add; tables without them read as
+// before. from is the purchase from which a line's price applies (price
+// bands). spread is the share either way the price may move before it is
+// paid ("15 %" or 0.15), read as the half-width of a rectangular
+// distribution like a range in a scenario; empty or absent means
+// DefaultSpread.
+var Optional = []string{"from", "spread"}
+
+// DefaultSpread is the half-width, as a share of the price, given to a
+// price without a spread: catalogue prices and quotes move by some tenths
+// within a budget year (common practice, no source).
+const DefaultSpread = 0.15
 
 // required are the columns that may not be left empty on any row;
 // category, source and date may be.
@@ -180,7 +189,7 @@ func Read(r io.Reader, file string) (*Table, error) {
 			Category: get("category"),
 			Source:   get("source"),
 			Date:     get("date"),
-			Line:     line,
+			Line:     line, Spread: readSpread(get("spread"), line, add),
 		}
 		if _, ok := col["unit"]; ok {
 			it.Per, _ = checkUnit(it.Unit, line, add)
@@ -343,6 +352,34 @@ func checkRest(rec []string, col map[string]int, line int, add func(int, string,
 	if v, ok := get("date"); ok {
 		checkDate(v, line, add)
 	}
+	if v, ok := get("spread"); ok {
+		checkSpread(v, line, add)
+	}
+}
+
+// readSpread reads an optional spread cell; nil for an empty one.
+func readSpread(s string, line int, add func(int, string, string, ...any)) *float64 {
+	if s == "" {
+		return nil
+	}
+	v, _ := checkSpread(s, line, add)
+	return &v
+}
+
+// checkSpread reads a price spread: a share from 0 to below 1, as a plain
+// number or a percentage.
+func checkSpread(s string, line int, add func(int, string, string, ...any)) (float64, bool) {
+	const hint = `write the share either way the price may move, from 0 to below 100 %, e.g. "15 %" or 0.15`
+	r, err := units.ParsePlainRange(s)
+	if err != nil || r.Half != 0 {
+		add(line, "spread", "%q is not a share; %s", s, hint)
+		return 0, false
+	}
+	if !(r.Nominal >= 0 && r.Nominal < 1) {
+		add(line, "spread", "%q is outside the valid range; %s", s, hint)
+		return 0, false
+	}
+	return r.Nominal, true
 }
 
 // checkUnit parses a price unit and checks that it is per mass, volume,

@@ -19,6 +19,9 @@ type Item struct {
 	Source   string          // supplier, quote or catalogue reference
 	Date     string          // date of the price, as written (YYYY-MM-DD)
 	Line     int             // line number in the file, 1-based
+	// Spread is the share either way the price may move (the half-width of
+	// a rectangular distribution) as written; nil for DefaultSpread.
+	Spread *float64
 	// From is the purchase from which this line's price applies, as written
 	// ("200 L"); empty for the first band (from zero). FromSI is the same in
 	// SI units of Per.Dim. An item may have several lines, one per band.
@@ -28,6 +31,14 @@ type Item struct {
 	// Set by Resolve, not read from the file:
 	Written string  // the name as written when Resolve renamed it to a solvent's canonical name ("heptane" for n-heptane)
 	Density float64 // kg/m³ of the solvent an item priced per mass names, so that a volume of it can be priced; 0 otherwise
+}
+
+// PriceSpread is the item's spread, written or DefaultSpread.
+func (it Item) PriceSpread() float64 {
+	if it.Spread != nil {
+		return *it.Spread
+	}
+	return DefaultSpread
 }
 
 // Banded reports whether the item has more than one price line.

@@ -5,6 +5,7 @@ import (
 	"math"
 	"sort"
 	"strconv"
+	"strings"
 
 	"go.yaml.in/yaml/v3"
 
@@ -127,6 +128,8 @@ type Crystallization struct {
 	FlasksM3   []float64 // available flask volumes, m³, ascending; nil for the defaults
 	ReactorsM3 []float64 // available jacketed reactor volumes, m³, ascending
 	FillLimit  *float64  // largest share of a vessel's volume the batch may fill
+
+	impurityFollows bool // impurity.fraction was not written: it follows crude.nearest_impurity or 1 − purity
 }
 
 // CrystSolute is the product or the impurity in the crystallization liquid.
@@ -372,10 +375,10 @@ func (x *crystRead) impurity() {
 				}
 			}
 		} else if s.NearestGiven {
-			cr.ImpurityFraction = s.NearestImpurity
+			cr.ImpurityFraction, cr.impurityFollows = s.NearestImpurity, true
 			s.Inputs = append(s.Inputs, Input{Field: field + ".fraction", Written: "(not given)", Meaning: fmt.Sprintf("crude.nearest_impurity, %.3g %% of the crude; other impurities stay in the mother liquor", s.NearestImpurity*100)})
 		} else if s.Purity > 0 {
-			cr.ImpurityFraction = rest
+			cr.ImpurityFraction, cr.impurityFollows = rest, true
 			s.Inputs = append(s.Inputs, Input{Field: field + ".fraction", Written: "(not given)", Meaning: fmt.Sprintf("all impurities (%.3g %%) behave like this one: the cautious case (crude.nearest_impurity not given either)", rest*100)})
 		}
 	}
@@ -478,11 +481,19 @@ func (x *crystRead) options() {
 			notGiven(name, "the model default (crystallization."+name+")")
 			return nil
 		}
-		v, ok := c.quantity(t, field, dim)
+		r, ok := c.quantityRange(t, field, dim)
 		if !ok {
 			return nil
 		}
-		if v < 0 {
+		v := r.Nominal
+		if name == "screening_time" && r.Lo() >= 0 {
+			s.measure(field, t, "screening and development time", "h", KindEstimate, r, 0, math.Inf(1),
+				func(s *Scenario, v float64) { s.Crystallization.ScreeningS = &v })
+		} else if r.Half > 0 {
+			c.add(t.Line, field, "%q: a range is read here only for screening_time; write one value", t.Value)
+			return nil
+		}
+		if r.Lo() < 0 {
 			c.add(t.Line, field, "%q is negative; write %s, zero or more", t.Value, what)
 			return nil
 		}
@@ -564,6 +575,7 @@ func (c *collector) crystSolute(r *rawCrystSolute, field string, line int, nSolv
 		}
 		sort.Strings(keys)
 		var pts []solubility.Point
+		var spread []measuredPoint
 		ok := true
 		for _, k := range keys {
 			t := r.Solubility[k]
@@ -583,18 +595,20 @@ func (c *collector) crystSolute(r *rawCrystSolute, field string, line int, nSolv
 				ok = false
 				continue
 			}
-			S, err := units.ParseAs(t.Value, units.Density)
+			rS, err := units.ParseRangeAs(t.Value, units.Density)
 			if err != nil {
 				c.add(t.Line, f, "%v (for %s)", err, sWhat)
 				ok = false
 				continue
 			}
-			if !(T > 0) || !(S > 0) {
+			S := rS.Nominal
+			if !(T > 0) || !(rS.Lo() > 0) {
 				c.add(t.Line, f, "%s at %s: write a solubility above zero at a temperature above absolute zero, as mass per volume of solvent, e.g. \"45 g/L\" or \"45 mg/mL\"", t.Value, k)
 				ok = false
 				continue
 			}
 			pts = append(pts, solubility.Point{T: T, S: S})
+			spread = append(spread, measuredPoint{f, t, rS, fmt.Sprintf("solubility of the %s at %.4g °C", strings.TrimPrefix(field, "crystallization."), T-273.15)})
 			echo(f, t, fmt.Sprintf("%.4g g per L of solvent at %.1f °C", S, T-273.15))
 		}
 		if melt {
@@ -614,6 +628,10 @@ func (c *collector) crystSolute(r *rawCrystSolute, field string, line int, nSolv
 				c.add(descLine, field+".solubility", "%v; write it as {\"0 C\": \"15 g/L\", \"75 C\": \"160 g/L\"}", err)
 			} else {
 				out.Curve = solubility.Curve{Points: pts, Fit: &fit}
+				// The points are in the order measured here; Fit sorts its own copy.
+				for i, m := range spread {
+					s.measure(m.field, m.t, m.label, "g/L", KindSolubility, m.r, 0, math.Inf(1), setSolubility(field == "crystallization.product", i))
+				}
 			}
 		}
 		return out, descLine
@@ -707,4 +725,13 @@ func bubblePoint(ss []solvent.Solvent, fr []float64) float64 {
 		return t
 	}
 	return lowest // cautious: the lower boiling point
+}
+
+// measuredPoint is one solubility point as read, recorded as measured once
+// the curve through all the points is known to fit.
+type measuredPoint struct {
+	field string
+	t     Text
+	r     units.Range
+	label string
 }

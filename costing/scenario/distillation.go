@@ -400,7 +400,7 @@ func (c *collector) compound(r *rawCompound, out *Compound, field string, line, 
 
 	// Normal boiling point: given, or from the Antoine constants.
 	if r.BoilingPoint.Set {
-		sv.BoilingPoint = prop(positive(r.BoilingPoint, "boiling_point", units.Temperature, minBoilingK, maxBoilingK, `the normal boiling point (at 1 atm), e.g. "185 C"`))
+		sv.BoilingPoint = prop(c.boilingPoint(r, field, isProduct, s))
 	}
 	if len(c.list) > n {
 		return false

@@ -95,20 +95,27 @@ func resolve(c *collector, raw *rawScenario, root *yaml.Node) *Scenario {
 	c.unknown(raw.Crude.Extra, "crude", rawCrude{})
 	crudeLine := keyLine(root, "crude")
 	if c.required(raw.Crude.Purity, crudeLine, "crude.purity", `the mass fraction of product in the crude, e.g. 0.85 or "85 %"`) {
-		if v, ok := c.fraction(raw.Crude.Purity, "crude.purity", 0, 1, `a mass fraction above 0 and below 1, e.g. 0.85 or "85 %"`); ok {
-			if v <= 0 || v >= 1 {
+		if r, ok := c.fractionRange(raw.Crude.Purity, "crude.purity", 0, 1, `a mass fraction above 0 and below 1, e.g. 0.85 or "85 %"`); ok {
+			v := r.Nominal
+			if r.Lo() <= 0 || r.Hi() >= 1 {
 				c.add(raw.Crude.Purity.Line, "crude.purity", "%s leaves nothing to separate or no product; write a fraction above 0 and below 1", raw.Crude.Purity.Value)
 			}
 			s.Purity = v
+			s.measure("crude.purity", raw.Crude.Purity, "purity of the crude", "", KindPurity, r, 0, 1, setPurity)
 			echo("crude.purity", raw.Crude.Purity, fmt.Sprintf("%.3g %% product by mass", v*100))
 		}
 	}
 	if raw.Crude.NearestImpurity.Set {
-		if v, ok := c.fraction(raw.Crude.NearestImpurity, "crude.nearest_impurity", 0, 1, `a mass fraction of the crude, above 0 and at most 1 − purity`); ok {
-			if v <= 0 || (s.Purity > 0 && v > 1-s.Purity+1e-9) {
+		if r, ok := c.fractionRange(raw.Crude.NearestImpurity, "crude.nearest_impurity", 0, 1, `a mass fraction of the crude, above 0 and at most 1 − purity`); ok {
+			v := r.Nominal
+			if r.Lo() <= 0 || (s.Purity > 0 && v > 1-s.Purity+1e-9) {
 				c.add(raw.Crude.NearestImpurity.Line, "crude.nearest_impurity", "%s must be above 0 and at most 1 − purity (%.3g)", raw.Crude.NearestImpurity.Value, 1-s.Purity)
 			}
 			s.NearestImpurity, s.NearestGiven = v, true
+			if r.Half > 0 { // no default spread: a share of the crude written exactly follows the purity's draw
+				s.measure("crude.nearest_impurity", raw.Crude.NearestImpurity, "share of the crude running next to the product", "", KindPurity, r, 0, 1,
+					func(s *Scenario, v float64) { s.NearestImpurity = v })
+			}
 			echo("crude.nearest_impurity", raw.Crude.NearestImpurity, fmt.Sprintf("%.3g %% of the crude runs next to the product", v*100))
 		}
 	} else if s.Purity > 0 {
@@ -139,31 +146,36 @@ func resolve(c *collector, raw *rawScenario, root *yaml.Node) *Scenario {
 	for _, k := range keys {
 		t := raw.Settings[k]
 		field := "settings." + k
-		q, err := settingValue(t)
+		q, r, err := settingValue(t)
 		if err != nil {
 			c.add(t.Line, field, "%v", err)
 			continue
 		}
-		s.Settings = append(s.Settings, Setting{Key: k, Value: q, Written: t.Value, Line: t.Line})
+		s.Settings = append(s.Settings, Setting{Key: k, Value: q, Range: r, Written: t.Value, Line: t.Line})
 		echo(field, t, "overrides the model default")
 	}
+	s.describeMeasured()
 	return s
 }
 
 // settingValue reads a setting: a quantity with its unit, or a plain number
-// for dimensionless settings (a count of column volumes, a fraction).
-func settingValue(t Text) (units.Quantity, error) {
+// for dimensionless settings (a count of column volumes, a fraction);
+// either may carry a range ("12 ± 2 cm", "0.2–0.3").
+func settingValue(t Text) (units.Quantity, units.Range, error) {
 	if v, err := strconv.ParseFloat(t.Value, 64); err == nil {
 		if math.IsNaN(v) || math.IsInf(v, 0) {
-			return units.Quantity{}, fmt.Errorf("%q is not a finite number", t.Value)
+			return units.Quantity{}, units.Range{}, fmt.Errorf("%q is not a finite number", t.Value)
 		}
-		return units.Quantity{SI: v, Dim: units.None}, nil
+		return units.Quantity{SI: v, Dim: units.None}, units.Range{Nominal: v}, nil
 	}
-	q, _, err := units.Parse(t.Value)
+	if r, err := units.ParsePlainRange(t.Value); err == nil {
+		return units.Quantity{SI: r.Nominal, Dim: units.None}, r, nil
+	}
+	r, u, err := units.ParseRange(t.Value)
 	if err != nil {
-		return units.Quantity{}, fmt.Errorf(`%v; write a number with its unit, e.g. "15 cm", or a plain number for counts and fractions`, err)
+		return units.Quantity{}, units.Range{}, fmt.Errorf(`%v; write a number with its unit, e.g. "15 cm", a plain number for counts and fractions, or either with a range, e.g. "12–18 cm"`, err)
 	}
-	return q, nil
+	return units.Quantity{SI: r.Nominal, Dim: u.Dim}, r, nil
 }
 
 func (c *collector) chromatography(r *rawChrom, s *Scenario, root *yaml.Node, echo func(string, Text, string)) *Chromatography {
@@ -176,22 +188,24 @@ func (c *collector) chromatography(r *rawChrom, s *Scenario, root *yaml.Node, ec
 		ch.TLCEluent = c.mix(r.TLCEluent, "chromatography.tlc_eluent", keyLine(root, "chromatography", "tlc_eluent"), s.Solvents)
 		s.Inputs = append(s.Inputs, Input{Field: "chromatography.tlc_eluent", Written: ch.TLCEluent.String(), Meaning: "volume fractions"})
 	}
-	rf := func(t Text, field string) float64 {
+	rf := func(t Text, field, label string, set func(*Scenario, float64)) float64 {
 		if !c.required(t, line, field, "an Rf value between 0 and 1, e.g. 0.30") {
 			return 0
 		}
-		v, ok := c.fraction(t, field, 0, 1, "an Rf value above 0 and below 1, e.g. 0.30")
-		if ok && (v <= 0 || v >= 1) {
+		r, ok := c.fractionRange(t, field, 0, 1, "an Rf value above 0 and below 1, e.g. 0.30")
+		v := r.Nominal
+		if ok && (r.Lo() <= 0 || r.Hi() >= 1) {
 			c.add(t.Line, field, "Rf %s is outside (0, 1): a spot at the baseline or the solvent front cannot be sized for a column; write a value above 0 and below 1", t.Value)
 			return 0
 		}
 		if ok {
 			echo(field, t, fmt.Sprintf("elutes at about %.2f column volumes (1/Rf)", 1/v))
+			s.measure(field, t, label, "", KindRf, r, 0, 1, set)
 		}
 		return v
 	}
-	ch.ProductRf = rf(r.ProductRf, "chromatography.product_rf")
-	ch.ImpurityRf = rf(r.ImpurityRf, "chromatography.impurity_rf")
+	ch.ProductRf = rf(r.ProductRf, "chromatography.product_rf", "Rf of the product", func(s *Scenario, v float64) { s.Chromatography.ProductRf = v })
+	ch.ImpurityRf = rf(r.ImpurityRf, "chromatography.impurity_rf", "Rf of the nearest impurity", func(s *Scenario, v float64) { s.Chromatography.ImpurityRf = v })
 	if ch.ProductRf > 0 && ch.ProductRf == ch.ImpurityRf {
 		c.add(r.ImpurityRf.Line, "chromatography.impurity_rf", "equals product_rf (%s): the spots do not separate in this eluent; find an eluent that separates them on TLC first", r.ImpurityRf.Value)
 	}

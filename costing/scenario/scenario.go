@@ -62,7 +62,8 @@ type Chromatography struct {
 // Setting is one model default the user overrides.
 type Setting struct {
 	Key     string
-	Value   units.Quantity
+	Value   units.Quantity // the nominal value (the midpoint of a written range)
+	Range   units.Range    // Half > 0 when written with a range ("12 ± 2 cm"), SI
 	Written string
 	Line    int
 }
@@ -86,6 +87,7 @@ type Scenario struct {
 	Notes           string
 	WasteSector     waste.Sector // EU List of Waste chapter for the waste codes
 	Inputs          []Input      // every field as written and as understood
+	Measured        []Measured   // measured values with the limits they may lie between
 }
 
 // Input is one field as written and as understood, for the Inputs sheet.

@@ -39,7 +39,7 @@ func (c *collector) quantity(t Text, field string, dim units.Dim) (float64, bool
 	}
 	v, err := units.ParseAs(t.Value, dim)
 	if err != nil {
-		c.add(t.Line, field, "%v", err)
+		c.add(t.Line, field, "%v%s", err, rangeHint(t.Value))
 		return 0, false
 	}
 	return v, true
@@ -58,7 +58,7 @@ func (c *collector) fraction(t Text, field string, lo, hi float64, what string) 
 		v, err = strconv.ParseFloat(t.Value, 64)
 	}
 	if err != nil {
-		c.add(t.Line, field, "%q is not a number; write %s", t.Value, what)
+		c.add(t.Line, field, "%q is not a number; write %s%s", t.Value, what, rangeHint(t.Value))
 		return 0, false
 	}
 	if !(v >= lo && v <= hi) {

@@ -201,10 +201,10 @@ func TestCoefficients(t *testing.T) {
 	// Spot check against the table's printed units: ethyl acetate density
 	// displays in g/mL as written in builtin.go (0.900) and its boiling
 	// point in °C (77.1).
-	if d := set["solvent.ethyl_acetate.density"].Display(); math.Abs(d-0.900) > 1e-12 {
+	if d := set.Of("solvent.ethyl_acetate.density").Display(); math.Abs(d-0.900) > 1e-12 {
 		t.Errorf("ethyl acetate density displays as %v g/mL", d)
 	}
-	if d := set["solvent.ethyl_acetate.boiling_point"].Display(); math.Abs(d-77.1) > 1e-9 {
+	if d := set.Of("solvent.ethyl_acetate.boiling_point").Display(); math.Abs(d-77.1) > 1e-9 {
 		t.Errorf("ethyl acetate boiling point displays as %v C", d)
 	}
 	keys := set.Keys()

@@ -65,41 +65,144 @@ func (c Coefficient) String() string {
 	return fmt.Sprintf("%s = %.4g %s", c.Label, c.Display(), c.Unit)
 }
 
-// Set is a table of coefficients by key.
-type Set map[string]Coefficient
+// Set is a table of coefficients by key. It is stored flat: the
+// descriptions (key, label, unit, source, mark, range) in one slice, the SI
+// values in a parallel slice of floats, and the key index shared between
+// copies until a copy adds a key. Copies made for Monte Carlo draws
+// (WithValues) therefore cost one slice of floats, with no map to clone and
+// no key to sort. A Set shares its storage like a map does: Put on one
+// value is seen by every holder of it; Clone makes an independent one.
+type Set struct{ t *table }
+
+type table struct {
+	index    map[string]int // key → position; with meta, shared with copies made by WithValues until ownIndex
+	ownIndex bool
+	meta     []Coefficient // SI fields are not read: vals holds the values
+	vals     []float64
+	keys     []string // sorted keys, built on demand, shared while the index is
+}
 
 // NewSet builds a Set from a list; duplicate keys are a programming error.
 func NewSet(list ...[]Coefficient) Set {
-	s := Set{}
+	s := Set{&table{index: map[string]int{}, ownIndex: true}}
 	for _, l := range list {
 		for _, c := range l {
-			if _, dup := s[c.Key]; dup {
+			if _, dup := s.t.index[c.Key]; dup {
 				panic("duplicate coefficient key " + c.Key)
 			}
-			s[c.Key] = c
+			s.Put(c)
 		}
 	}
 	return s
 }
 
+// Len is the number of coefficients.
+func (s Set) Len() int {
+	if s.t == nil {
+		return 0
+	}
+	return len(s.t.meta)
+}
+
 // Get returns the SI value of a coefficient; an unknown key is a programming error.
 func (s Set) Get(key string) float64 {
-	c, ok := s[key]
+	i, ok := s.pos(key)
 	if !ok {
 		panic("unknown coefficient " + key)
 	}
-	return c.SI
+	return s.t.vals[i]
+}
+
+// Lookup returns a coefficient and whether the set has it.
+func (s Set) Lookup(key string) (Coefficient, bool) {
+	i, ok := s.pos(key)
+	if !ok {
+		return Coefficient{}, false
+	}
+	return s.At(i), true
+}
+
+// Of returns a coefficient; an unknown key is a programming error.
+func (s Set) Of(key string) Coefficient {
+	c, ok := s.Lookup(key)
+	if !ok {
+		panic("unknown coefficient " + key)
+	}
+	return c
+}
+
+// At returns the coefficient at a position, 0 ≤ i < Len (positions follow
+// the order of insertion and do not change).
+func (s Set) At(i int) Coefficient {
+	c := s.t.meta[i]
+	c.SI = s.t.vals[i]
+	return c
+}
+
+// Values copies the SI values in position order.
+func (s Set) Values() []float64 { return append([]float64(nil), s.t.vals...) }
+
+// WithValues is a copy of the set whose SI values are vals, in position
+// order (len(vals) == Len(); the slice is kept, not copied). Descriptions
+// and the key index are shared, so it costs no allocation beyond vals; the
+// set s must not gain keys while such copies are in use (it may from many
+// goroutines be read and copied).
+func (s Set) WithValues(vals []float64) Set {
+	if len(vals) != len(s.t.vals) {
+		panic("source: WithValues needs one value per coefficient")
+	}
+	return Set{&table{index: s.t.index, meta: s.t.meta[:len(s.t.meta):len(s.t.meta)], vals: vals}}
+}
+
+func (s Set) pos(key string) (int, bool) {
+	if s.t == nil {
+		return 0, false
+	}
+	i, ok := s.t.index[key]
+	if !ok || i >= len(s.t.meta) {
+		return 0, false
+	}
+	return i, true
 }
 
 // Put adds or replaces a coefficient (used for derived and calibrated values).
-func (s Set) Put(c Coefficient) { s[c.Key] = c }
+func (s Set) Put(c Coefficient) {
+	if i, ok := s.pos(c.Key); ok {
+		s.t.own()
+		s.t.meta[i] = c
+		s.t.vals[i] = c.SI
+		return
+	}
+	if s.t == nil {
+		panic("source: Put on a Set not made by NewSet")
+	}
+	s.t.own()
+	s.t.index[c.Key] = len(s.t.meta)
+	s.t.meta = append(s.t.meta, c)
+	s.t.vals = append(s.t.vals, c.SI)
+	s.t.keys = nil
+}
+
+// own gives a table made by WithValues its own index and descriptions
+// before it is changed.
+func (t *table) own() {
+	if t.ownIndex {
+		return
+	}
+	idx := make(map[string]int, len(t.index)+1)
+	for k, v := range t.index {
+		idx[k] = v
+	}
+	t.index, t.ownIndex = idx, true
+	t.meta = append([]Coefficient(nil), t.meta...)
+}
 
 // Override replaces the value of a known coefficient with the user's.
 // It returns an error naming the nearest key and the valid keys of the
 // same method when the key is unknown (suggest), and an
 // error naming the wanted dimension when the quantity has another one.
 func (s Set) Override(key string, q units.Quantity, raw string) error {
-	c, ok := s[key]
+	c, ok := s.Lookup(key)
 	if !ok {
 		return fmt.Errorf("unknown model setting %q; %s", key, s.suggest(key))
 	}
@@ -113,34 +216,45 @@ func (s Set) Override(key string, q units.Quantity, raw string) error {
 	c.Source = "set in the scenario (default was " + c.String() + "; " + c.Source + ")"
 	c.SI = q.SI
 	c.Mark = Override
-	s[key] = c
+	s.Put(c)
 	return nil
 }
 
 // Clone copies a Set so that overrides for one scenario do not leak.
 func (s Set) Clone() Set {
-	out := make(Set, len(s))
-	for k, v := range s {
-		out[k] = v
+	if s.t == nil {
+		return NewSet()
 	}
-	return out
+	idx := make(map[string]int, len(s.t.index))
+	for k, v := range s.t.index {
+		idx[k] = v
+	}
+	return Set{&table{index: idx, ownIndex: true,
+		meta: append([]Coefficient(nil), s.t.meta...),
+		vals: append([]float64(nil), s.t.vals...), keys: append([]string(nil), s.t.keys...)}}
 }
 
 // Keys lists the keys in order.
 func (s Set) Keys() []string {
-	keys := make([]string, 0, len(s))
-	for k := range s {
-		keys = append(keys, k)
+	if s.t == nil {
+		return nil
 	}
-	sort.Strings(keys)
-	return keys
+	if s.t.keys == nil {
+		keys := make([]string, 0, len(s.t.meta))
+		for _, c := range s.t.meta {
+			keys = append(keys, c.Key)
+		}
+		sort.Strings(keys)
+		s.t.keys = keys
+	}
+	return append([]string(nil), s.t.keys...)
 }
 
 // Sorted lists the coefficients ordered by method then key.
 func (s Set) Sorted() []Coefficient {
-	out := make([]Coefficient, 0, len(s))
+	out := make([]Coefficient, 0, s.Len())
 	for _, k := range s.Keys() {
-		out = append(out, s[k])
+		out = append(out, s.Of(k))
 	}
 	sort.SliceStable(out, func(i, j int) bool { return out[i].Method < out[j].Method })
 	return out

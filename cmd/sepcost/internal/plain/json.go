@@ -121,6 +121,7 @@ type jsonUncertainty struct {
 	Draws    int        `json:"draws"`
 	Seed     uint64     `json:"seed"`
 	Methods  []jsonBand `json:"methods"`
+	jsonUncertaintyDetail
 }
 
 type jsonBand struct {
@@ -355,6 +356,7 @@ func uncertaintyJSON(r *scale.Report) *jsonUncertainty {
 		}
 		ju.Methods = append(ju.Methods, jb)
 	}
+	ju.jsonUncertaintyDetail = uncertaintyDetail(r)
 	return ju
 }
 

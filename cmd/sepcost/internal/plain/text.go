@@ -200,6 +200,11 @@ func crossovers(ew *errWriter, r *scale.Report) {
 		}
 		ew.printf(")\n")
 	}
+	if u := r.Uncertainty; u != nil {
+		for _, c := range u.Crossings {
+			ew.printf("  Across the Monte Carlo draws, %s.\n", c.Words())
+		}
+	}
 	if len(r.Pairwise) == 0 {
 		return
 	}

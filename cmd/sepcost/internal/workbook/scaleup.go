@@ -85,7 +85,7 @@ type qtyCol struct {
 // The sheet is written straight to excelize's StreamWriter in two passes
 // over the rows, the first for the column widths, so that the memory used
 // does not grow with the number of masses beyond the report itself.
-func writeScaleUp(f *excelize.File, st *styles, r *scale.Report, m money, methods []methodOut, details bool, lay *layout, omit bool) error {
+func writeScaleUp(f *excelize.File, st *styles, r *scale.Report, m money, methods []methodOut, details bool, bands *bandRefs, lay *layout, omit bool) error {
 	rows := r.Rows()
 	nm := len(r.Methods)
 	if len(rows) != len(r.MassesKg)*nm {
@@ -126,7 +126,7 @@ func writeScaleUp(f *excelize.File, st *styles, r *scale.Report, m money, method
 	// Charts before the rows and before Flush (DESIGN §9).
 	n := len(r.MassesKg)
 	block := func(j int) (first, last int) { first = suFirstRow + j*n; return first, first + n - 1 }
-	if err := addScaleUpCharts(f, r, m, widths, block, plotted, points, positive); err != nil {
+	if err := addScaleUpCharts(f, r, m, widths, block, plotted, points, positive, bands); err != nil {
 		return err
 	}
 
@@ -510,7 +510,7 @@ func longestWord(s string) int {
 // per gram, waste per gram (E-factor) and hours elapsed against crude
 // mass, one series per method with a point in the chart.
 func addScaleUpCharts(f *excelize.File, r *scale.Report, m money, widths map[int]float64, block func(int) (int, int),
-	plotted [][suFirstQty]int, points [suFirstQty]int, positive [suFirstQty]bool) error {
+	plotted [][suFirstQty]int, points [suFirstQty]int, positive [suFirstQty]bool, bands *bandRefs) error {
 	specs := []chartSpec{
 		{"Cost per gram of purified product", m.currency + " per g", suPerGram},
 		{"Waste per gram of purified product (E-factor)", "kg waste per kg product", suEFactor},
@@ -540,6 +540,10 @@ func addScaleUpCharts(f *excelize.File, r *scale.Report, m money, widths map[int
 			col++
 		}
 		ch := sp.chart(r, block, series, points[sp.col], positive[sp.col])
+		if sp.col == suPerGram {
+			// The P10–P90 band of the Monte Carlo draws (Uncertainty sheet).
+			ch.Series = append(ch.Series, bands.series()...)
+		}
 		ch.Format.OffsetX = offset - px
 		part, err := addChart(f, cellName(col, suChartRow), ch)
 		if err != nil {

@@ -3,7 +3,6 @@ package workbook
 import (
 	"fmt"
 	"math"
-	"sort"
 	"strconv"
 
 	"sepcost/costing"
@@ -41,23 +40,20 @@ const (
 	uLast = uCheapest
 )
 
-// buildUncertainty writes the Monte Carlo result at the target mass
-// (scale.Uncertainty, from scale.Sample): the target mass, the number of
-// draws and the seed; per method the P10, P50 and P90 of the cost per gram
-// of purified product and the shares of draws in which it was feasible and
-// cheapest; how to read them, with the rule that a win in fewer than
-// scale.ConfidentShare of the draws is a tie; and the spreads drawn
-// (scale.Spread by mark, scale.PriceSpread), which are this project's
-// choices. The only arithmetic is the factors that show what a spread
-// means, those at one standard deviation either side:
-//
-//	f(−1σ) = exp(−σ),  f(+1σ) = exp(+σ)
-//
-// with σ the standard deviation of the natural log of the factor
-// (dimensionless, σ ≥ 0); about two draws in three fall between them.
-func buildUncertainty(g *grid, st *styles, r *scale.Report) {
+// buildUncertainty writes the Monte Carlo result (scale.Uncertainty, from
+// scale.SampleAcross): the target mass, the number of draws and the seed;
+// per method the P10, P50 and P90 of the cost per gram of purified product
+// and the shares of draws in which it was feasible and cheapest; how to
+// read them, with the rule that a win in fewer than scale.ConfidentShare
+// of the draws is a tie; what each input is worth knowing before choosing
+// and how strongly it moves the cost; the bands and cheapest shares at
+// every mass (with a chart) and the crossover masses as intervals; every
+// input drawn with its limits, distribution and basis; and the spreads
+// (uncertaintySpreads).
+func buildUncertainty(g *grid, st *styles, r *scale.Report) *bandRefs {
 	u := r.Uncertainty
 	g.widths[uLabel] = 46
+	g.maxWidths[6], g.maxWidths[7] = 24, 48 // the inputs table's wrapped text
 	for c := uP10; c <= uLast; c++ {
 		g.minWidths[c] = 13
 	}
@@ -133,51 +129,14 @@ func buildUncertainty(g *grid, st *styles, r *scale.Report) {
 		row++
 	}
 
-	row++
-	g.set(row, 1, cell{value: "The spreads drawn", style: st.heading, spill: true})
-	row++
-	wrapped(g, st, row, "Each draw multiplies every model coefficient (but temperatures, which are not scale quantities) and every price "+
-		"by a log-normal factor exp(σ·z), z a standard normal number, and runs every method at the target mass. Shares and "+
-		"fractions below 1 are drawn on their odds, so that they stay between 0 and 1. Each draw has its own generator, seeded "+
-		"from the seed and the draw's number.", uLast)
-	row++
-	for c, h := range []string{"Values drawn", "σ of ln(factor)", "Factor at −1σ", "Factor at +1σ"} {
-		style := st.headerRight
-		if c == 0 {
-			style = st.header
-		}
-		g.set(row, c+1, cell{value: h, style: style, wrap: true})
-	}
-	row++
-	spread := func(label string, sigma float64) {
-		g.set(row, uLabel, cell{value: label, style: st.wrap, wrap: true})
-		g.num(row, 2, sigma, st.ratio)
-		g.num(row, 3, math.Exp(-sigma), st.figure)
-		g.num(row, 4, math.Exp(sigma), st.figure)
-		row++
-	}
-	listed := map[source.Mark]bool{}
-	for _, mm := range markMeanings {
-		if sigma, ok := scale.Spread[mm.mark]; ok {
-			spread(fmt.Sprintf("Coefficients marked %s (%s)", mm.mark, mm.meaning), sigma)
-			listed[mm.mark] = true
-		}
-	}
-	var others []string
-	for mk := range scale.Spread {
-		if !listed[mk] {
-			others = append(others, string(mk))
-		}
-	}
-	sort.Strings(others) // a map has no order; the workbook must not change between runs
-	for _, mk := range others {
-		spread("Coefficients marked "+mk, scale.Spread[source.Mark(mk)])
-	}
-	spread("Every price in the price table", scale.PriceSpread)
-	row++
-	wrapped(g, st, row, "These spreads are this project's choices (common practice, no source): a value seen in a published table is "+
-		"known to a few per cent, one from memory to some 15 %, a habit of the trade to a quarter; quotes and catalogue prices "+
-		"drift by about a tenth within a budget year. About two draws in three fall between the factors at −1σ and +1σ.", uLast)
+	row = uncertaintyWorth(g, st, u, row+1)
+	var charts []gridChart
+	row = uncertaintySensitivity(g, st, r, row+1, &charts)
+	row, refs := uncertaintyAcross(g, st, r, row+1, &charts)
+	chartsOn(g, charts)
+	row = uncertaintyInputs(g, st, u, row+1)
+	uncertaintySpreads(g, st, row+1)
+	return refs
 }
 
 // verdict says what the shares mean at this mass: a clear win when the
@@ -189,9 +148,17 @@ func verdict(u *scale.Uncertainty, best int) string {
 	}
 	b := u.Bands[best]
 	pct := func(v float64) string { return sigFigs(v*100, 3) + " %" }
+	// The share is itself a sample estimate: its binomial standard error
+	// is √(p(1 − p)/N) (common practice, no source: the standard error of a
+	// proportion).
+	se := ""
+	if u.Draws > 0 && b.Cheapest < 1 {
+		se = fmt.Sprintf(" That share is known to about ±%s with %d draws (standard error √(p(1 − p)/N)); more draws (--draws) narrow it.",
+			pct(math.Sqrt(b.Cheapest*(1-b.Cheapest)/float64(u.Draws))), u.Draws)
+	}
 	if b.Cheapest >= scale.ConfidentShare {
-		return fmt.Sprintf("Here %s is cheapest in %s of the draws: a clear win at %s.", b.Method, pct(b.Cheapest), massLabel(u.TargetKg))
+		return fmt.Sprintf("Here %s is cheapest in %s of the draws: a clear win at %s.", b.Method, pct(b.Cheapest), massLabel(u.TargetKg)) + se
 	}
 	return fmt.Sprintf("Here no method is cheapest in %s of the draws (%s comes closest, with %s): at %s the methods are tied within the models' uncertainty.",
-		pct(scale.ConfidentShare), b.Method, pct(b.Cheapest), massLabel(u.TargetKg))
+		pct(scale.ConfidentShare), b.Method, pct(b.Cheapest), massLabel(u.TargetKg)) + se
 }

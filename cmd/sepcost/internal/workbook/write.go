@@ -219,9 +219,10 @@ func build(r *scale.Report, opt Options, record bool) (*excelize.File, *layout, 
 			grids = append(grids, eq)
 		}
 	}
+	var bands *bandRefs
 	if r.Uncertainty != nil {
 		unc := newGrid(sheetUncertainty)
-		buildUncertainty(unc, st, r)
+		bands = buildUncertainty(unc, st, r)
 		grids = append(grids, unc)
 	}
 	sources := newGrid(sheetSources)
@@ -235,7 +236,7 @@ func build(r *scale.Report, opt Options, record bool) (*excelize.File, *layout, 
 		}
 	}
 	if r.IsSweep {
-		if err := writeScaleUp(f, st, r, m, methods, details, lay, opt.OmitCachedValues); err != nil {
+		if err := writeScaleUp(f, st, r, m, methods, details, bands, lay, opt.OmitCachedValues); err != nil {
 			return nil, nil, err
 		}
 	}
