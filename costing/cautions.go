@@ -9,7 +9,7 @@ import (
 )
 
 // Cautions lists the safety cautions that apply to the plan's methods and
-// solvents (DESIGN §7). They are the usual cautions of laboratory practice
+// solvents (DEVELOPERS.md, "Cautions"). They are the usual cautions of laboratory practice
 // (e.g. National Research Council, "Prudent Practices in the Laboratory",
 // 2011, chapters 4 and 6 — from memory) and always defer to local codes.
 func (p *Plan) Cautions() []string {

@@ -195,7 +195,7 @@ func TestCostNeverFallsWhenRunsAdded(t *testing.T) {
 }
 
 // Crystallization cost per gram falls as the one-time development cost is
-// spread over more product (DESIGN §5.2).
+// spread over more product (the development cost is one-time, usage.OneTime).
 func TestDevelopmentCostSpread(t *testing.T) {
 	p, pt := plan(t, templates.Scenario)
 	prev := math.Inf(1)

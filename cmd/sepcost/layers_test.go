@@ -12,7 +12,7 @@ import (
 
 // Imports run one way: cmd → writers → scale → costing (ledger) → models.
 // This test reads the import lines of every non-test Go file and fails when
-// a lower package starts to depend on a higher one (DESIGN §8, "Here").
+// a lower package starts to depend on a higher one (DEVELOPERS.md, "Architecture and data flow").
 func TestLayering(t *testing.T) {
 	root := filepath.Join("..", "..")
 	const mod = "sepcost/"

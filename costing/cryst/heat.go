@@ -22,7 +22,8 @@ var (
 //
 // For geometrically similar batches the area grows as V^(2/3) while the
 // heat to move grows as V, which is why heating and cooling take longer at
-// scale (DESIGN §5.2; standard heat transfer, REFERENCES.md, from memory).
+// scale (standard heat transfer: the square–cube law for similar vessels,
+// from memory).
 func WettedArea(a, V float64) float64 { return a * math.Pow(V, 2.0/3) }
 
 // JacketTime is the time to bring a well-stirred batch from T0 to Tf with
@@ -35,7 +36,7 @@ func WettedArea(a, V float64) float64 { return a * math.Pow(V, 2.0/3) }
 // follows from m·c_p·dT/dt = −U·A·(T − Tj) with U and c_p constant
 // (batch heating and cooling of a stirred tank; McCabe, W. L.; Smith,
 // J. C.; Harriott, P. "Unit Operations of Chemical Engineering", ch. 15 —
-// from memory; equation as in REFERENCES.md). Valid when Tj lies beyond
+// from memory). Valid when Tj lies beyond
 // Tf on the far side from T0; otherwise Tf is never reached and the result
 // is +Inf. With A = a·V^(2/3) and C ∝ V the time grows as V^(1/3).
 func JacketTime(C, U, A, T0, Tf, Tj float64) float64 {

@@ -53,9 +53,9 @@ func TestJacketTimeAgainstIntegration(t *testing.T) {
 
 // Geometrically similar batches: area ∝ V^(2/3), heat capacity ∝ V, so
 // the time ∝ V^(1/3): eight times the volume takes exactly twice as long
-// (derived from the closed form; DESIGN §5.2, REFERENCES.md).
+// (derived from the closed form of JacketTime).
 func TestCoolingTimeScalesAsCubeRoot(t *testing.T) {
-	rhoCp := 789 * 2440.0 // ethanol, J/(m³·K): 0.789 g/mL × 112.3 J/(mol·K)/46.07 g/mol (REFERENCES.md, from memory)
+	rhoCp := 789 * 2440.0 // ethanol, J/(m³·K): 0.789 g/mL × 112.3 J/(mol·K)/46.07 g/mol (CRC Handbook of Chemistry and Physics, from memory)
 	tm := func(V float64) float64 {
 		return JacketTime(rhoCp*V, 200, WettedArea(AreaFactorCylinder, V), 348.15, 273.15, 263.15)
 	}

@@ -94,7 +94,7 @@ func TestTypicalRecovery(t *testing.T) {
 	// Naphthalene from methanol, Ward, H. L. J. Phys. Chem. 1926, 30, 1316
 	// (IUPAC-NIST Solubility Database, confirmed): x = 0.0107 at 274.0 K and
 	// 0.052 at 317.1 K, converted to g/L of methanol with ρ = 0.791 g/mL
-	// (REFERENCES.md, from memory) and M = 32.04 g/mol.
+	// (CRC Handbook of Chemistry and Physics, from memory) and M = 32.04 g/mol.
 	n := solubility.MolarDensity([]float64{1}, []float64{791}, []float64{0.032042})
 	sLo := solubility.MassPerVolume(0.0107, n, 0.12817)
 	sHi := solubility.MassPerVolume(0.052, n, 0.12817)

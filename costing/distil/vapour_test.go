@@ -81,7 +81,7 @@ func TestSolventsAtOperatingTemperatures(t *testing.T) {
 		{"ethanol", 78.29},  // Source: CRC Handbook, 78.29 °C (from memory)
 		{"n-heptane", 98.4}, // Source: CRC Handbook, 98.4 °C (from memory)
 		{"water", 99.974},   // Source: IAPWS-IF97, Tsat(101.325 kPa) = 99.974 °C (from memory; eq. 31)
-		{"acetone", 56.2},   // Source: National Academies 2016, Appendix D, 56.2 °C (confirmed, REFERENCES.md)
+		{"acetone", 56.2},   // Source: National Academies of Sciences, "Chemical Laboratory Safety and Security", 2016, Appendix D, 56.2 °C
 	}
 	for _, c := range bp {
 		T, _ := builtin(t, c.id).BoilingPointAt(101325)
@@ -93,7 +93,7 @@ func TestSolventsAtOperatingTemperatures(t *testing.T) {
 
 // A compound described only by its boiling point and ΔHvap gets its vapour
 // pressure from Clausius–Clapeyron. Toluene described that way (bp 110.6 °C,
-// ΔHvap 33.18 kJ/mol, REFERENCES.md from memory) against the handbook's
+// ΔHvap 33.18 kJ/mol, CRC Handbook, from memory) against the handbook's
 // 556 mmHg at 100 °C and 291 mmHg at 80 °C (CRC Handbook vapour-pressure
 // table, from memory; the Antoine set gives 556.4 and 291.2). Tolerances:
 // 3 % at 10 K below the boiling point (package solvent finds 1–2.5 % there
@@ -132,11 +132,12 @@ distillation:
 
 // ΔHvap when the scenario gives none. Trouton's rule (88 J/(mol K) × Tb) for
 // n-heptane described by its boiling point, against the handbook 31.77
-// kJ/mol (Source: CRC Handbook via REFERENCES.md, from memory): within the
+// kJ/mol (Source: CRC Handbook, from memory): within the
 // rule's ±10 % for a non-associating liquid. The Antoine-slope estimate for
 // toluene described by its NIST Antoine set (A 4.07827, B 1343.943,
-// C −53.773, 308.52–384.66 K; Source: NIST WebBook via REFERENCES.md, from
-// memory) against the handbook 33.18 kJ/mol (same source): within 2 %, as
+// C −53.773, 308.52–384.66 K; Source: NIST Chemistry WebBook, from
+// memory) against the handbook 33.18 kJ/mol (CRC Handbook, from memory):
+// within 2 %, as
 // package solvent finds for ΔZ = 0.96.
 func TestEnthalpyEstimates(t *testing.T) {
 	y := `name: t

@@ -46,8 +46,9 @@ func TestLoadCrystallization(t *testing.T) {
 	if len(c.Mix) != 1 || c.Mix[0].Solvent != "ethanol" || c.AntiSolvent != "" {
 		t.Errorf("mix %v", c.Mix)
 	}
-	// Ethanol boils at 78.5 °C (REFERENCES.md, National Academies 2016
-	// table, confirmed); the built-in value is used as is.
+	// Ethanol boils at 78.5 °C (National Academies of Sciences, "Chemical
+	// Laboratory Safety and Security", 2016, Appendix D); the built-in
+	// value is used as is.
 	eth, _ := s.Solvents.Find("ethanol")
 	if c.BoilingK != eth.BoilingPoint.V || math.Abs(c.BoilingK-351.65) > 0.5 {
 		t.Errorf("boiling point %.2f K", c.BoilingK)

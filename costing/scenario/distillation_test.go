@@ -74,7 +74,7 @@ func TestDistillationGood(t *testing.T) {
 	}
 	// An Antoine-described compound without a boiling point gets one from
 	// the constants: toluene's NIST set (A 4.07827, B 1343.943, C −53.773;
-	// REFERENCES.md, from memory) gives 110.6 °C (CRC, from memory), 0.5 K.
+	// NIST Chemistry WebBook, from memory) gives 110.6 °C (CRC, from memory), 0.5 K.
 	y := strings.Replace(goodDistil, "    solvent: toluene\n", "    antoine: {a: 4.07827, b: 1343.943, c: -53.773, t_min: \"308.52 K\", t_max: \"384.66 K\"}\n", 1)
 	s, err = Load(strings.NewReader(y), "d.yaml")
 	if err != nil {

@@ -58,7 +58,8 @@ type Demand struct {
 // WasteClass is a disposal class, priced per kilogram.
 type WasteClass string
 
-// Waste classes (DESIGN §5.6).
+// Waste classes, for costing only; classification is the site EHS
+// office's call (DEVELOPERS.md, "Cautions").
 const (
 	NonHalogenated WasteClass = "non-halogenated solvent"
 	Halogenated    WasteClass = "halogenated solvent"

@@ -14,8 +14,8 @@ import "math"
 // it is good to a few per cent for rigid aromatic solids within some 50 K
 // of the melting point and degrades further below (Prausnitz, J. M.;
 // Lichtenthaler, R. N.; de Azevedo, E. G. "Molecular Thermodynamics of
-// Fluid-Phase Equilibria", 3rd ed., 1999, §11.2 — from memory; equation
-// as in REFERENCES.md). At and above T_m the solute is a liquid, miscible
+// Fluid-Phase Equilibria", 3rd ed., 1999, §11.2 — from memory). At and
+// above T_m the solute is a liquid, miscible
 // in the ideal model: the result is 1.
 func IdealMoleFraction(T, Tm, Hfus float64) float64 {
 	if T >= Tm {

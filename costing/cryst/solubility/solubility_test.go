@@ -94,7 +94,7 @@ func TestMassPerVolume(t *testing.T) {
 	}
 	// A 1 : 1 mixture by volume of two solvents: n is the volume-weighted
 	// sum (ideal mixing; derived): ethanol 789 kg/m³, 46.07 g/mol and water
-	// 998.2 kg/m³, 18.015 g/mol (REFERENCES.md, from memory).
+	// 998.2 kg/m³, 18.015 g/mol (CRC Handbook of Chemistry and Physics, from memory).
 	mix := MolarDensity([]float64{0.5, 0.5}, []float64{789, 998.2}, []float64{0.04607, 0.018015})
 	if want := 0.5*789/0.04607 + 0.5*998.2/0.018015; relErr(mix, want) > 1e-12 {
 		t.Errorf("mixture molar density %v, want %v", mix, want)

@@ -110,7 +110,7 @@ func chartParts(f *excelize.File) map[string]bool {
 // logXAxes makes the X axis of each named scatter chart part logarithmic
 // (base 10) and its X values numbers, rewriting the part in the package
 // before it is written: excelize v2.11.1 drops ChartAxis.LogBase for a
-// scatter chart's X axis and refers to the X values as text (DESIGN §9).
+// scatter chart's X axis and refers to the X values as text (DEVELOPERS.md, "Library notes").
 func logXAxes(f *excelize.File, parts []string) error {
 	sort.Strings(parts)
 	for _, p := range parts {

@@ -19,10 +19,11 @@ import (
 // separations with moderate resolution", J. Org. Chem. 1978, 43, 2923,
 // Table 1 (20 mm column, 200 mL eluent and 10 mL fractions for a few
 // hundred mg at ΔRf ≥ 0.2; loads scale with d²), with silica : sample
-// ≈ 60 : 1 (derived in REFERENCES.md from the same table), and every
+// ≈ 60 : 1 (derived from the same table for a 15 cm bed packed at
+// 0.5 g/mL), and every
 // ledger amount and total is a hand computation, written out beside it:
 // amount = qty × unit price rounded half away from zero to the cent
-// (DESIGN §5.4).
+// (DEVELOPERS.md, "Money").
 
 // Solvent densities at 20 °C used to turn eluent volumes into waste masses:
 // ethyl acetate 0.902 g/mL, n-heptane 0.684 g/mL (CRC Handbook of Chemistry

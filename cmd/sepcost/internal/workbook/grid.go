@@ -71,7 +71,7 @@ func (g *grid) text(row, col int, s string, style int) {
 }
 
 // num writes a number, or the text "n/a" when v is NaN or infinite: such a
-// value must never reach a cell (DESIGN §9).
+// value must never reach a cell (DEVELOPERS.md, "Library notes").
 func (g *grid) num(row, col int, v float64, style int) {
 	if !finite(v) {
 		g.set(row, col, cell{value: "n/a", style: style})
@@ -211,7 +211,7 @@ func (g *grid) fitWidths(st *styles) map[int]float64 {
 }
 
 // flush writes the grid to its sheet with a StreamWriter: widths and panes
-// first, rows in ascending order, merges, then one Flush (DESIGN §9).
+// first, rows in ascending order, merges, then one Flush (DEVELOPERS.md, "Library notes").
 // With omit set, formulas are written without their cached values.
 func (g *grid) flush(f *excelize.File, st *styles, omit bool, title string) error {
 	// Before the StreamWriter: it copies the sheet's page setup and

@@ -123,7 +123,7 @@ func writeScaleUp(f *excelize.File, st *styles, r *scale.Report, m money, method
 		return err
 	}
 
-	// Charts before the rows and before Flush (DESIGN §9).
+	// Charts before the rows and before Flush (DEVELOPERS.md, "Library notes").
 	n := len(r.MassesKg)
 	block := func(j int) (first, last int) { first = suFirstRow + j*n; return first, first + n - 1 }
 	if err := addScaleUpCharts(f, r, m, widths, block, plotted, points, positive, bands); err != nil {

@@ -113,7 +113,7 @@ func TestScaleUpChartsLogAxes(t *testing.T) {
 			b, _ := render(t, r, Options{})
 			parts := zipParts(t, b)
 			charts := scaleUpCharts(t, parts)
-			// Source: DESIGN §4, the Scale-up sheet's charts.
+			// Source: DEVELOPERS.md, "The workbook's layout": the Scale-up sheet's charts.
 			if len(charts) != 3 {
 				t.Fatalf("%d charts on the Scale-up sheet, want 3 (cost per gram, waste per gram, hours)", len(charts))
 			}
@@ -275,7 +275,7 @@ func TestLogXAxis(t *testing.T) {
 			t.Log("excelize now writes the X axis logarithm itself; logXAxis keeps it and adds none")
 		}
 		if pos == "l" && !logRe.MatchString(ax[1]) {
-			t.Error("excelize wrote no logBase on the Y axis; DESIGN §9 says YAxis.LogBase works")
+			t.Error("excelize wrote no logBase on the Y axis; DEVELOPERS.md, Library notes, says YAxis.LogBase works")
 		}
 	}
 	for name, in := range map[string][]byte{"excelize": raw, "prefixed": []byte(prefixed)} {
@@ -342,7 +342,7 @@ func TestDetailSheetsLimit(t *testing.T) {
 		sweep bool
 		want  string
 	}{
-		// Source: DESIGN §4, the sheet order; the detail limit is this
+		// Source: DEVELOPERS.md, "The workbook's layout": the sheet order; the detail limit is this
 		// package's choice (MaxDetailMasses).
 		{MaxDetailMasses, true, "Summary,Decision,Inputs,Prices,Chromatography,Crystallization,Scale-up,Waste,Sources"},
 		{MaxDetailMasses + 1, true, "Summary,Decision,Inputs,Prices,Scale-up,Waste,Sources"},
@@ -369,7 +369,7 @@ func TestDetailSheetsLimit(t *testing.T) {
 // TestScaleUpTable reads the Scale-up table of a sweep without detail
 // sheets back and compares it with the report, row by row, and
 // recalculates every total and cost per gram with excelize's calculator
-// (DESIGN §9: a second oracle beside LibreOffice). Totals must equal the
+// (a second oracle beside LibreOffice; DEVELOPERS.md, "Library notes"). Totals must equal the
 // ledger to the cent.
 func TestScaleUpTable(t *testing.T) {
 	r := syntheticSweep(30, 2)
@@ -472,7 +472,7 @@ func TestScaleUpNoNaN(t *testing.T) {
 		}
 		f := open(t, b)
 		k := suFirstRow + 3
-		// Source: DESIGN §9 (NaN and ±Inf never reach a cell); a column a
+		// Source: DEVELOPERS.md, "Library notes" (NaN and ±Inf never reach a cell); a column a
 		// chart plots is left empty, a gap, the others say "n/a".
 		for col, want := range map[int]string{suEFactor: "", suPMI: "n/a", suElapsed: "", suSolvent: "n/a"} {
 			if v, _ := f.GetCellValue(sheetScaleUp, cellName(col, k)); v != want {

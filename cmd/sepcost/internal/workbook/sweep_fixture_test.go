@@ -100,7 +100,7 @@ func sweepReport() *scale.Report {
 // crude; 8 % of the product lost), with hours growing as m^0.6 and m^0.3
 // (fixture choices, no source). The quantities are rounded as the ledger
 // rounds them and every amount follows the ledger's rule, qty × unit
-// price rounded half away from zero to the cent (DESIGN §5.4), which
+// price rounded half away from zero to the cent (DEVELOPERS.md, "Money"), which
 // Write checks; the workbook's formulas are checked against these amounts
 // by LibreOffice and by excelize's calculator.
 func syntheticSweep(n, methods int) *scale.Report {

@@ -10,7 +10,7 @@ import (
 	"sepcost/scale"
 )
 
-// sheetUncertainty follows Waste: DESIGN §4 lists Scale-up, Waste,
+// sheetUncertainty follows Waste: the sheet order is Scale-up, Waste,
 // Uncertainty, Sources.
 const sheetUncertainty = "Uncertainty"
 

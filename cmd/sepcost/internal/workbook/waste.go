@@ -50,7 +50,7 @@ const (
 	wRulesWidth       = 14.0
 )
 
-// wasteCostingOnly opens the caution under the stream table (DESIGN §5.6, §7).
+// wasteCostingOnly opens the caution under the stream table (DEVELOPERS.md, "Cautions").
 const wasteCostingOnly = "Caution: the waste classes here serve costing only."
 
 // wasteCautionPlain is the rest of the caution when the report suggests no codes.

@@ -212,7 +212,7 @@ func TestWasteCodes(t *testing.T) {
 	}
 
 	// The caution: classification is the site EHS office's decision
-	// (DESIGN §5.6, §7).
+	// (DEVELOPERS.md, "Cautions").
 	found := false
 	for _, row := range rows {
 		if c := at(row, 1); strings.HasPrefix(c, "Caution") {
@@ -413,7 +413,7 @@ func handUncertainty() *scale.Uncertainty {
 	}}
 }
 
-// TestUncertaintySheet checks the sheet's place (DESIGN §4: Scale-up,
+// TestUncertaintySheet checks the sheet's place (Scale-up,
 // Waste, Uncertainty, Sources), its bands, the reading of a tie and the
 // spreads drawn with their statement of provenance.
 func TestUncertaintySheet(t *testing.T) {
@@ -543,7 +543,7 @@ func TestRowHeightLimit(t *testing.T) {
 }
 
 // TestNoNaNInNewSheets: NaN and infinite green metrics and quantiles are
-// written as "n/a" (DESIGN §9).
+// written as "n/a" (DEVELOPERS.md, "Library notes").
 func TestNoNaNInNewSheets(t *testing.T) {
 	r := twoMethodReport()
 	r.Results[1][0].Metrics = &green.Metrics{EFactor: math.NaN(), PMI: math.Inf(1), ProductKg: 0.01472, IsolatedKg: 0.01472}

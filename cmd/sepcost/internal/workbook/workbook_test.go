@@ -22,7 +22,7 @@ import (
 
 var update = flag.Bool("update", false, "rewrite the golden files in testdata/golden")
 
-// goldenDir is /work/main/testdata/golden seen from this package.
+// goldenDir is the repository's testdata/golden seen from this package.
 var goldenDir = filepath.Join("..", "..", "..", "..", "testdata", "golden")
 
 // render builds and writes a report, returning the file and where the money cells are.
@@ -143,7 +143,7 @@ func onlySheets(d string, names []string) string {
 }
 
 // TestFixtureIsHandComputed checks the fixture's hand computation against
-// the rule it follows (DESIGN §5.4): amount = qty × unit price rounded half
+// the rule it follows (DEVELOPERS.md, "Money"): amount = qty × unit price rounded half
 // away from zero to the cent, total = sum of the rounded amounts.
 func TestFixtureIsHandComputed(t *testing.T) {
 	r := twoMethodReport()
@@ -320,7 +320,7 @@ func TestTotalsFoundByLabel(t *testing.T) {
 }
 
 // TestCalcCellValue recalculates every money cell with excelize's own
-// formula engine, a second oracle beside LibreOffice (DESIGN §9).
+// formula engine, a second oracle beside LibreOffice (DEVELOPERS.md, "Library notes").
 func TestCalcCellValue(t *testing.T) {
 	r := twoMethodReport()
 	b, lay := render(t, r, Options{})
@@ -343,7 +343,7 @@ func TestCalcCellValue(t *testing.T) {
 // TestLibreOfficeRecalculation writes the workbooks without cached values,
 // lets LibreOffice calculate and save them, and compares: every money cell
 // with the ledger to the cent, and every other formula with the value the
-// writer caches. LibreOffice keeps cached values as written (DESIGN §9),
+// writer caches. LibreOffice keeps cached values as written (DEVELOPERS.md, "Library notes"),
 // hence the variant without them.
 func TestLibreOfficeRecalculation(t *testing.T) {
 	if testing.Short() {
@@ -459,7 +459,7 @@ func TestDeterministic(t *testing.T) {
 var sumRange = regexp.MustCompile(`([A-Z]+)(\d+):([A-Z]+)(\d+)`)
 
 // TestNoNaN: a report with NaN and infinite values writes "n/a", never NaN
-// or Inf, and no SUM runs over an "n/a" cell (DESIGN §9).
+// or Inf, and no SUM runs over an "n/a" cell (DEVELOPERS.md, "Library notes").
 func TestNoNaN(t *testing.T) {
 	r := fixtureReport()
 	u := &r.Results[1][0].Usage

@@ -1,5 +1,5 @@
 // Package workbook writes a scale.Report as a spreadsheet workbook with live
-// formulas (DESIGN §4): Summary, Inputs, Prices, one sheet per method,
+// formulas: Summary, Inputs, Prices, one sheet per method,
 // Scale-up (sweeps only: the table and native charts against batch mass on
 // logarithmic axes), Waste (streams with their suggested codes, green
 // metrics, solvents), Uncertainty (when the report was sampled) and
@@ -15,13 +15,13 @@
 //
 // where Qty is the ledger quantity in the price item's unit, Prices!$C$n is
 // the unit price of price-table row n − 2 and places is the currency's
-// minor unit. This is the ledger's own rule (DESIGN §5.4); ROUND, like
-// decimal's Round, rounds half away from zero (DESIGN §9), so the sheet
+// minor unit. This is the ledger's own rule (DEVELOPERS.md, "Money"); ROUND, like
+// decimal's Round, rounds half away from zero (DEVELOPERS.md, "Library notes"), so the sheet
 // reconciles with the ledger to the cent.
 //
 // Only this package imports excelize. Formula cells are written with the
 // StreamWriter because excelize's SetCellValue family drops a cell's
-// formula (DESIGN §9).
+// formula (DEVELOPERS.md, "Library notes").
 package workbook
 
 import (
@@ -43,7 +43,7 @@ import (
 type Options struct {
 	// OmitCachedValues writes formulas without their cached results, so
 	// that a spreadsheet program must calculate them. LibreOffice keeps a
-	// cached value as written (DESIGN §9); the recalculation test needs
+	// cached value as written (DEVELOPERS.md, "Library notes"); the recalculation test needs
 	// this variant.
 	OmitCachedValues bool
 }
@@ -491,7 +491,7 @@ func knownGroup(g usage.Group) bool {
 }
 
 // amountFollowsRule reports whether amount = qty × price rounded half away
-// from zero to places (DESIGN §5.4). Where the coefficients are small, as
+// from zero to places (DEVELOPERS.md, "Money"). Where the coefficients are small, as
 // a ledger's are, it works in int64 (q·p exact, then one rounding), which
 // is what decimal's Mul and Round do; otherwise it uses them on the
 // decimals qd, pd and ad.
