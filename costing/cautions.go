@@ -4,8 +4,6 @@ import (
 	"fmt"
 	"sort"
 	"strings"
-
-	"sepcost/costing/distil"
 )
 
 // Cautions lists the safety cautions that apply to the plan's methods and
@@ -40,19 +38,9 @@ func (p *Plan) Cautions() []string {
 	if len(halogenated) > 0 {
 		out = append(out, "Halogenated solvents: "+strings.Join(halogenated, ", ")+". Toxic by inhalation; handle in a fume hood with suitable gloves (dichloromethane passes through nitrile quickly) and collect separately from non-halogenated waste.")
 	}
-	if p.Scenario.Chromatography != nil {
-		out = append(out,
-			"Silica gel dust: weigh and pour dry silica in a fume hood or ventilated enclosure and wear respiratory protection as your site requires; slurry packing keeps dust down.",
-			"Pressurised glass columns: use only columns and adaptors rated for the pressure, keep pressure low (flash columns run at a few tenths of a bar), fit a relief or use a regulated supply, and shield large glass columns.",
-			"Rotary evaporation works glass under vacuum: inspect flasks for cracks and stars, use a shield or netting on large flasks, and vent slowly.")
+	for _, e := range Registry {
+		out = append(out, e.Cautions(p.Scenario)...)
 	}
-	if p.Scenario.Crystallization != nil {
-		out = append(out,
-			"Hot recrystallization: heat flammable solvents only in a bath or heating mantle, never over an open flame, to reflux only with a condenser fitted, and never in a closed vessel: a sealed flask or a reactor without a vent or rated pressure relief can burst as the solvent's vapour pressure rises.",
-			"Jacketed reactors: keep within the vessel's rated pressure and temperature, check the relief device and the jacket fluid's limits, and cool under control; a crash-cool of a supersaturated solution can foul the jacket or entrain solids.",
-			"Vacuum filtration: use heavy-walled, clamped filter flasks with a trap; vent slowly. Dry solvent-wet solids only in an oven or dryer rated for solvent vapour.")
-	}
-	out = append(out, distil.Cautions(p.Scenario)...)
 	out = append(out, "Waste classification, waste codes, exposure limits and disposal follow local regulations and your site's licensed environmental-health-and-safety practice; the figures here are estimates to plan with, not a permit.")
 	return out
 }

@@ -11,9 +11,6 @@ import (
 	"sort"
 	"sync"
 
-	"sepcost/costing/chrom"
-	"sepcost/costing/cryst"
-	"sepcost/costing/distil"
 	"sepcost/costing/equipment"
 	"sepcost/costing/green"
 	"sepcost/costing/ledger"
@@ -27,6 +24,7 @@ import (
 // Method is one purification method ready to run at any batch mass.
 type Method struct {
 	Name string
+	Use  green.Use // what its solvents do (Entry.Use)
 	Run  func(crudeKg float64) usage.Usage
 	// Choices, when set, lists the candidate plans at a mass (loadings,
 	// equipment); the plan prices them and keeps the cheapest per gram.
@@ -102,9 +100,16 @@ func PrepareWith(sc *scenario.Scenario, opt Options) (*Plan, error) {
 	if eq == nil {
 		eq = equipment.Default()
 	}
-	coef := source.NewSet(chrom.Defaults(), cryst.Defaults(), distil.Defaults())
+	defaults := make([][]source.Coefficient, len(Registry))
+	calibrated := map[string]bool{}
+	for i, e := range Registry {
+		defaults[i] = e.Defaults()
+		for _, k := range e.Calibrated {
+			calibrated[k] = true
+		}
+	}
+	coef := source.NewSet(defaults...)
 	var problems scenario.Problems
-	calibrated := map[string]bool{chrom.KeyQs: true}
 	apply := func(later bool) {
 		for _, s := range sc.Settings {
 			if calibrated[s.Key] != later {
@@ -124,36 +129,40 @@ func PrepareWith(sc *scenario.Scenario, opt Options) (*Plan, error) {
 		}
 	}
 	apply(false)
-	chrom.AddCalibration(coef)
+	for _, e := range Registry {
+		if e.Calibrate != nil {
+			e.Calibrate(coef)
+		}
+	}
 	apply(true)
 	if len(problems) > 0 {
 		return nil, problems
 	}
-	if sc.Chromatography == nil && sc.Crystallization == nil && sc.Distillation == nil {
-		return nil, &scenario.Problem{File: sc.File, Msg: "describes no purification method; add a chromatography:, crystallization: or distillation: section (see `sepcost init`)"}
+	described := false
+	for _, e := range Registry {
+		described = described || e.Described(sc)
+	}
+	if !described {
+		return nil, &scenario.Problem{File: sc.File, Msg: "describes no purification method; add " + sectionList() + " (see `sepcost init`)"}
 	}
 	return newPlan(sc, coef, eq), nil
 }
 
-// newPlan registers the methods on a settled coefficient set.
+// newPlan registers the methods of the Registry on a settled coefficient
+// set. Each model reads and checks its coefficients once here, not at
+// every run. A method the scenario does not describe stays in the plan as
+// "not assessed", with the reason, so that no report silently drops it.
 func newPlan(sc *scenario.Scenario, coef source.Set, eq *equipment.Table) *Plan {
 	p := &Plan{Scenario: sc, Coef: coef, Equipment: eq}
-	p.add(chrom.Method, sc.Chromatography != nil, nil)
-	if sc.Chromatography != nil {
-		m := &p.Methods[len(p.Methods)-1]
-		m.Run, m.Choices = chromMethod(sc, coef, eq)
+	for _, e := range Registry {
+		m := Method{Name: e.Name, Use: e.Use}
+		if e.Described(sc) {
+			m.Run, m.Choices = e.Build(sc, coef, eq)
+		} else {
+			m.Run = notAssessed(sc, e.Name)
+		}
+		p.Methods = append(p.Methods, m)
 	}
-	// The crystallization and distillation models read and check their
-	// coefficients once here, not at every run.
-	var crystRun, distilRun func(float64) usage.Usage
-	if sc.Crystallization != nil {
-		crystRun = cryst.New(sc, coef).Run
-	}
-	if sc.Distillation != nil {
-		distilRun = distil.New(sc, coef).Run
-	}
-	p.add(cryst.Method, sc.Crystallization != nil, crystRun)
-	p.add(distil.Method, sc.Distillation != nil, distilRun)
 	return p
 }
 
@@ -203,17 +212,12 @@ func perGramRates(u usage.Usage, r *ledger.Rates) (float64, error) {
 	return total / (u.ProductOutKg * 1000), nil
 }
 
-// add registers a method. A method the scenario does not describe stays in
-// the plan as "not assessed", with the reason, so that no report silently
-// drops it.
-func (p *Plan) add(name string, described bool, run func(float64) usage.Usage) {
-	if !described {
-		run = func(m float64) usage.Usage {
-			return usage.Usage{Method: name, CrudeKg: m, ProductInKg: m * p.Scenario.Purity,
-				Reason: NotAssessed + ": the scenario has no " + name + " section"}
-		}
+// notAssessed is the run of a method the scenario does not describe.
+func notAssessed(sc *scenario.Scenario, name string) func(float64) usage.Usage {
+	return func(m float64) usage.Usage {
+		return usage.Usage{Method: name, CrudeKg: m, ProductInKg: m * sc.Purity,
+			Reason: NotAssessed + ": the scenario has no " + name + " section"}
 	}
-	p.Methods = append(p.Methods, Method{Name: name, Run: run})
 }
 
 // NotAssessed begins the reason of a method the scenario does not describe.
@@ -326,33 +330,11 @@ func (p *Plan) Uses(method, id string) bool {
 
 // methodSolvents lists the solvent ids one method's section names.
 func (p *Plan) methodSolvents(method string) []string {
-	sc := p.Scenario
-	var ids []string
-	switch method {
-	case chrom.Method:
-		if ch := sc.Chromatography; ch != nil {
-			for _, part := range ch.TLCEluent {
-				ids = append(ids, part.Solvent)
-			}
-			for _, st := range ch.Gradient {
-				for _, part := range st.Eluent {
-					ids = append(ids, part.Solvent)
-				}
-			}
-			if ch.LoadingSolvent != "" {
-				ids = append(ids, ch.LoadingSolvent)
-			}
-		}
-	case cryst.Method:
-		if c := sc.Crystallization; c != nil {
-			ids = c.Solvents()
-		}
-	case distil.Method:
-		if d := sc.Distillation; d != nil {
-			ids = d.Solvents()
-		}
+	e, ok := EntryOf(method)
+	if !ok || !e.Described(p.Scenario) {
+		return nil
 	}
-	return ids
+	return e.Solvents(p.Scenario)
 }
 
 // RunOne runs method j at one mass and prices it.

@@ -6,6 +6,7 @@ import (
 	"github.com/shopspring/decimal"
 
 	"sepcost/costing"
+	"sepcost/costing/chrom"
 	"sepcost/costing/green"
 	"sepcost/costing/scenario"
 	"sepcost/costing/usage"
@@ -111,7 +112,7 @@ func classKey(method string, s usage.Stream) string {
 // other methods.
 func eluentBlends(sc *scenario.Scenario, method string, s usage.Stream) []waste.Blend {
 	ch := sc.Chromatography
-	if method != "chromatography" || ch == nil {
+	if method != chrom.Method || ch == nil {
 		return nil
 	}
 	mix := func(name string, m scenario.Mix) waste.Blend {
@@ -153,17 +154,16 @@ func eluentBlends(sc *scenario.Scenario, method string, s usage.Stream) []waste.
 // greenness lists the scenario's solvents with their guide class and the
 // substitutions suggested for the methods that use them.
 func greenness(p *costing.Plan) []SolventGreenness {
-	uses := map[string]green.Use{"chromatography": green.Chromatography, "crystallization": green.Crystallization, "distillation": green.Distillation}
 	var out []SolventGreenness
 	for _, id := range p.SolventsUsed() {
 		g := SolventGreenness{Solvent: id}
 		g.Class, _ = green.Class(id)
 		seen := map[string]bool{}
-		for _, name := range p.MethodNames() {
-			if !p.Uses(name, id) {
+		for _, m := range p.Methods {
+			if !p.Uses(m.Name, id) {
 				continue
 			}
-			for _, s := range green.Substitutes(id, uses[name]) {
+			for _, s := range green.Substitutes(id, m.Use) {
 				if !seen[s.Text] {
 					seen[s.Text] = true
 					g.Suggestions = append(g.Suggestions, s)

@@ -59,6 +59,27 @@ type Chromatography struct {
 	RerunMixed     bool      // mixed fractions are pooled and run once more (else set aside)
 }
 
+// Solvents lists the ids of the solvents the section names, in order:
+// the TLC eluent's, the gradient steps', the loading solvent.
+func (ch *Chromatography) Solvents() []string {
+	if ch == nil {
+		return nil
+	}
+	var ids []string
+	for _, part := range ch.TLCEluent {
+		ids = append(ids, part.Solvent)
+	}
+	for _, st := range ch.Gradient {
+		for _, part := range st.Eluent {
+			ids = append(ids, part.Solvent)
+		}
+	}
+	if ch.LoadingSolvent != "" {
+		ids = append(ids, ch.LoadingSolvent)
+	}
+	return ids
+}
+
 // Setting is one model default the user overrides.
 type Setting struct {
 	Key     string
