@@ -19,6 +19,7 @@ import (
 	"sepcost/costing/source"
 	"sepcost/costing/units"
 	"sepcost/costing/usage"
+	"sepcost/costing/waste"
 )
 
 // Method is one purification method ready to run at any batch mass.
@@ -39,6 +40,8 @@ type Plan struct {
 	// Equipment is the site equipment table the models choose from
 	// (equipment.Default unless Options gave one).
 	Equipment *equipment.Table
+	// WasteSector is the List of Waste chapter the scenario names.
+	WasteSector waste.Sector
 
 	sitePrices sync.Map // *prices.Table → the same with the equipment's charges
 }
@@ -145,7 +148,15 @@ func PrepareWith(sc *scenario.Scenario, opt Options) (*Plan, error) {
 	if !described {
 		return nil, &scenario.Problem{File: sc.File, Msg: "describes no purification method; add " + sectionList() + " (see `sepcost init`)"}
 	}
-	return newPlan(sc, coef, eq), nil
+	p := newPlan(sc, coef, eq)
+	if sc.WasteSector.Text != "" {
+		sec, err := waste.ParseSector(sc.WasteSector.Text)
+		if err != nil {
+			return nil, &scenario.Problem{File: sc.File, Line: sc.WasteSector.Line, Field: "waste_sector", Msg: err.Error()}
+		}
+		p.WasteSector = sec
+	}
+	return p, nil
 }
 
 // newPlan registers the methods of the Registry on a settled coefficient
@@ -168,12 +179,14 @@ func newPlan(sc *scenario.Scenario, coef source.Set, eq *equipment.Table) *Plan 
 
 // WithCoefficients is the same plan on another coefficient set (used to
 // sample the models' uncertainty).
-func (p *Plan) WithCoefficients(coef source.Set) *Plan { return newPlan(p.Scenario, coef, p.Equipment) }
+func (p *Plan) WithCoefficients(coef source.Set) *Plan { return p.With(p.Scenario, coef) }
 
 // With is the plan on a drawn scenario and coefficient set (a Monte Carlo
 // draw: scenario.Scenario.With, source.Set.WithValues).
 func (p *Plan) With(sc *scenario.Scenario, coef source.Set) *Plan {
-	return newPlan(sc, coef, p.Equipment)
+	q := newPlan(sc, coef, p.Equipment)
+	q.WasteSector = p.WasteSector
+	return q
 }
 
 // PerGramLean is method j's cost per gram of purified product at one mass

@@ -2,12 +2,14 @@ package costing
 
 import (
 	"errors"
+	"fmt"
 	"math"
 	"strings"
 	"testing"
 
 	"sepcost/costing/chrom"
 	"sepcost/costing/scenario"
+	"sepcost/costing/waste"
 )
 
 const base = `name: t
@@ -98,6 +100,27 @@ func TestSettingRange(t *testing.T) {
 	}
 	_, err = Prepare(load(t, base+"settings:\n  chromatography.silica_retention_loss: \"0.03 ± 0.05\"\n"))
 	if err == nil || !strings.Contains(err.Error(), "reaches below zero") || !strings.Contains(err.Error(), "settings.chromatography.silica_retention_loss") {
+		t.Errorf("err = %v", err)
+	}
+}
+
+// The waste sector is read as written and resolved here: an unknown one is
+// a problem naming the file, the line and the field, with the valid words
+// (EU List of Waste, Commission Decision 2000/532/EC, chapters 07 05 and
+// 07 07).
+func TestWasteSector(t *testing.T) {
+	t.Parallel()
+	const yaml = "name: t\nmasses: [\"1 g\"]\ncrude: {purity: 0.8}\nwaste_sector: %s\ncrystallization:\n  solvent: ethanol\n  product:\n    solubility: {\"0 C\": \"15 g/L\", \"75 C\": \"160 g/L\"}\n  impurity: {purge_factor: 0.9}\n  dissolve_at: \"75 C\"\n  isolate_at: \"0 C\"\n  target_purity: 0.99\n"
+	p, err := Prepare(load(t, fmt.Sprintf(yaml, "fine chemicals")))
+	if err != nil {
+		t.Fatal(err)
+	}
+	if p.WasteSector != waste.FineChemicals || p.WithCoefficients(p.Coef).WasteSector != waste.FineChemicals {
+		t.Errorf("sector %v, want fine chemicals (07 07)", p.WasteSector)
+	}
+	_, err = Prepare(load(t, fmt.Sprintf(yaml, "dyes")))
+	var pr *scenario.Problem
+	if !errors.As(err, &pr) || pr.Line != 4 || pr.Field != "waste_sector" || !strings.Contains(pr.Msg, "fine chemicals") {
 		t.Errorf("err = %v", err)
 	}
 }

@@ -69,7 +69,7 @@ func EstimateWith(p *costing.Plan, t *prices.Table, massesKg []float64, opt Opti
 	r.Waste = wasteRows(p, massesKg, r.Methods, res)
 	r.Warnings = collectWarnings(r.Methods, massesKg, res)
 	r.Greenness = greenness(p)
-	r.WasteSector = sc.WasteSector.String()
+	r.WasteSector = p.WasteSector.String()
 	r.Coefficients = append(r.Coefficients, waste.Sources()...)
 	r.Coefficients = append(r.Coefficients, green.Sources()...)
 	r.Coefficients = append(r.Coefficients, DecisionCoefficients()...)

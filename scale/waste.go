@@ -55,9 +55,9 @@ func wasteRows(p *costing.Plan, masses []float64, methods []string, results [][]
 				c, ok := memo[key]
 				if !ok {
 					if blends := eluentBlends(sc, name, s); blends != nil {
-						c = waste.ClassifyBlends(s, sc.Solvents, sc.WasteSector, blends)
+						c = waste.ClassifyBlends(s, sc.Solvents, p.WasteSector, blends)
 					} else {
-						c = waste.Classify(s, sc.Solvents, sc.WasteSector)
+						c = waste.Classify(s, sc.Solvents, p.WasteSector)
 					}
 					memo[key] = c
 				}

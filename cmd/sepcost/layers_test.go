@@ -20,7 +20,7 @@ func TestLayering(t *testing.T) {
 	const mod = "sepcost/"
 	// The method models come from the registry; beside them, the
 	// model-level packages they share.
-	models := []string{"costing/cryst/solubility", "costing/waste", "costing/green"}
+	models := []string{"costing/solubility", "costing/waste", "costing/green"}
 	for _, e := range costing.Registry {
 		models = append(models, e.Package)
 	}
@@ -61,6 +61,9 @@ func TestLayering(t *testing.T) {
 			return strings.HasPrefix(p, mod) && p != mod+"costing/units"
 		}, "the base packages import only costing/units"},
 		{func(p string) bool { return p != "cmd/sepcost/internal/workbook" }, excelize, "only the workbook writer imports excelize"},
+		{has("costing/scenario"), func(p string) bool {
+			return strings.HasPrefix(p, mod) && (isModel(strings.TrimPrefix(p, mod)) && p != mod+"costing/solubility" || p == mod+"costing/waste")
+		}, "the scenario reader imports no model and not the waste classifier (solubility curves are shared data)"},
 	}
 	err := filepath.WalkDir(root, func(path string, d fs.DirEntry, err error) error {
 		if err != nil {

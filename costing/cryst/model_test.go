@@ -7,8 +7,8 @@ import (
 	"strings"
 	"testing"
 
-	"sepcost/costing/cryst/solubility"
 	"sepcost/costing/scenario"
+	"sepcost/costing/solubility"
 	"sepcost/costing/source"
 	"sepcost/costing/units"
 	"sepcost/costing/usage"

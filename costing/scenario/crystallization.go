@@ -9,7 +9,7 @@ import (
 
 	"go.yaml.in/yaml/v3"
 
-	"sepcost/costing/cryst/solubility"
+	"sepcost/costing/solubility"
 	"sepcost/costing/solvent"
 	"sepcost/costing/units"
 )

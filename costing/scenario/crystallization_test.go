@@ -5,7 +5,7 @@ import (
 	"strings"
 	"testing"
 
-	"sepcost/costing/cryst/solubility"
+	"sepcost/costing/solubility"
 )
 
 const crystGood = `name: cryst case

@@ -4,7 +4,7 @@ import (
 	"fmt"
 	"math"
 
-	"sepcost/costing/cryst/solubility"
+	"sepcost/costing/solubility"
 	"sepcost/costing/units"
 )
 

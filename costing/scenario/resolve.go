@@ -11,7 +11,6 @@ import (
 
 	"sepcost/costing/solvent"
 	"sepcost/costing/units"
-	"sepcost/costing/waste"
 )
 
 // mixTolerance is how far volume fractions may sum from 1 (rounding in a
@@ -32,12 +31,10 @@ func resolve(c *collector, raw *rawScenario, root *yaml.Node) *Scenario {
 	s.Product = raw.Product.Value
 	s.Notes = raw.Notes.Value
 	if raw.WasteSector.Set {
-		sec, err := waste.ParseSector(raw.WasteSector.Value)
-		if err != nil {
-			c.add(raw.WasteSector.Line, "waste_sector", "%v", err)
-		}
-		s.WasteSector = sec
-		echo("waste_sector", raw.WasteSector, "waste codes from "+sec.String())
+		// Resolved against the waste codes by costing.Prepare: the reader
+		// does not depend on the classifier.
+		s.WasteSector = Written{Text: raw.WasteSector.Value, Line: raw.WasteSector.Line}
+		echo("waste_sector", raw.WasteSector, "the List of Waste chapter for the waste codes")
 	}
 
 	// Solvents first: the eluents may name them.

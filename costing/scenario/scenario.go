@@ -8,7 +8,6 @@ package scenario
 import (
 	"sepcost/costing/solvent"
 	"sepcost/costing/units"
-	"sepcost/costing/waste"
 )
 
 // Part is one solvent of a mixture with its volume fraction.
@@ -80,6 +79,13 @@ func (ch *Chromatography) Solvents() []string {
 	return ids
 }
 
+// Written is a value as the user wrote it, with its line, for a later
+// layer to resolve and to name in a problem.
+type Written struct {
+	Text string
+	Line int
+}
+
 // Setting is one model default the user overrides.
 type Setting struct {
 	Key     string
@@ -106,9 +112,9 @@ type Scenario struct {
 	Settings        []Setting
 	Solvents        *solvent.Book
 	Notes           string
-	WasteSector     waste.Sector // EU List of Waste chapter for the waste codes
-	Inputs          []Input      // every field as written and as understood
-	Measured        []Measured   // measured values with the limits they may lie between
+	WasteSector     Written    // the EU List of Waste chapter for the waste codes, as written (empty: the default)
+	Inputs          []Input    // every field as written and as understood
+	Measured        []Measured // measured values with the limits they may lie between
 }
 
 // Input is one field as written and as understood, for the Inputs sheet.

@@ -3,7 +3,7 @@ package solubility_test
 import (
 	"fmt"
 
-	"sepcost/costing/cryst/solubility"
+	"sepcost/costing/solubility"
 )
 
 // A van 't Hoff line through two handbook points: benzoic acid in water,
