@@ -67,7 +67,7 @@ func describeChoices(ps []priced, currency string) string {
 	}
 	parts := make([]string, len(fs))
 	for i, c := range fs {
-		ratio, _ := c.u.Figure("ratio_used")
+		ratio, _ := c.u.Figure(usage.FigRatioUsed)
 		parts[i] = fmt.Sprintf("%.0f : 1 on %s, %.4g %s/g", ratio.SI, c.u.Equipment, c.perGram, currency)
 	}
 	return strings.Join(parts, "; ")

@@ -47,8 +47,8 @@ func capitalOf(eq *equipment.Table, u usage.Usage) (items []CapitalItem, missing
 			}
 		}
 	}
-	if r, ok := u.Figure("jacketed_reactor"); ok && u.Method == cryst.Method && r.SI == 1 {
-		if f, ok := u.Figure("vessel_volume"); ok {
+	if r, ok := u.Figure(usage.FigJacketedReactor); ok && u.Method == cryst.Method && r.SI == 1 {
+		if f, ok := u.Figure(usage.FigVesselVolume); ok {
 			k := -1
 			for i, it := range eq.Items {
 				if it.Kind == equipment.Reactor && it.Size >= f.SI*(1-1e-9) && (k < 0 || it.Size < eq.Items[k].Size) {

@@ -11,6 +11,7 @@ import (
 	"sepcost/costing"
 	"sepcost/costing/prices"
 	"sepcost/costing/scenario"
+	"sepcost/costing/usage"
 	"sepcost/templates"
 )
 
@@ -176,7 +177,7 @@ func TestCostNeverFallsWhenRunsAdded(t *testing.T) {
 		t.Fatal(err)
 	}
 	for j, name := range r.Methods {
-		key := map[string]string{"chromatography": "runs", "crystallization": "batches"}[name]
+		key := map[string]usage.FigureKey{"chromatography": "runs", "crystallization": "batches"}[name]
 		if key == "" {
 			continue
 		}

@@ -4,6 +4,8 @@ import (
 	"math"
 
 	"github.com/shopspring/decimal"
+
+	"sepcost/costing/usage"
 )
 
 // Row is one method at one mass with the figures a scale-up table shows.
@@ -37,7 +39,7 @@ func (r *Report) Rows() []Row {
 				Total: res.Ledger.Total, PerGram: res.PerGram(), ProductKg: u.ProductOutKg,
 				WasteKg: u.WasteKg(), HoursElapsed: el, HoursAttended: at, Equipment: u.Equipment,
 				SolventL: math.NaN(), EFactor: math.NaN(), PMI: math.NaN()}
-			if f, ok := u.Figure("solvent_total_l"); ok {
+			if f, ok := u.Figure(usage.FigSolventTotal); ok {
 				row.SolventL = f.SI * 1000
 			}
 			metrics(&row, res)

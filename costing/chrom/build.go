@@ -126,6 +126,7 @@ func (p *runPlan) eluent(u *usage.Usage, sc *scenario.Scenario, coef source.Set)
 	collected += elute
 	u.AddFigure("eluent_cv", "eluent per run (column volumes)", p.used.Total()/p.v0, "")
 	u.AddFigure("band_cv", "product band width, front to rear ±2σ (column volumes)", p.bandCV, "")
+	u.MarkDetail("band_cv") // the method sheet and JSON only
 	loadMix := ch.TLCEluent
 	if ch.LoadingSolvent != "" {
 		loadMix = scenario.Mix{{Solvent: ch.LoadingSolvent, Fraction: 1}}

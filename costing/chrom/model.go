@@ -49,8 +49,8 @@ func NewModel(sc *scenario.Scenario, coef source.Set, site Site) *Model {
 func (md *Model) Run(crudeKg float64) usage.Usage {
 	cs := md.Candidates(crudeKg)
 	for _, u := range cs {
-		if r, ok := u.Figure("ratio_used"); ok && u.Feasible {
-			if rule, _ := u.Figure("ratio_rule"); r.SI >= rule.SI*(1-1e-9) {
+		if r, ok := u.Figure(usage.FigRatioUsed); ok && u.Feasible {
+			if rule, _ := u.Figure(usage.FigRatioRule); r.SI >= rule.SI*(1-1e-9) {
 				return u
 			}
 		}
@@ -116,6 +116,7 @@ func (a analysis) header(sc *scenario.Scenario, coef source.Set, crudeKg float64
 	u := usage.New(Method, crudeKg, crudeKg*sc.Purity)
 	fig, note := u.AddFigure, u.Notef
 	fig("k_product", "retention factor k of the product", RetentionFactor(ch.ProductRf), "")
+	u.MarkDetail("k_product") // the method sheet and JSON only
 	fig("cv_product", "product elutes at (column volumes)", ElutionCV(ch.ProductRf), "")
 	fig("elution_volume_difference_cv", "difference in elution volume from the nearest impurity (column volumes)", DeltaCV(ch.ProductRf, ch.ImpurityRf), "")
 	fig("alpha", "separation factor α", a.sep.Alpha(), "")

@@ -27,7 +27,7 @@ chromatography:
   impurity_rf: 0.45
 `
 
-func figure(t *testing.T, u usage.Usage, key string) float64 {
+func figure(t *testing.T, u usage.Usage, key usage.FigureKey) float64 {
 	t.Helper()
 	f, ok := u.Figure(key)
 	if !ok {

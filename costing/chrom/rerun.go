@@ -55,9 +55,9 @@ func mergeRerun(u, v *usage.Usage) {
 	u.ImpurityOutKg += v.ImpurityOutKg
 	u.AddFigure("rerun_crude", "mixed fractions run again (product and impurity)", v.CrudeKg, "g")
 	u.AddFigure("rerun_product", "product recovered from the mixed fractions", gained, "g")
-	if f, ok := v.Figure("impurity_in_product"); ok {
+	if f, ok := v.Figure(usage.FigImpurityInProduct); ok {
 		for i := range u.Figures {
-			if u.Figures[i].Key == "impurity_in_product" {
+			if u.Figures[i].Key == usage.FigImpurityInProduct {
 				u.Figures[i].SI += f.SI
 			}
 		}

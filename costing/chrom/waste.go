@@ -34,9 +34,9 @@ func (p *runPlan) wasteAndDemands(u *usage.Usage, sc *scenario.Scenario, coef so
 		sand = get(KeySandHeight) * area * get(KeySandDensity) * p.runs
 	}
 	tlcPlates := p.plates2 * p.runs
-	u.AddFigure("solvent_total_l", "solvent used", used.Total(), "L")
+	u.AddFigure(usage.FigSolventTotal, "solvent used", used.Total(), "L")
 	for _, id := range used.IDs() {
-		u.AddFigure("solvent:"+id, "solvent: "+id, used[id], "L")
+		u.AddFigure(usage.SolventFigure(id), "solvent: "+id, used[id], "L")
 	}
 	liquid := scenario.Volumes{}
 	for id, v := range used {

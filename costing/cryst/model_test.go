@@ -23,7 +23,7 @@ func load(t *testing.T, y string) *scenario.Scenario {
 	return sc
 }
 
-func figure(t *testing.T, u usage.Usage, key string) float64 {
+func figure(t *testing.T, u usage.Usage, key usage.FigureKey) float64 {
 	t.Helper()
 	f, ok := u.Figure(key)
 	if !ok {
@@ -218,7 +218,7 @@ func TestRunBookkeepingCloses(t *testing.T) {
 		}
 		// Yield never exceeds the mother-liquor bound, pass by pass.
 		for i := 1; ; i++ {
-			f, ok := u.Figure(fmt.Sprintf("yield_pass_%d", i))
+			f, ok := u.Figure(usage.FigureKey(fmt.Sprintf("yield_pass_%d", i)))
 			if !ok {
 				break
 			}

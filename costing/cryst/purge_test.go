@@ -6,6 +6,7 @@ import (
 	"testing"
 
 	"sepcost/costing/source"
+	"sepcost/costing/usage"
 )
 
 // The uptake follows the logarithmic distribution law of Doerner and
@@ -125,8 +126,8 @@ func TestPurgeLimits(t *testing.T) {
 	// below its ceiling (the retained liquor adds to what is inside).
 	n := int(ph)
 	for i := 1; i <= n; i++ {
-		c := figure(t, hard, "ceiling_pass_"+string(rune('0'+i)))
-		pur := figure(t, hard, "purity_pass_"+string(rune('0'+i)))
+		c := figure(t, hard, usage.FigureKey("ceiling_pass_"+string(rune('0'+i))))
+		pur := figure(t, hard, usage.FigureKey("purity_pass_"+string(rune('0'+i))))
 		if !(pur <= c) {
 			t.Errorf("pass %d: purity %g above its ceiling %g", i, pur, c)
 		}

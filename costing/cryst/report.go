@@ -25,9 +25,9 @@ func (m *Model) report(u *usage.Usage, o *outcome) {
 	fig("passes", "recrystallizations (passes)", float64(len(o.purify.Passes)), "")
 	fig("purity_reached", "purity reached", o.purify.Purity, "%")
 	for i, r := range o.purify.Passes {
-		fig(fmt.Sprintf("yield_pass_%d", i+1), fmt.Sprintf("yield of pass %d", i+1), r.Yield(), "%")
-		fig(fmt.Sprintf("purity_pass_%d", i+1), fmt.Sprintf("purity after pass %d", i+1), r.Out.Purity(), "%")
-		fig(fmt.Sprintf("ceiling_pass_%d", i+1), fmt.Sprintf("purity ceiling of pass %d (impurity inside the crystals; no wash does better)", i+1), r.Ceiling(), "%")
+		fig(usage.FigureKey(fmt.Sprintf("yield_pass_%d", i+1)), fmt.Sprintf("yield of pass %d", i+1), r.Yield(), "%")
+		fig(usage.FigureKey(fmt.Sprintf("purity_pass_%d", i+1)), fmt.Sprintf("purity after pass %d", i+1), r.Out.Purity(), "%")
+		fig(usage.FigureKey(fmt.Sprintf("ceiling_pass_%d", i+1)), fmt.Sprintf("purity ceiling of pass %d (impurity inside the crystals; no wash does better)", i+1), r.Ceiling(), "%")
 	}
 	m.passNotes(u, o)
 	if o.purify.Stop != Reached {
@@ -68,9 +68,9 @@ func (m *Model) report(u *usage.Usage, o *outcome) {
 	fig("heat_chilled", "heat removed below room temperature (chiller)", o.chillHeat, "kWh")
 	fig("heat_evaporation", "heat to dry the crystals and concentrate liquor", o.dryHeat+o.evapHeat, "kWh")
 	fig("electricity", "electricity", o.electric, "kWh")
-	fig("solvent_total_l", "solvent used", o.used.Total(), "L")
+	fig(usage.FigSolventTotal, "solvent used", o.used.Total(), "L")
 	for _, id := range o.used.IDs() {
-		fig("solvent:"+id, "solvent: "+id, o.used[id], "L")
+		fig(usage.SolventFigure(id), "solvent: "+id, o.used[id], "L")
 	}
 	fig("wash_total_l", "wash liquid used", o.washVol, "L")
 	fig("screening_hours", "one-time screening and development", m.p.screeningTime, "h")

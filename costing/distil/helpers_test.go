@@ -34,7 +34,7 @@ func load(t *testing.T, y string) *scenario.Scenario {
 
 func coefficients() source.Set { return source.NewSet(Defaults()) }
 
-func figure(t *testing.T, u usage.Usage, key string) float64 {
+func figure(t *testing.T, u usage.Usage, key usage.FigureKey) float64 {
 	t.Helper()
 	f, ok := u.Figure(key)
 	if !ok {

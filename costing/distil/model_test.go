@@ -39,14 +39,14 @@ func TestRunBalances(t *testing.T) {
 			t.Fatalf("%g kg: infeasible: %s", m, u.Reason)
 		}
 		finite(t, u)
-		for _, k := range []string{"head_pressure", "pot_pressure", "pot_temperature", "head_temperature", "alpha", "alpha_top", "alpha_bottom",
+		for _, k := range []usage.FigureKey{"head_pressure", "pot_pressure", "pot_temperature", "head_temperature", "alpha", "alpha_top", "alpha_bottom",
 			"n_min", "r_min", "reflux_used", "stages_needed", "stages_available", "stages_equivalent", "recovery", "product_purity",
 			"loss_forerun", "loss_tails", "loss_holdup", "loss_cold_trap", "boilup_rate", "boilup_time", "heat_input", "condenser_duty", "energy",
 			"solvent_total_l", "still_volume", "batches"} {
 			figure(t, u, k)
 		}
 		losses := 0.0
-		for _, k := range []string{"loss_forerun", "loss_tails", "loss_holdup", "loss_cold_trap"} {
+		for _, k := range []usage.FigureKey{"loss_forerun", "loss_tails", "loss_holdup", "loss_cold_trap"} {
 			losses += figure(t, u, k)
 		}
 		if e := math.Abs(u.ProductOutKg + losses - u.ProductInKg); e > 1e-9*u.ProductInKg {
@@ -276,7 +276,7 @@ distillation:
 			t.Errorf("purity %.6f below target %.6f:\n%s", p, target, y)
 		}
 		losses := 0.0
-		for _, k := range []string{"loss_forerun", "loss_tails", "loss_holdup", "loss_cold_trap"} {
+		for _, k := range []usage.FigureKey{"loss_forerun", "loss_tails", "loss_holdup", "loss_cold_trap"} {
 			losses += figure(t, u, k)
 		}
 		if e := math.Abs(u.ProductOutKg + losses - u.ProductInKg); e > 1e-9*u.ProductInKg {

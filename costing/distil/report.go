@@ -166,9 +166,9 @@ func (m *Model) waste(u *usage.Usage, o *outcome) {
 		w.Components = append(w.Components, usage.Component{Name: rs.ID, Kg: o.rinse * rs.Density.V, Solvent: true})
 		u.Waste = append(u.Waste, w)
 	}
-	u.AddFigure("solvent_total_l", "solvent used (rinse)", o.rinse, "L")
+	u.AddFigure(usage.FigSolventTotal, "solvent used (rinse)", o.rinse, "L")
 	if o.rinse > 0 {
-		u.AddFigure("solvent:"+m.d.RinseSolvent, "solvent: "+m.d.RinseSolvent, o.rinse, "L")
+		u.AddFigure(usage.SolventFigure(m.d.RinseSolvent), "solvent: "+m.d.RinseSolvent, o.rinse, "L")
 	}
 	m.classNote(u, o)
 }

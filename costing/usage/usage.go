@@ -125,10 +125,13 @@ type Activity struct {
 
 // Figure is a physical result worth showing (silica mass, column diameter...).
 type Figure struct {
-	Key   string  // stable identifier for writers and tests
-	Label string  // plain words
-	SI    float64 // value in SI
-	Unit  string  // display unit, "" for plain numbers
+	Key FigureKey // stable identifier for writers and tests (figures.go)
+	// Detail marks a figure for the method sheet and JSON only, left out
+	// of the terminal summary.
+	Detail bool
+	Label  string  // plain words
+	SI     float64 // value in SI
+	Unit   string  // display unit, "" for plain numbers
 }
 
 // Level grades a note.
@@ -206,12 +209,13 @@ func (u *Usage) Notef(l Level, format string, a ...any) {
 	u.Notes = append(u.Notes, Note{Level: l, Text: fmt.Sprintf(format, a...)})
 }
 
-// AddFigure adds a figure; a NaN or infinite value is left out (never shown).
-func (u *Usage) AddFigure(key, label string, si float64, unit string) {
+// AddFigure adds a figure; a NaN or infinite value is left out (never
+// shown). One solvent's volume (SolventFigure) is a detail figure.
+func (u *Usage) AddFigure(key FigureKey, label string, si float64, unit string) {
 	if math.IsNaN(si) || math.IsInf(si, 0) {
 		return
 	}
-	u.Figures = append(u.Figures, Figure{Key: key, Label: label, SI: si, Unit: unit})
+	u.Figures = append(u.Figures, Figure{Key: key, Label: label, SI: si, Unit: unit, Detail: key.PerSolvent()})
 }
 
 // AddCountedDemand adds a material priced by count whose mass is known
@@ -249,13 +253,25 @@ func (u Usage) WasteKg() float64 {
 }
 
 // Figure returns a figure by key.
-func (u Usage) Figure(key string) (Figure, bool) {
+func (u Usage) Figure(key FigureKey) (Figure, bool) {
 	for _, f := range u.Figures {
 		if f.Key == key {
 			return f, true
 		}
 	}
 	return Figure{}, false
+}
+
+// MarkDetail marks figures already added as details: shown on the method
+// sheet and in JSON, left out of the terminal summary.
+func (u *Usage) MarkDetail(keys ...FigureKey) {
+	for i := range u.Figures {
+		for _, k := range keys {
+			if u.Figures[i].Key == k {
+				u.Figures[i].Detail = true
+			}
+		}
+	}
 }
 
 // Display is a figure's value in its display unit.

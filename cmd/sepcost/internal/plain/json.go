@@ -278,7 +278,7 @@ func jsonResult(name string, res costing.Result) jsonMethod {
 	}
 	for _, f := range u.Figures {
 		if v := f.Display(); !math.IsNaN(v) && !math.IsInf(v, 0) {
-			jm.Figures = append(jm.Figures, jsonFigure{f.Key, f.Label, v, f.Unit})
+			jm.Figures = append(jm.Figures, jsonFigure{string(f.Key), f.Label, v, f.Unit})
 		}
 	}
 	for _, l := range res.Ledger.Lines {

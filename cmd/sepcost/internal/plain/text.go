@@ -5,7 +5,6 @@ package plain
 import (
 	"fmt"
 	"io"
-	"strings"
 	"text/tabwriter"
 
 	"github.com/shopspring/decimal"
@@ -229,7 +228,7 @@ func textDetails(ew *errWriter, r *scale.Report) error {
 			}
 			tw := tabwriter.NewWriter(ew, 0, 0, 2, ' ', 0)
 			for _, f := range u.Figures {
-				if strings.HasPrefix(f.Key, "solvent:") || f.Key == "k_product" || f.Key == "band_cv" {
+				if f.Detail {
 					continue
 				}
 				fmt.Fprintf(tw, "  %s\t%s\n", f.Label, units.Readable(f.Display(), f.Unit))

@@ -224,21 +224,21 @@ func (ms *methodSheet) figures() error {
 			continue
 		}
 		for _, f := range res.Usage.Figures {
-			if rows.add(rowKey{a: f.Key}) {
-				first[f.Key] = f
+			if rows.add(rowKey{a: string(f.Key)}) {
+				first[string(f.Key)] = f
 			}
 		}
 	}
 	for _, k := range rows.order {
 		f0 := first[k.a]
 		g.text(ms.row, colTitle, f0.Label, st.text)
-		g.text(ms.row, colLabel, f0.Key, st.text)
+		g.text(ms.row, colLabel, string(f0.Key), st.text)
 		g.text(ms.row, colUnit, unitLabel(f0.Unit), st.text)
 		for i, res := range ms.res {
 			if !ms.feasible(i) {
 				continue
 			}
-			f, ok := res.Usage.Figure(k.a)
+			f, ok := res.Usage.Figure(usage.FigureKey(k.a))
 			if !ok {
 				continue
 			}
@@ -251,7 +251,7 @@ func (ms *methodSheet) figures() error {
 			}
 			c := blockCol(i)
 			g.num(ms.row, c, v, st.figure)
-			if k.a == solventFigure {
+			if usage.FigureKey(k.a) == solventFigure {
 				ms.out[i].hasSolvent = true
 				if l, err := units.To(f.SI, "L"); err == nil && finite(l) && finite(v) {
 					ref := ""
@@ -269,7 +269,7 @@ func (ms *methodSheet) figures() error {
 }
 
 // solventFigure is the usage figure with the total solvent volume, if a model provides it.
-const solventFigure = "solvent_total_l"
+const solventFigure = usage.FigSolventTotal
 
 // ledgerRow is one row of the bill: the same item and label at every mass.
 type ledgerRow struct {
