@@ -9,6 +9,7 @@ import (
 	"sepcost/costing/chrom"
 	"sepcost/costing/prices"
 	"sepcost/costing/scenario"
+	"sepcost/costing/units"
 	"sepcost/costing/usage"
 	"sepcost/scale/campaign"
 )
@@ -140,9 +141,9 @@ func RunCampaign(p *costing.Plan, t *prices.Table, sp *scenario.Campaign) (*Camp
 func (cr *CampaignReport) decide(cur string) {
 	order := append([]campaign.Cost(nil), cr.Costs...)
 	sort.SliceStable(order, func(a, b int) bool { return order[a].PerGram < order[b].PerGram })
-	what := plural(cr.Spec.Batches, "batch", "batches") + " of " + scenario.FormatMass(cr.Spec.BatchKg)
+	what := plural(cr.Spec.Batches, "batch", "batches") + " of " + units.FormatMass(cr.Spec.BatchKg)
 	if cr.Spec.ProductKg > 0 {
-		what = fmt.Sprintf("%s of purified product from batches of %s", scenario.FormatMass(cr.Spec.ProductKg), scenario.FormatMass(cr.Spec.BatchKg))
+		what = fmt.Sprintf("%s of purified product from batches of %s", units.FormatMass(cr.Spec.ProductKg), units.FormatMass(cr.Spec.BatchKg))
 	}
 	if len(order) == 0 {
 		cr.Explanation = append(cr.Explanation, "For the campaign ("+what+") no method is feasible.")
@@ -180,9 +181,9 @@ func (cr *CampaignReport) paybacks() {
 		pb := Payback{Method: c.Method, Against: stay.Method, Batches: n, Never: !ok}
 		cr.Paybacks = append(cr.Paybacks, pb)
 		if ok {
-			cr.Explanation = append(cr.Explanation, fmt.Sprintf("Developing %s pays for itself from %s of %s on: from then on it is at most as dear per gram as staying with %s.", c.Method, plural(n, "batch", "batches"), scenario.FormatMass(c.BatchKg), stay.Method))
+			cr.Explanation = append(cr.Explanation, fmt.Sprintf("Developing %s pays for itself from %s of %s on: from then on it is at most as dear per gram as staying with %s.", c.Method, plural(n, "batch", "batches"), units.FormatMass(c.BatchKg), stay.Method))
 		} else {
-			cr.Explanation = append(cr.Explanation, fmt.Sprintf("Developing %s never pays for itself at %s per batch: each batch costs more per gram than staying with %s.", c.Method, scenario.FormatMass(c.BatchKg), stay.Method))
+			cr.Explanation = append(cr.Explanation, fmt.Sprintf("Developing %s never pays for itself at %s per batch: each batch costs more per gram than staying with %s.", c.Method, units.FormatMass(c.BatchKg), stay.Method))
 		}
 	}
 }
@@ -273,7 +274,7 @@ func (d *Decision) onCampaign(cr *CampaignReport) {
 		// Another batch mass: the campaign informs, the decision stays at
 		// the target mass.
 		lines = append(lines, fmt.Sprintf("The campaign's batches (%s) are not the target mass (%s): the decision below is for one batch at the target mass.",
-			scenario.FormatMass(cr.Spec.BatchKg), scenario.FormatMass(d.TargetKg)))
+			units.FormatMass(cr.Spec.BatchKg), units.FormatMass(d.TargetKg)))
 		d.Explanation = append(lines, d.Explanation...)
 		return
 	}

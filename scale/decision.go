@@ -10,7 +10,6 @@ import (
 
 	"sepcost/costing"
 	"sepcost/costing/prices"
-	"sepcost/costing/scenario"
 	"sepcost/costing/source"
 	"sepcost/costing/units"
 	"sepcost/costing/usage"
@@ -91,7 +90,7 @@ func Decide(p *costing.Plan, t *prices.Table, targetKg float64) (*Decision, erro
 		}
 		d.Drivers = append(d.Drivers, topDrivers(name, r, 3)...)
 	}
-	mass := scenario.FormatMass(targetKg)
+	mass := units.FormatMass(targetKg)
 	cur := t.Currency
 	// The one definition of cheapest (cheapest.go): per gram of purified product.
 	var cands []cand

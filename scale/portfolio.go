@@ -495,9 +495,9 @@ func costRow(p *costing.Plan, row PlanRow, t *prices.Table, charged map[string]b
 	}
 	if best == nil {
 		if line.Forced {
-			return line, fmt.Errorf("%s is not feasible for %s at %s: %s", row.Method, p.Scenario.Name, scenario.FormatMass(row.MassKg), strings.Join(reasons, "; "))
+			return line, fmt.Errorf("%s is not feasible for %s at %s: %s", row.Method, p.Scenario.Name, units.FormatMass(row.MassKg), strings.Join(reasons, "; "))
 		}
-		return line, fmt.Errorf("no method is feasible for %s at %s", p.Scenario.Name, scenario.FormatMass(row.MassKg))
+		return line, fmt.Errorf("no method is feasible for %s at %s", p.Scenario.Name, units.FormatMass(row.MassKg))
 	}
 	res, err := p.RunOne(best.j, row.MassKg, t)
 	if err != nil {

@@ -4,7 +4,7 @@ import (
 	"fmt"
 	"regexp"
 
-	"sepcost/costing/scenario"
+	"sepcost/costing/units"
 	"sepcost/costing/usage"
 )
 
@@ -59,9 +59,9 @@ func (w Warning) Where() string {
 	case 0:
 		return ""
 	case 1:
-		return "at " + scenario.FormatMass(w.MassesKg[0])
+		return "at " + units.FormatMass(w.MassesKg[0])
 	}
-	return fmt.Sprintf("at %d masses, %s to %s", n, scenario.FormatMass(w.MassesKg[0]), scenario.FormatMass(w.MassesKg[n-1]))
+	return fmt.Sprintf("at %d masses, %s to %s", n, units.FormatMass(w.MassesKg[0]), units.FormatMass(w.MassesKg[n-1]))
 }
 
 // Line is the warning in one line: "chromatography at 5 kg: The batch
@@ -69,7 +69,7 @@ func (w Warning) Where() string {
 func (w Warning) Line() string {
 	s := w.Method + " " + w.Where() + ": " + w.Text
 	if len(w.MassesKg) > 1 {
-		s += " (figures at " + scenario.FormatMass(w.MassesKg[0]) + ")"
+		s += " (figures at " + units.FormatMass(w.MassesKg[0]) + ")"
 	}
 	return s
 }

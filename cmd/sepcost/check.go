@@ -12,6 +12,7 @@ import (
 	"sepcost/costing"
 	"sepcost/costing/prices"
 	"sepcost/costing/scenario"
+	"sepcost/costing/units"
 	"sepcost/costing/usage"
 	"sepcost/scale"
 )
@@ -96,14 +97,14 @@ func runCheck(_ context.Context, opts *checkOptions, stdout io.Writer) error {
 			u := results[i][j].Usage
 			switch {
 			case !u.Feasible && strings.HasPrefix(u.Reason, costing.NotAssessed):
-				fmt.Fprintf(stdout, "%s, %s: %s\n", scenario.FormatMass(m), name, u.Reason)
+				fmt.Fprintf(stdout, "%s, %s: %s\n", units.FormatMass(m), name, u.Reason)
 			case !u.Feasible:
-				fmt.Fprintf(stdout, "%s, %s: not feasible: %s\n", scenario.FormatMass(m), name, u.Reason)
+				fmt.Fprintf(stdout, "%s, %s: not feasible: %s\n", units.FormatMass(m), name, u.Reason)
 				warned++
 			}
 			for _, note := range u.Notes {
 				if note.Level == usage.Warning {
-					fmt.Fprintf(stdout, "%s, %s: warning: %s\n", scenario.FormatMass(m), name, note.Text)
+					fmt.Fprintf(stdout, "%s, %s: warning: %s\n", units.FormatMass(m), name, note.Text)
 					warned++
 				}
 			}

@@ -6,6 +6,7 @@ import (
 
 	"sepcost/costing/scenario"
 	"sepcost/costing/source"
+	"sepcost/costing/units"
 	"sepcost/costing/usage"
 )
 
@@ -87,7 +88,7 @@ func (p *runPlan) equipmentFigures(u *usage.Usage, coef source.Set) {
 	fig("load_factor", "load over the bed's capacity (crude / (q_s · silica))", p.crudeRun/(coef.Get(KeyQs)*e.silicaRun), "")
 	fig("column_volume", "column volume", p.v0, "mL")
 	if e.runs > 1 {
-		u.Notef(usage.RepeatLevel(e.runs), "The batch needs %.3g kg of silica, more than the largest %s holds: %d runs of %s of crude each.%s", u.CrudeKg*p.ratio, kindWord(e), e.runs, scenario.FormatMass(p.crudeRun), impractical(e.runs, kindWord(e)+" runs"))
+		u.Notef(usage.RepeatLevel(e.runs), "The batch needs %.3g kg of silica, more than the largest %s holds: %d runs of %s of crude each.%s", u.CrudeKg*p.ratio, kindWord(e), e.runs, units.FormatMass(p.crudeRun), impractical(e.runs, kindWord(e)+" runs"))
 	}
 	if e.diameter > 0.3 && e.cartridge == nil {
 		u.Notef(usage.Caution, "A %.0f mm column runs %.0f L/min of flammable eluent: bond and earth the column, lines and receivers against static charge, stay within the column's pressure rating, and have the set-up reviewed under your site's process-safety rules.", e.diameter*1000, coef.Get(KeyFrontVelocity)*math.Pi*e.diameter*e.diameter/4*60000)

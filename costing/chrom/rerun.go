@@ -3,6 +3,7 @@ package chrom
 import (
 	"sepcost/costing/scenario"
 	"sepcost/costing/source"
+	"sepcost/costing/units"
 	"sepcost/costing/usage"
 )
 
@@ -40,7 +41,7 @@ func (p *runPlan) rerun(u *usage.Usage, a analysis, sc *scenario.Scenario, coef 
 	v := usage.New(Method, crude2, mp)
 	build(&v, a2, &sc2, coef, site, *e2, p.ratio)
 	if !v.Feasible {
-		u.Notef(usage.Info, "The mixed fractions (%s of product) cannot be cut to the purity asked on a second run (%s): they are set aside.", scenario.FormatMass(mp), v.Reason)
+		u.Notef(usage.Info, "The mixed fractions (%s of product) cannot be cut to the purity asked on a second run (%s): they are set aside.", units.FormatMass(mp), v.Reason)
 		return nil
 	}
 	p.rerunP, p.rerunI = mp, mi
@@ -86,5 +87,5 @@ func mergeRerun(u, v *usage.Usage) {
 	}
 	u.Equipment += "; mixed fractions re-run on " + v.Equipment
 	u.Notef(usage.Info, "The mixed fractions (%s of crude) are pooled, evaporated and run once more at the same loading: %s more product, %.1f %% of the product in the crude.",
-		scenario.FormatMass(v.CrudeKg), scenario.FormatMass(gained), gained/u.ProductInKg*100)
+		units.FormatMass(v.CrudeKg), units.FormatMass(gained), gained/u.ProductInKg*100)
 }

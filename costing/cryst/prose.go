@@ -4,7 +4,7 @@ import (
 	"fmt"
 	"math"
 
-	"sepcost/costing/scenario"
+	"sepcost/costing/units"
 	"sepcost/costing/usage"
 )
 
@@ -130,7 +130,7 @@ func (m *Model) cropNotes(u *usage.Usage, o *outcome) {
 		u.Notef(usage.Info, "Second crop skipped: at %.4g %% purity it would bring the combined product to %.4g %%, below the target %.4g %%.", sc2.Purity*100, k.blend.Purity()*100, m.cr.TargetPurity*100)
 	default:
 		u.AddFigure("second_crop", "second crop recovered", k.crop.Product, "g")
-		u.Notef(usage.Info, "A second crop of %s (%.4g %% product) from the last mother liquor, evaporated to %.0f %% of its volume, is combined with the first: %.4g %% purity.", scenario.FormatMass(k.crop.Total()), sc2.Purity*100, sc2.ConcentrateTo*100, k.blend.Purity()*100)
+		u.Notef(usage.Info, "A second crop of %s (%.4g %% product) from the last mother liquor, evaporated to %.0f %% of its volume, is combined with the first: %.4g %% purity.", units.FormatMass(k.crop.Total()), sc2.Purity*100, sc2.ConcentrateTo*100, k.blend.Purity()*100)
 	}
 }
 
@@ -153,6 +153,6 @@ func (m *Model) scaleNotes(u *usage.Usage, o *outcome) {
 		u.Notef(usage.Caution, "At reactor scale: charging solids into a vessel that holds flammable solvent can ignite the vapour by static discharge, so inert the vessel and charge by the site's procedure; a pressure filter works under gas pressure, so relieve it before opening; and the operating limits of the reactor and filter are those the site has approved. Follow local codes and licensed practice.")
 	}
 	if p.screeningMass > o.crudeKg {
-		u.Notef(usage.Warning, "Screening uses %s of crude, more than the batch itself (%s): the plan is impractical at this scale, and the development cost dominates.", scenario.FormatMass(p.screeningMass), scenario.FormatMass(o.crudeKg))
+		u.Notef(usage.Warning, "Screening uses %s of crude, more than the batch itself (%s): the plan is impractical at this scale, and the development cost dominates.", units.FormatMass(p.screeningMass), units.FormatMass(o.crudeKg))
 	}
 }

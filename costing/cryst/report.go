@@ -95,7 +95,7 @@ func (m *Model) equipmentFigures(u *usage.Usage, o *outcome) {
 	if b.vessel.Reactor {
 		kind = "jacketed reactor"
 	}
-	u.Equipment = fmt.Sprintf("%s %s", volumeLabel(b.vessel.Volume), kind)
+	u.Equipment = fmt.Sprintf("%s %s", units.FormatVolume(b.vessel.Volume), kind)
 	if b.vessel.Batches > 1 {
 		u.Equipment += fmt.Sprintf(" × %d batches", b.vessel.Batches)
 	}
@@ -148,12 +148,4 @@ func (m *Model) demands(u *usage.Usage, o *outcome) {
 	d(ItemProduct, "product left in mother liquors and washes", usage.ProductLoss, u.ProductInKg-u.ProductOutKg, units.Mass)
 	d(ItemLabour, "solvent screening and development (one-time)", usage.OneTime, m.p.screeningTime, units.Time)
 	d(ItemProduct, "crude used in screening, product content (one-time)", usage.OneTime, m.p.screeningMass*m.sc.Purity, units.Mass)
-}
-
-// volumeLabel writes a vessel volume (m³) as "250 mL" or "20 L".
-func volumeLabel(v float64) string {
-	if v < 1e-3 {
-		return fmt.Sprintf("%.0f mL", v*1e6)
-	}
-	return fmt.Sprintf("%.4g L", v*1e3)
 }

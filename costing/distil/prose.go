@@ -5,7 +5,7 @@ import (
 	"math"
 	"strings"
 
-	"sepcost/costing/scenario"
+	"sepcost/costing/units"
 	"sepcost/costing/usage"
 )
 
@@ -88,7 +88,7 @@ func (m *Model) stagesNote(u *usage.Usage, o *outcome) {
 
 func (m *Model) batchesNote(u *usage.Usage, o *outcome) {
 	if o.st.Batches > 1 {
-		u.Notef(usage.RepeatLevel(o.st.Batches), "The charge (%.3g L) is more than the largest still (%.3g L at %.0f %% fill) holds: %d batches of %s.", o.crudeKg/o.rhoMix*1000, o.st.Volume*1000, o.fill*100, o.st.Batches, scenario.FormatMass(o.mBatch))
+		u.Notef(usage.RepeatLevel(o.st.Batches), "The charge (%.3g L) is more than the largest still (%.3g L at %.0f %% fill) holds: %d batches of %s.", o.crudeKg/o.rhoMix*1000, o.st.Volume*1000, o.fill*100, o.st.Batches, units.FormatMass(o.mBatch))
 	}
 }
 
@@ -114,7 +114,7 @@ func (m *Model) energyNotes(u *usage.Usage, o *outcome) {
 		u.Notef(usage.Info, "Under vacuum the vapour volume is large; check that the boil-up of %.2g L/h does not flood the column.", o.boil*3.6e6)
 	}
 	if o.crew > 1 {
-		u.Notef(usage.Info, "Plant still (%s): %.3g operators attend the set-up, charging, draining and cleaning, and the watched share of the distillation; liquids move at %.3g L/min and cleaning grows with the still's wall area.", formatL(o.st.Volume), o.crew, p.transferRate*60e3)
+		u.Notef(usage.Info, "Plant still (%s): %.3g operators attend the set-up, charging, draining and cleaning, and the watched share of the distillation; liquids move at %.3g L/min and cleaning grows with the still's wall area.", units.FormatVolume(o.st.Volume), o.crew, p.transferRate*60e3)
 		u.Notef(usage.Caution, "A plant still holds tens of litres of hot flammable liquid under vacuum: inert it before letting air in, keep the vacuum and heating interlocks the site requires, and run it within the pressure and temperature limits the site has approved. Follow local codes and licensed practice.")
 	}
 }
@@ -168,7 +168,7 @@ func failStages(o *outcome, stages float64) string {
 }
 
 func failHoldup(o *outcome) string {
-	return fmt.Sprintf("the still head and column hold about %.2g mL, %.0f %% of the %.2g mL charge in the smallest suitable still (%s): too small a batch for this apparatus; a bulb-to-bulb short-path distillation or a larger batch would suit", o.vHold*1e6, o.holdShare*100, o.st.Charge*1e6, formatL(o.st.Volume))
+	return fmt.Sprintf("the still head and column hold about %.2g mL, %.0f %% of the %.2g mL charge in the smallest suitable still (%s): too small a batch for this apparatus; a bulb-to-bulb short-path distillation or a larger batch would suit", o.vHold*1e6, o.holdShare*100, o.st.Charge*1e6, units.FormatVolume(o.st.Volume))
 }
 
 func (m *Model) failUnreachable(o *outcome) string {

@@ -187,11 +187,3 @@ func (m *Model) demands(u *usage.Usage, o *outcome) {
 	}
 	dm(ItemProduct, "product lost (fore-run, tails, hold-up, cold trap)", usage.ProductLoss, u.ProductInKg-u.ProductOutKg, units.Mass)
 }
-
-// formatL writes a still volume as "250 mL" or "2 L".
-func formatL(m3 float64) string {
-	if m3 < 1e-3 {
-		return fmt.Sprintf("%.4g mL", m3*1e6)
-	}
-	return fmt.Sprintf("%.4g L", m3*1e3)
-}

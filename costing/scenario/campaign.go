@@ -59,7 +59,7 @@ func (c *collector) campaign(r *rawCampaign, s *Scenario, root *yaml.Node, echo 
 				ok = false
 			}
 			cp.ProductKg = v
-			echo(sec+".product", r.Product, FormatMass(v)+" of purified product to make")
+			echo(sec+".product", r.Product, units.FormatMass(v)+" of purified product to make")
 		} else {
 			ok = false
 		}
@@ -79,7 +79,7 @@ func (c *collector) campaign(r *rawCampaign, s *Scenario, root *yaml.Node, echo 
 	if r.BatchMass.Set {
 		if v, good := c.quantity(r.BatchMass, sec+".batch_mass", units.Mass); good && v > 0 {
 			cp.BatchKg, cp.BatchGiven = v, true
-			echo(sec+".batch_mass", r.BatchMass, FormatMass(v)+" of crude per batch")
+			echo(sec+".batch_mass", r.BatchMass, units.FormatMass(v)+" of crude per batch")
 		} else {
 			if good {
 				c.add(r.BatchMass.Line, sec+".batch_mass", "%q must be above zero", r.BatchMass.Value)
@@ -87,7 +87,7 @@ func (c *collector) campaign(r *rawCampaign, s *Scenario, root *yaml.Node, echo 
 			ok = false
 		}
 	} else if s.TargetKg > 0 {
-		s.Inputs = append(s.Inputs, Input{Field: sec + ".batch_mass", Written: "(not given)", Meaning: "the mass the decision is made at (target_mass, " + FormatMass(s.TargetKg) + ", unless --target says otherwise) of crude per batch"})
+		s.Inputs = append(s.Inputs, Input{Field: sec + ".batch_mass", Written: "(not given)", Meaning: "the mass the decision is made at (target_mass, " + units.FormatMass(s.TargetKg) + ", unless --target says otherwise) of crude per batch"})
 	}
 	if r.ShiftLength.Set {
 		if v, good := c.quantity(r.ShiftLength, sec+".shift_length", units.Time); good && v > 0 && v <= 24*3600 {

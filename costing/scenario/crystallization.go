@@ -503,7 +503,7 @@ func (x *crystRead) options() {
 	cr.ScreeningS = nonNeg(r.ScreeningTime, "screening_time", units.Time, `the one-time chemist time to find and develop the crystallization, e.g. "8 h"`,
 		func(v float64) string { return fmt.Sprintf("%.3g h of development, once", v/3600) })
 	cr.ScreeningKg = nonNeg(r.ScreeningMaterial, "screening_material", units.Mass, `the crude used once in screening, e.g. "2 g"`,
-		func(v float64) string { return FormatMass(v) + " of crude used in screening, once" })
+		func(v float64) string { return units.FormatMass(v) + " of crude used in screening, once" })
 
 }
 

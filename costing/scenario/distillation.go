@@ -301,7 +301,7 @@ func (c *collector) distillationEquipment(r *rawDistil, d *Distillation, s *Scen
 	if len(d.StillsM3) > 0 {
 		var parts []string
 		for _, v := range d.StillsM3 {
-			parts = append(parts, formatVolume(v))
+			parts = append(parts, units.FormatVolume(v))
 		}
 		s.Inputs = append(s.Inputs, Input{Field: sec + ".still_sizes", Written: strings.Join(parts, ", "), Meaning: "still (flask) volumes available"})
 	}
@@ -498,12 +498,4 @@ func (c *collector) antoine(a *rawAntoine, af string, line int, src string) solv
 		c.add(a.C.Line, af+".c", "C = %g K puts the pole of the equation (T = −C) at or above t_min; want t_min + C > 0 with T in K (constants for T in °C must be converted: C(K) = C(°C) − 273.15)", ant.C)
 	}
 	return ant
-}
-
-// formatVolume writes a volume in m³ as "250 mL" or "2 L".
-func formatVolume(m3 float64) string {
-	if m3 < 1e-3 {
-		return strconv.FormatFloat(m3*1e6, 'g', 4, 64) + " mL"
-	}
-	return strconv.FormatFloat(m3*1e3, 'g', 4, 64) + " L"
 }

@@ -69,7 +69,7 @@ func resolve(c *collector, raw *rawScenario, root *yaml.Node) *Scenario {
 				continue
 			}
 			s.MassesKg = append(s.MassesKg, v)
-			echo(field, t, FormatMass(v)+" of crude")
+			echo(field, t, units.FormatMass(v)+" of crude")
 		}
 	}
 	sort.Float64s(s.MassesKg)
@@ -81,11 +81,11 @@ func resolve(c *collector, raw *rawScenario, root *yaml.Node) *Scenario {
 				c.add(raw.TargetMass.Line, "target_mass", "%q: %v", raw.TargetMass.Value, err)
 			}
 			s.TargetKg = v
-			echo("target_mass", raw.TargetMass, FormatMass(v)+" of crude")
+			echo("target_mass", raw.TargetMass, units.FormatMass(v)+" of crude")
 		}
 	} else if len(s.MassesKg) > 0 {
 		s.TargetKg = s.MassesKg[len(s.MassesKg)-1]
-		s.Inputs = append(s.Inputs, Input{Field: "target_mass", Written: "(not given)", Meaning: "the largest batch mass, " + FormatMass(s.TargetKg)})
+		s.Inputs = append(s.Inputs, Input{Field: "target_mass", Written: "(not given)", Meaning: "the largest batch mass, " + units.FormatMass(s.TargetKg)})
 	}
 
 	// Crude.
@@ -336,17 +336,4 @@ func (m Mix) String() string {
 		parts[i] = fmt.Sprintf("%.4g %% %s", p.Fraction*100, p.Solvent)
 	}
 	return strings.Join(parts, " + ")
-}
-
-// FormatMass writes a mass in kg with a convenient unit: "250 mg", "20 g", "2 kg".
-func FormatMass(kg float64) string {
-	const tol = 1 - 1e-9 // 0.000999999… kg from a log-spaced sweep is 1 g
-	switch {
-	case kg < 1e-3*tol:
-		return strconv.FormatFloat(kg*1e6, 'g', 4, 64) + " mg"
-	case kg < 1*tol:
-		return strconv.FormatFloat(kg*1e3, 'g', 4, 64) + " g"
-	default:
-		return strconv.FormatFloat(kg, 'g', 4, 64) + " kg"
-	}
 }

@@ -5,7 +5,7 @@ import (
 	"math"
 	"strconv"
 
-	"sepcost/costing/scenario"
+	"sepcost/costing/units"
 	"sepcost/scale"
 )
 
@@ -108,7 +108,7 @@ func budgetCSV(r *scale.Report) [][]string {
 	if b == nil {
 		return nil
 	}
-	label := fmt.Sprintf("campaign of %d batches of %s", b.Batches, scenario.FormatMass(b.BatchKg))
+	label := fmt.Sprintf("campaign of %d batches of %s", b.Batches, units.FormatMass(b.BatchKg))
 	mass := strconv.FormatFloat(b.BatchKg, 'g', -1, 64)
 	var rows [][]string
 	for _, h := range []struct {

@@ -8,7 +8,7 @@ import (
 	"strconv"
 	"text/tabwriter"
 
-	"sepcost/costing/scenario"
+	"sepcost/costing/units"
 	"sepcost/scale"
 )
 
@@ -24,7 +24,7 @@ func PortfolioText(w io.Writer, pf *scale.Portfolio) error {
 		if l.Forced {
 			m += " (forced)"
 		}
-		tw.Write([]byte(strconv.Itoa(l.Line) + "\t" + l.Title + "\t" + scenario.FormatMass(l.MassKg) + "\t" + strconv.Itoa(l.Runs) + "\t" + m + "\t" +
+		tw.Write([]byte(strconv.Itoa(l.Line) + "\t" + l.Title + "\t" + units.FormatMass(l.MassKg) + "\t" + strconv.Itoa(l.Runs) + "\t" + m + "\t" +
 			l.PerBatch.StringFixed(pf.Places) + " " + cur + "\t" + l.OneTime.StringFixed(pf.Places) + " " + cur + "\t" + l.Total.StringFixed(pf.Places) + " " + cur + "\n"))
 	}
 	if err := tw.Flush(); err != nil {

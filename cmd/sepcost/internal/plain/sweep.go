@@ -10,7 +10,7 @@ import (
 	"text/tabwriter"
 
 	"sepcost/costing"
-	"sepcost/costing/scenario"
+	"sepcost/costing/units"
 	"sepcost/scale"
 )
 
@@ -52,14 +52,14 @@ func sweepTable(ew *errWriter, r *scale.Report) error {
 			continue
 		}
 		if !row.Feasible {
-			fmt.Fprintf(tw, "%s\t%s\t—\t—\t\t\t\t\t%s\t\n", scenario.FormatMass(row.CrudeKg), row.Method, shorten(row.Reason, 50))
+			fmt.Fprintf(tw, "%s\t%s\t—\t—\t\t\t\t\t%s\t\n", units.FormatMass(row.CrudeKg), row.Method, shorten(row.Reason, 50))
 			continue
 		}
 		method := row.Method
 		if r.CheapestAt(row.Mass) == row.Col {
 			method += " *"
 		}
-		fmt.Fprintf(tw, "%s\t%s\t%.2f\t%s\t%s\t%s\t%.1f\t%s\t%s\t\n", scenario.FormatMass(row.CrudeKg), method, row.PerGram,
+		fmt.Fprintf(tw, "%s\t%s\t%.2f\t%s\t%s\t%s\t%.1f\t%s\t%s\t\n", units.FormatMass(row.CrudeKg), method, row.PerGram,
 			row.Total.StringFixed(2), num(row.SolventL), num(row.WasteKg), row.HoursElapsed, num(row.EFactor), row.Equipment)
 	}
 	if err := tw.Flush(); err != nil {

@@ -10,7 +10,6 @@ import (
 	"github.com/shopspring/decimal"
 
 	"sepcost/costing"
-	"sepcost/costing/scenario"
 	"sepcost/costing/units"
 	"sepcost/costing/usage"
 	"sepcost/scale"
@@ -74,7 +73,7 @@ func textDecision(ew *errWriter, r *scale.Report) {
 	if r.TargetWhy != "" {
 		why = " (" + r.TargetWhy + ")"
 	}
-	ew.printf("\nRecommendation at %s of crude%s:\n", scenario.FormatMass(d.TargetKg), why)
+	ew.printf("\nRecommendation at %s of crude%s:\n", units.FormatMass(d.TargetKg), why)
 	tw := tabwriter.NewWriter(ew, 0, 0, 2, ' ', 0)
 	if d.Winner == "" {
 		fmt.Fprintf(tw, "  recommended\tnone: no method is feasible at this mass\n")
@@ -172,7 +171,7 @@ func assumptions(ew *errWriter, r *scale.Report) {
 		return
 	}
 	ew.printf("\nAssumptions: defaults not set in the scenario that move a cost per gram at %s by more than %.0f %% (set them under settings: when you know better):\n",
-		scenario.FormatMass(r.TargetKg), scale.AssumptionSwing*100)
+		units.FormatMass(r.TargetKg), scale.AssumptionSwing*100)
 	for _, a := range r.Assumptions {
 		ew.printf("  - %s\n", a.Words())
 	}
@@ -181,7 +180,7 @@ func assumptions(ew *errWriter, r *scale.Report) {
 // crossovers prints where the decision changes, then, as a secondary
 // list, where any two methods change places.
 func crossovers(ew *errWriter, r *scale.Report) {
-	from, to := scenario.FormatMass(r.MassesKg[0]), scenario.FormatMass(r.MassesKg[len(r.MassesKg)-1])
+	from, to := units.FormatMass(r.MassesKg[0]), units.FormatMass(r.MassesKg[len(r.MassesKg)-1])
 	ew.printf("\nWhere the cheapest method changes (cost per gram of purified product):\n")
 	if len(r.Crossovers) == 0 {
 		ew.printf("  nowhere in %s to %s: the same method is cheapest throughout\n", from, to)
@@ -193,7 +192,7 @@ func crossovers(ew *errWriter, r *scale.Report) {
 		return s
 	}
 	for _, c := range r.Crossovers {
-		ew.printf("  %s: %s below, %s above (%s", scenario.FormatMass(c.MassKg), orNone(c.CheaperBelow), orNone(c.CheaperAbove), c.Kind)
+		ew.printf("  %s: %s below, %s above (%s", units.FormatMass(c.MassKg), orNone(c.CheaperBelow), orNone(c.CheaperAbove), c.Kind)
 		if c.Detail != "" {
 			ew.printf("; %s", c.Detail)
 		}
@@ -209,7 +208,7 @@ func crossovers(ew *errWriter, r *scale.Report) {
 	}
 	ew.printf("\nWhere two methods change places, cheapest overall or not (secondary):\n")
 	for _, c := range r.Pairwise {
-		ew.printf("  %s: %s cheaper below, %s cheaper above (%s)\n", scenario.FormatMass(c.MassKg), c.CheaperBelow, c.CheaperAbove, c.Kind)
+		ew.printf("  %s: %s cheaper below, %s cheaper above (%s)\n", units.FormatMass(c.MassKg), c.CheaperBelow, c.CheaperAbove, c.Kind)
 	}
 }
 
@@ -221,7 +220,7 @@ func textDetails(ew *errWriter, r *scale.Report) error {
 		for j, name := range r.Methods {
 			res := r.Results[i][j]
 			u := res.Usage
-			ew.printf("\n== %s of crude by %s ==\n", scenario.FormatMass(m), name)
+			ew.printf("\n== %s of crude by %s ==\n", units.FormatMass(m), name)
 			if !u.Feasible {
 				ew.printf("%s: %s\n", res.Status().Words(), costing.Detail(u.Reason))
 				continue

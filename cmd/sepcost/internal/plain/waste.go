@@ -7,7 +7,7 @@ import (
 	"strconv"
 	"strings"
 
-	"sepcost/costing/scenario"
+	"sepcost/costing/units"
 	"sepcost/costing/waste"
 	"sepcost/scale"
 )
@@ -94,7 +94,7 @@ func WasteText(w io.Writer, r *scale.Report) error {
 	ew := &errWriter{w: w}
 	ew.printf("Waste forecast: %s (codes from %s)\n", r.Title, r.WasteSector)
 	for _, row := range r.Waste {
-		ew.printf("\n%s, %s%s: %s (%s)\n", scenario.FormatMass(row.CrudeKg), row.Method, map[string]string{"yes": " (recommended)"}[recommended(r, row)], row.Stream.Name, row.Stream.Class)
+		ew.printf("\n%s, %s%s: %s (%s)\n", units.FormatMass(row.CrudeKg), row.Method, map[string]string{"yes": " (recommended)"}[recommended(r, row)], row.Stream.Name, row.Stream.Class)
 		ew.printf("  %.4g kg, %.4g L: %s\n", row.Kg, row.Litres, row.Stream.Composition())
 		ew.printf("  suggested codes: EU %s; US %s\n", orNone(row.Classification.SchemeCodes("EU LoW")), orNone(row.Classification.SchemeCodes("US EPA")))
 		for _, rule := range row.Classification.Rules {

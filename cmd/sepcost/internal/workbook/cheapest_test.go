@@ -6,6 +6,7 @@ import (
 
 	"github.com/xuri/excelize/v2"
 
+	"sepcost/costing/units"
 	"sepcost/scale"
 )
 
@@ -84,13 +85,13 @@ func TestSummaryCheapestPerGram(t *testing.T) {
 	i := disagree
 	w := scale.Cheapest(r.Results[i])
 	if r.Results[i][w].Ledger.Total.LessThan(r.Results[i][1-w].Ledger.Total) {
-		t.Fatalf("the fixture does not make totals and cost per gram disagree at %s", massLabel(r.MassesKg[i]))
+		t.Fatalf("the fixture does not make totals and cost per gram disagree at %s", units.FormatMass(r.MassesKg[i]))
 	}
 }
 
 func indexMass(r *scale.Report, label string) int {
 	for i, m := range r.MassesKg {
-		if massLabel(m) == label {
+		if units.FormatMass(m) == label {
 			return i
 		}
 	}

@@ -3,6 +3,7 @@ package workbook
 import (
 	"fmt"
 
+	"sepcost/costing/units"
 	"sepcost/scale"
 )
 
@@ -24,7 +25,7 @@ func writeDecision(g *grid, st *styles, r *scale.Report, m money, row, lastCol i
 		target = r.TargetKg
 	}
 	row++
-	heading := "Decision at " + massLabel(target) + " of crude"
+	heading := "Decision at " + units.FormatMass(target) + " of crude"
 	if r.TargetWhy != "" {
 		heading += " (" + r.TargetWhy + ")"
 	}
@@ -43,7 +44,7 @@ func writeDecision(g *grid, st *styles, r *scale.Report, m money, row, lastCol i
 	row++
 
 	row++
-	g.set(row, 1, cell{value: "Largest cost drivers at " + massLabel(target), style: st.heading, spill: true})
+	g.set(row, 1, cell{value: "Largest cost drivers at " + units.FormatMass(target), style: st.heading, spill: true})
 	row++
 	if len(d.Drivers) == 0 {
 		g.set(row, 1, cell{value: "No feasible method, so no cost drivers.", style: st.note, spill: true})
@@ -63,7 +64,7 @@ func writeDecision(g *grid, st *styles, r *scale.Report, m money, row, lastCol i
 	}
 
 	row++
-	g.set(row, 1, cell{value: "Break-even prices at " + massLabel(target), style: st.heading, spill: true})
+	g.set(row, 1, cell{value: "Break-even prices at " + units.FormatMass(target), style: st.heading, spill: true})
 	row++
 	switch {
 	case len(d.Flips) > 0:
@@ -125,7 +126,7 @@ func writeCrossovers(g *grid, st *styles, r *scale.Report, row, lastCol int) int
 	if len(r.Crossovers) == 0 {
 		n := len(r.MassesKg)
 		text := fmt.Sprintf("From %s to %s the same method is cheapest per gram of purified product throughout.",
-			massLabel(r.MassesKg[0]), massLabel(r.MassesKg[n-1]))
+			units.FormatMass(r.MassesKg[0]), units.FormatMass(r.MassesKg[n-1]))
 		if len(r.Methods) < 2 {
 			text = "Only one method was costed, so no method overtakes another."
 		}
@@ -159,7 +160,7 @@ func crossoverTable(g *grid, st *styles, cs []scale.Crossover, row int) int {
 		return capitalize(s)
 	}
 	for _, c := range cs {
-		g.text(row, 1, massLabel(c.MassKg), st.text)
+		g.text(row, 1, units.FormatMass(c.MassKg), st.text)
 		g.text(row, 2, orNone(c.CheaperBelow), st.text)
 		g.text(row, 3, orNone(c.CheaperAbove), st.text)
 		kind := c.Kind

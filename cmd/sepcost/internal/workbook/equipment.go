@@ -37,7 +37,7 @@ func buildEquipment(g *grid, st *styles, r *scale.Report) {
 		g.text(row, 1, it.Name, st.text)
 		g.text(row, 2, string(it.Kind), st.text)
 		if u := sizeUnit[it.Kind]; it.Size > 0 && u != "" {
-			g.text(row, 3, sigFigs(units.MustTo(it.Size, u), 4)+" "+u, st.text)
+			g.text(row, 3, units.SigFigs(units.MustTo(it.Size, u), 4)+" "+u, st.text)
 		}
 		if it.Throughput > 0 {
 			g.num(row, 4, it.Throughput*1000*3600, st.figure)
@@ -54,9 +54,9 @@ func buildEquipment(g *grid, st *styles, r *scale.Report) {
 		g.text(row, 8, it.Currency, st.text)
 		switch {
 		case it.Life > 0 && it.LifeDim == units.Time:
-			g.text(row, 9, sigFigs(it.Life/3600, 6)+" h", st.text)
+			g.text(row, 9, units.SigFigs(it.Life/3600, 6)+" h", st.text)
 		case it.Life > 0:
-			g.text(row, 9, sigFigs(it.Life, 6)+" uses", st.text)
+			g.text(row, 9, units.SigFigs(it.Life, 6)+" uses", st.text)
 		}
 		g.set(row, 10, cell{value: it.Source, style: st.wrap, wrap: true})
 	}

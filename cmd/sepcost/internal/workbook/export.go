@@ -7,7 +7,7 @@ import (
 	"strings"
 
 	"sepcost/costing/prices"
-	"sepcost/costing/scenario"
+	"sepcost/costing/units"
 	"sepcost/costing/waste"
 	"sepcost/scale"
 )
@@ -30,7 +30,7 @@ func WriteWaste(w io.Writer, r *scale.Report) error {
 		if row.HasDisposal {
 			cost = Money(row.Disposal)
 		}
-		t.Rows = append(t.Rows, []Cell{Text(scenario.FormatMass(row.CrudeKg)), Text(row.Method), Text(rec), Text(row.Stream.Name), Text(string(row.Stream.Class)),
+		t.Rows = append(t.Rows, []Cell{Text(units.FormatMass(row.CrudeKg)), Text(row.Method), Text(rec), Text(row.Stream.Name), Text(string(row.Stream.Class)),
 			Num(row.Kg), Num(row.Litres), Text(row.Stream.Composition()), Text(row.Classification.SchemeCodes("EU LoW")), Text(row.Classification.SchemeCodes("US EPA")),
 			Text(ruleRefs(row.Classification.Rules, ruleNo, &rules)), cost})
 	}
@@ -57,7 +57,7 @@ func WritePortfolio(w io.Writer, pf *scale.Portfolio) error {
 		if l.Forced {
 			forced = "yes"
 		}
-		plan.Rows = append(plan.Rows, []Cell{Num(float64(l.Line)), Text(l.Title), Text(scenario.FormatMass(l.MassKg)), Num(runs), Text(l.Method), Text(forced),
+		plan.Rows = append(plan.Rows, []Cell{Num(float64(l.Line)), Text(l.Title), Text(units.FormatMass(l.MassKg)), Num(runs), Text(l.Method), Text(forced),
 			Money(l.PerBatch), Money(l.OneTime), Money(l.Total), Num(l.Result.Usage.WasteKg() * runs), Num(el * runs), Num(at * runs), Text(l.Quarter)})
 	}
 	n := len(pf.Lines)

@@ -310,7 +310,7 @@ func fixtureReport() *scale.Report {
 			{Field: "chromatography.eluent", Written: "ethyl acetate/n-heptane 1:4",
 				Meaning: "20 % ethyl acetate in n-heptane by volume, isocratic"},
 			{Field: "crude.purity", Written: "80 %", Meaning: "0.8"},
-			{Field: "masses", Written: "250 mg, 20 g, 2 kg", Meaning: "0.25 g, 20 g, 2 kg"},
+			{Field: "masses", Written: "250 mg, 20 g, 2 kg", Meaning: "250 mg, 20 g, 2 kg"},
 		},
 		Coefficients: []source.Coefficient{
 			{Key: "bed_height", Method: "chromatography", Label: "Silica bed height", SI: 0.15, Dim: units.Length, Unit: "cm",
@@ -352,5 +352,5 @@ func twoMethodReport() *scale.Report {
 
 // describe names a result for test messages.
 func describe(r *scale.Report, i, j int) string {
-	return fmt.Sprintf("%s at %s", r.Methods[j], massLabel(r.MassesKg[i]))
+	return fmt.Sprintf("%s at %s", r.Methods[j], units.FormatMass(r.MassesKg[i]))
 }

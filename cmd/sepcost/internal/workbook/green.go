@@ -5,6 +5,7 @@ import (
 
 	"sepcost/costing/green"
 	"sepcost/costing/source"
+	"sepcost/costing/units"
 	"sepcost/scale"
 )
 
@@ -96,7 +97,7 @@ func writeGreenMetrics(g *grid, st *styles, r *scale.Report, masses []int, row i
 	for _, i := range masses {
 		for j, meth := range r.Methods {
 			res := r.Results[i][j]
-			g.text(row, 1, massLabel(r.MassesKg[i]), st.text)
+			g.text(row, 1, units.FormatMass(r.MassesKg[i]), st.text)
 			g.text(row, 2, capitalize(meth), st.text)
 			switch {
 			case !res.Usage.Feasible:

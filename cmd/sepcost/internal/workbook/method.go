@@ -125,7 +125,7 @@ func buildMethod(g *grid, st *styles, r *scale.Report, m money, j int, lay *layo
 func (ms *methodSheet) feasible(i int) bool { return ms.res[i].Usage.Feasible }
 
 func (ms *methodSheet) where(i int) string {
-	return fmt.Sprintf("workbook: %s at %s", ms.r.Methods[ms.j], massLabel(ms.r.MassesKg[i]))
+	return fmt.Sprintf("workbook: %s at %s", ms.r.Methods[ms.j], units.FormatMass(ms.r.MassesKg[i]))
 }
 
 // head writes the title, the batch masses and each mass's status.
@@ -140,7 +140,7 @@ func (ms *methodSheet) head() {
 	g.text(3, colTitle, "Status", st.bold)
 	for i, kg := range ms.r.MassesKg {
 		c := blockCol(i)
-		g.text(2, c, massLabel(kg), st.massHeader)
+		g.text(2, c, units.FormatMass(kg), st.massHeader)
 		g.blank(2, c+1, st.massHeader)
 		g.merge(2, c, c+1)
 		status := "feasible"

@@ -98,7 +98,7 @@ func (ms *methodSheet) notes() {
 			if _, ok := masses[k]; !ok {
 				order = append(order, k)
 			}
-			masses[k] = append(masses[k], massLabel(ms.r.MassesKg[i]))
+			masses[k] = append(masses[k], units.FormatMass(ms.r.MassesKg[i]))
 		}
 	}
 	for _, k := range order {

@@ -10,6 +10,7 @@ import (
 	"github.com/xuri/excelize/v2"
 
 	"sepcost/costing/ledger"
+	"sepcost/costing/units"
 	"sepcost/costing/usage"
 	"sepcost/scale"
 )
@@ -291,7 +292,7 @@ func quantityColumns(r *scale.Report, m money) ([]*qtyCol, [][]int, error) {
 				}
 				if q.unit != l.Unit || q.priceRow != l.PriceRow {
 					return nil, nil, fmt.Errorf("workbook: %s at %s: ledger line %q (%s) is priced per %q from price row %d, but elsewhere per %q from row %d",
-						r.Methods[j], massLabel(r.MassesKg[i]), l.Demand.Label, l.Demand.Item, l.Unit, l.PriceRow, q.unit, q.priceRow)
+						r.Methods[j], units.FormatMass(r.MassesKg[i]), l.Demand.Label, l.Demand.Item, l.Unit, l.PriceRow, q.unit, q.priceRow)
 				}
 				list[n] = q.col
 			}

@@ -538,7 +538,7 @@ func TestSummaryDecision(t *testing.T) {
 		methods int
 		phrase  string
 	}{
-		{2, "From 0.1 g to 10 kg the same method is cheapest per gram of purified product throughout"},
+		{2, "From 100 mg to 10 kg the same method is cheapest per gram of purified product throughout"},
 		{1, "Only one method was costed"},
 	} {
 		r := syntheticSweep(8, tc.methods)

@@ -5,6 +5,7 @@ import (
 	"strings"
 
 	"sepcost/costing"
+	"sepcost/costing/units"
 	"sepcost/costing/usage"
 	"sepcost/scale"
 )
@@ -152,7 +153,7 @@ func writeSummaryTable(g *grid, st *styles, r *scale.Report, methods []methodOut
 		var feasible []int
 		for j := range r.Methods {
 			mc := methods[j].mass[i]
-			g.text(row, smMass, massLabel(kg), st.text)
+			g.text(row, smMass, units.FormatMass(kg), st.text)
 			g.text(row, smMethod, methods[j].sheet, st.text)
 			status := costing.StatusOf(mc.feasible, mc.reason)
 			g.text(row, smStatus, status.Words(), st.text)
@@ -252,7 +253,7 @@ func writeRecommendation(g *grid, st *styles, r *scale.Report, m money, row int,
 	}
 	heading := "Recommendation"
 	if target > 0 && finite(target) {
-		heading += " at " + massLabel(target) + " of crude"
+		heading += " at " + units.FormatMass(target) + " of crude"
 	}
 	if r.TargetWhy != "" {
 		heading += " (" + r.TargetWhy + ")"
@@ -295,7 +296,7 @@ func writeRecommendation(g *grid, st *styles, r *scale.Report, m money, row int,
 					one = " of one batch"
 				}
 				words(row, 3, fmt.Sprintf("P10–P90%s %s to %s %s/g over %d draws of the uncertain inputs (Uncertainty sheet)",
-					one, sigFigs(b.P10, 3), sigFigs(b.P90, 3), m.currency, u.Draws))
+					one, units.SigFigs(b.P10, 3), units.SigFigs(b.P90, 3), m.currency, u.Draws))
 			}
 		}
 	}
@@ -314,9 +315,9 @@ func writeRecommendation(g *grid, st *styles, r *scale.Report, m money, row int,
 	if w := winnerResult(r, d); w == nil && tab.first == 0 && d.Winner != "" {
 		// A sweep whose masses miss the target: the decision was costed
 		// there, but its batch figures are not among the rows.
-		words(row, 3, massLabel(target)+" is not among the masses costed here; the Decision sheet explains the choice")
+		words(row, 3, units.FormatMass(target)+" is not among the masses costed here; the Decision sheet explains the choice")
 	} else {
-		words(row, 3, "for "+massLabel(target)+" of crude, materials, labour and disposal")
+		words(row, 3, "for "+units.FormatMass(target)+" of crude, materials, labour and disposal")
 	}
 	row++
 
@@ -465,7 +466,7 @@ func summaryOmitted(g *grid, st *styles, r *scale.Report, row, lastCol int) int 
 		"one row per mass and method, with charts. Per-mass detail sheets (bill of materials, time, waste streams) are written "+
 		"for sweeps of at most %d masses; for the details at the masses you choose run "+
 		"`sepcost estimate SCENARIO --mass %s` (several masses separated by commas).",
-		n, massLabel(r.MassesKg[0]), massLabel(r.MassesKg[n-1]), MaxDetailMasses, massFlag(exampleMass(r)))
+		n, units.FormatMass(r.MassesKg[0]), units.FormatMass(r.MassesKg[n-1]), MaxDetailMasses, massFlag(exampleMass(r)))
 	wrapped(g, st, row+1, text, lastCol)
 	return row + 2
 }
@@ -526,7 +527,7 @@ func writeAssumptions(g *grid, st *styles, r *scale.Report, row, lastCol int) in
 	row++
 	wrapped(g, st, row, fmt.Sprintf("Defaults not set in the scenario that move a method's cost per gram at %s by more than %.0f %% between their "+
 		"low and high plausible values (P10 and P90 of the spread their source is given, as on the Uncertainty sheet), each changed alone. "+
-		"Measure them or set them under settings: in the scenario.", massLabel(r.TargetKg), scale.AssumptionSwing*100), lastCol)
+		"Measure them or set them under settings: in the scenario.", units.FormatMass(r.TargetKg), scale.AssumptionSwing*100), lastCol)
 	row++
 	for _, a := range r.Assumptions {
 		wrapped(g, st, row, capitalize(a.Words()), lastCol)

@@ -7,6 +7,7 @@ import (
 
 	"github.com/xuri/excelize/v2"
 
+	"sepcost/costing/units"
 	"sepcost/scale"
 )
 
@@ -101,11 +102,11 @@ func chartData(g *grid, st *styles, r *scale.Report, tab summaryTable, col int) 
 		b.marks = append(b.marks, chartMark{name: name, xCol: col, yCol: col + 1, row: row + 1, dash: dash})
 		row += 4
 	}
-	mark("Target mass, "+massLabel(r.TargetKg), r.TargetKg, excelize.LineDashDash)
+	mark("Target mass, "+units.FormatMass(r.TargetKg), r.TargetKg, excelize.LineDashDash)
 	cross := append([]scale.Crossover(nil), r.Crossovers...)
 	sort.Slice(cross, func(a, b int) bool { return cross[a].MassKg < cross[b].MassKg })
 	for _, c := range cross {
-		mark(fmt.Sprintf("%s overtakes %s, %s", capitalize(c.CheaperAbove), c.CheaperBelow, massLabel(c.MassKg)), c.MassKg, excelize.LineDashSysDot)
+		mark(fmt.Sprintf("%s overtakes %s, %s", capitalize(c.CheaperAbove), c.CheaperBelow, units.FormatMass(c.MassKg)), c.MassKg, excelize.LineDashSysDot)
 	}
 	return b
 }

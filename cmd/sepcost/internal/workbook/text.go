@@ -1,8 +1,6 @@
 package workbook
 
 import (
-	"math"
-	"strconv"
 	"strings"
 	"unicode"
 	"unicode/utf8"
@@ -54,36 +52,6 @@ func sheetRef(sheet, ref string) string {
 		return sheet + "!" + ref
 	}
 	return "'" + strings.ReplaceAll(sheet, "'", "''") + "'!" + ref
-}
-
-// sigFigs formats v with at most n significant digits and no trailing zeros.
-func sigFigs(v float64, n int) string {
-	if v == 0 || math.IsNaN(v) || math.IsInf(v, 0) {
-		return strconv.FormatFloat(v, 'f', -1, 64)
-	}
-	p := float64(n - 1 - int(math.Floor(math.Log10(math.Abs(v)))))
-	r := math.Round(v*math.Pow(10, p)) / math.Pow(10, p)
-	s := strconv.FormatFloat(r, 'f', -1, 64)
-	// Rounding in binary can leave a tail such as 0.30000000000000004.
-	if len(s) > 17 {
-		s = strconv.FormatFloat(r, 'g', n, 64)
-	}
-	return s
-}
-
-// massLabel writes a mass given in kg the way a chemist would say it:
-// "250 mg" below 0.1 g, "0.25 g" or "20 g" below 1 kg, "2 kg" above.
-func massLabel(kg float64) string {
-	switch {
-	case math.IsNaN(kg) || math.IsInf(kg, 0):
-		return "n/a"
-	case math.Abs(kg) >= 1:
-		return sigFigs(kg, 4) + " kg"
-	case math.Abs(kg) >= 1e-4:
-		return sigFigs(kg*1e3, 4) + " g"
-	default:
-		return sigFigs(kg*1e6, 4) + " mg"
-	}
 }
 
 // capitalize upper-cases the first letter: "chromatography" → "Chromatography".

@@ -7,6 +7,7 @@ import (
 
 	"sepcost/costing"
 	"sepcost/costing/source"
+	"sepcost/costing/units"
 	"sepcost/scale"
 )
 
@@ -59,7 +60,7 @@ func buildUncertainty(g *grid, st *styles, r *scale.Report) *bandRefs {
 	}
 	g.set(1, 1, cell{value: "Uncertainty at the target mass", style: st.title, spill: true})
 	g.text(3, 1, "Target mass", st.bold)
-	g.set(3, 2, cell{value: massLabel(u.TargetKg) + " of crude", style: st.text, spill: true})
+	g.set(3, 2, cell{value: units.FormatMass(u.TargetKg) + " of crude", style: st.text, spill: true})
 	g.text(4, 1, "Draws", st.bold)
 	g.num(4, 2, float64(u.Draws), st.ruleNumber)
 	g.text(5, 1, "Seed", st.bold)
@@ -122,7 +123,7 @@ func buildUncertainty(g *grid, st *styles, r *scale.Report) *bandRefs {
 			"the share of draws in which it was the cheapest feasible method.",
 		fmt.Sprintf("How to read it: a method that is cheapest in fewer than %s %% of the draws has not won clearly; treat the methods as "+
 			"tied within the models' uncertainty and choose on other grounds (time, waste, equipment at hand). The %s %% threshold "+
-			"is this project's choice (common practice, no source).", sigFigs(confident, 3), sigFigs(confident, 3)),
+			"is this project's choice (common practice, no source).", units.SigFigs(confident, 3), units.SigFigs(confident, 3)),
 		verdict(u, best),
 	} {
 		wrapped(g, st, row, text, uLast)
@@ -147,7 +148,7 @@ func verdict(u *scale.Uncertainty, best int) string {
 		return "Here no method was feasible in any draw, so none is cheapest."
 	}
 	b := u.Bands[best]
-	pct := func(v float64) string { return sigFigs(v*100, 3) + " %" }
+	pct := func(v float64) string { return units.SigFigs(v*100, 3) + " %" }
 	// The share is itself a sample estimate: its binomial standard error
 	// is √(p(1 − p)/N) (common practice, no source: the standard error of a
 	// proportion).
@@ -157,8 +158,8 @@ func verdict(u *scale.Uncertainty, best int) string {
 			pct(math.Sqrt(b.Cheapest*(1-b.Cheapest)/float64(u.Draws))), u.Draws)
 	}
 	if b.Cheapest >= scale.ConfidentShare {
-		return fmt.Sprintf("Here %s is cheapest in %s of the draws: a clear win at %s.", b.Method, pct(b.Cheapest), massLabel(u.TargetKg)) + se
+		return fmt.Sprintf("Here %s is cheapest in %s of the draws: a clear win at %s.", b.Method, pct(b.Cheapest), units.FormatMass(u.TargetKg)) + se
 	}
 	return fmt.Sprintf("Here no method is cheapest in %s of the draws (%s comes closest, with %s): at %s the methods are tied within the models' uncertainty.",
-		pct(scale.ConfidentShare), b.Method, pct(b.Cheapest), massLabel(u.TargetKg)) + se
+		pct(scale.ConfidentShare), b.Method, pct(b.Cheapest), units.FormatMass(u.TargetKg)) + se
 }

@@ -11,6 +11,7 @@ import (
 	"sepcost/costing/prices"
 	"sepcost/costing/scenario"
 	"sepcost/costing/source"
+	"sepcost/costing/units"
 	"sepcost/scale"
 )
 
@@ -104,7 +105,7 @@ func uncertaintyWorth(g *grid, st *styles, u *scale.Uncertainty, row int) int {
 		"whatever their value. Estimated from the same draws by ordering them on the input and averaging within bins "+
 		"(Strong and Oakley, Med. Decis. Making 2013, 33, 755); the whole value is E[max] − max E over the methods "+
 		"(Raiffa and Schlaifer, Applied Statistical Decision Theory, 1961). A method that fails in a draw is costed as the "+
-		"cheapest one that works there, so the values are lower bounds.", massLabel(u.TargetKg), u.Currency, scale.Money(u.ProductG)), uLast)
+		"cheapest one that works there, so the values are lower bounds.", units.FormatMass(u.TargetKg), u.Currency, scale.Money(u.ProductG)), uLast)
 	return row + 1
 }
 
@@ -338,7 +339,7 @@ func uncertaintyInputs(g *grid, st *styles, u *scale.Uncertainty, row int) int {
 	if quiet > 0 {
 		wrapped(g, st, row, fmt.Sprintf("Also drawn: %d further model defaults, each by how sure its source is (the spreads below; "+
 			"each default with its mark on the Sources sheet). None moves the cost per gram at the target mass with a rank "+
-			"correlation of %s or more, nor is worth knowing before choosing; the JSON output lists every input.", quiet, sigFigs(quietRho, 2)), uLast)
+			"correlation of %s or more, nor is worth knowing before choosing; the JSON output lists every input.", quiet, units.SigFigs(quietRho, 2)), uLast)
 		row++
 	}
 	wrapped(g, st, row, "Low and High: the limits of a rectangular distribution (a value written with a range, \"0.30 ± 0.03\" or "+
@@ -412,16 +413,16 @@ func uncertaintySpreads(g *grid, st *styles, row int) {
 	for _, k := range kinds {
 		sp := scenario.Spreads[scenario.Kind(k)]
 		g.set(row, 1, cell{value: capitalize(k), style: st.wrap, wrap: true})
-		half := sigFigs(sp.Half, 3)
+		half := units.SigFigs(sp.Half, 3)
 		if sp.Relative {
-			half = sigFigs(sp.Half*100, 3) + " % of the value"
+			half = units.SigFigs(sp.Half*100, 3) + " % of the value"
 		}
 		g.text(row, 2, half, st.text)
 		mergedCell(g, row, 3, uLast, cell{value: sp.Source + " (" + sp.Mark + ")", style: st.wrapIndent, wrap: true})
 		row++
 	}
 	g.set(row, 1, cell{value: "A price without a spread", style: st.wrap, wrap: true})
-	g.text(row, 2, sigFigs(prices.DefaultSpread*100, 3)+" % of the price", st.text)
+	g.text(row, 2, units.SigFigs(prices.DefaultSpread*100, 3)+" % of the price", st.text)
 	mergedCell(g, row, 3, uLast, cell{value: "catalogue prices and quotes move by some tenths within a budget year (common practice, no source)", style: st.wrapIndent, wrap: true})
 	row += 2
 	header(g, st, row, "Values drawn", "σ of ln(factor)", "Factor at −1σ", "Factor at +1σ")

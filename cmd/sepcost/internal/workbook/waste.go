@@ -116,10 +116,10 @@ func buildWaste(g *grid, st *styles, r *scale.Report, m money, details bool, lay
 	if !details {
 		k := nearestMass(r.MassesKg, r.TargetKg)
 		masses = []int{k}
-		note = fmt.Sprintf("This sweep has %d batch masses; the waste streams and green metrics are listed at %s only", len(r.MassesKg), massLabel(r.MassesKg[k]))
+		note = fmt.Sprintf("This sweep has %d batch masses; the waste streams and green metrics are listed at %s only", len(r.MassesKg), units.FormatMass(r.MassesKg[k]))
 		if r.TargetKg > 0 && finite(r.TargetKg) {
 			note += fmt.Sprintf(", the mass of the sweep nearest the target mass of %s. For the streams at the target mass itself, "+
-				"or at other masses, run `sepcost estimate SCENARIO --mass %s` (several masses separated by commas).", massLabel(r.TargetKg), massFlag(r.TargetKg))
+				"or at other masses, run `sepcost estimate SCENARIO --mass %s` (several masses separated by commas).", units.FormatMass(r.TargetKg), massFlag(r.TargetKg))
 		} else {
 			note += ", the largest. For the streams at other masses run `sepcost estimate SCENARIO --mass MASS`."
 		}
@@ -135,7 +135,7 @@ func buildWaste(g *grid, st *styles, r *scale.Report, m money, details bool, lay
 		for j, meth := range r.Methods {
 			res := r.Results[i][j]
 			if !res.Usage.Feasible {
-				g.text(row, wMass, massLabel(kg), st.text)
+				g.text(row, wMass, units.FormatMass(kg), st.text)
 				g.text(row, wMethod, capitalize(meth), st.text)
 				g.set(row, wStream, cell{value: notFeasible(res.Usage.Reason), style: st.text, spill: true})
 				row++
@@ -143,7 +143,7 @@ func buildWaste(g *grid, st *styles, r *scale.Report, m money, details bool, lay
 			}
 			claimed := map[int]bool{}
 			for _, s := range res.Usage.Waste {
-				g.text(row, wMass, massLabel(kg), st.text)
+				g.text(row, wMass, units.FormatMass(kg), st.text)
 				g.text(row, wMethod, capitalize(meth), st.text)
 				g.set(row, wStream, cell{value: s.Name, style: st.wrap, wrap: true})
 				g.text(row, wClass, string(s.Class), st.text)
@@ -385,7 +385,7 @@ func disposalLine(r *scale.Report, l ledger.Ledger, s usage.Stream, claimed map[
 func composition(s usage.Stream) string {
 	parts := make([]string, len(s.Components))
 	for k, c := range s.Components {
-		parts[k] = c.Name + " " + massLabel(c.Kg)
+		parts[k] = c.Name + " " + units.FormatMass(c.Kg)
 	}
 	return strings.Join(parts, "; ")
 }
@@ -409,5 +409,5 @@ func nearestMass(masses []float64, target float64) int {
 // massFlag writes a mass as the --mass flag takes it, without a space:
 // "20g", "2kg", "250mg".
 func massFlag(kg float64) string {
-	return strings.ReplaceAll(massLabel(kg), " ", "")
+	return strings.ReplaceAll(units.FormatMass(kg), " ", "")
 }

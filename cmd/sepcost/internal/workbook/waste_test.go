@@ -337,19 +337,19 @@ func TestGreenMetricsAgreeWithStreams(t *testing.T) {
 			if r.Results[i][j].Metrics == nil {
 				continue
 			}
-			row := greenRow(t, rows, massLabel(kg), capitalize(meth))
+			row := greenRow(t, rows, units.FormatMass(kg), capitalize(meth))
 			e := number(t, "E-factor", at(row, 3))
 			wasteKg := number(t, "waste", at(row, 9))
 			product := number(t, "product", at(row, 11))
 			// Identity, so only floating point separates the two: 1e-9.
 			if !near(e*product, wasteKg, 1e-9) {
-				t.Errorf("%s %s: E × product = %g, waste %g", massLabel(kg), meth, e*product, wasteKg)
+				t.Errorf("%s %s: E × product = %g, waste %g", units.FormatMass(kg), meth, e*product, wasteKg)
 			}
 			// Streams billed for disposal show the ledger's quantity, rounded
 			// to the gram: allow half a gram a stream.
-			key := [2]string{massLabel(kg), capitalize(meth)}
+			key := [2]string{units.FormatMass(kg), capitalize(meth)}
 			if math.Abs(streams[key]-wasteKg) > 0.0005*float64(count[key])+1e-9*wasteKg {
-				t.Errorf("%s %s: streams sum to %g kg, metrics say %g kg", massLabel(kg), meth, streams[key], wasteKg)
+				t.Errorf("%s %s: streams sum to %g kg, metrics say %g kg", units.FormatMass(kg), meth, streams[key], wasteKg)
 			}
 			checked++
 		}

@@ -149,7 +149,7 @@ func TestFixtureIsHandComputed(t *testing.T) {
 	r := twoMethodReport()
 	// Source: hand computation in fixture_test.go, EUR.
 	wantTotals := map[string]string{
-		"chromatography at 0.25 g": "119.71", "chromatography at 20 g": "758.57", "chromatography at 2 kg": "51080.61",
+		"chromatography at 250 mg": "119.71", "chromatography at 20 g": "758.57", "chromatography at 2 kg": "51080.61",
 		"crystallization at 20 g": "820.59", "crystallization at 2 kg": "5208.00",
 	}
 	for i := range r.Results {
@@ -523,11 +523,11 @@ func TestSheetsAndMarks(t *testing.T) {
 		if len(row) >= 10 && row[len(row)-1] == "cheapest" {
 			marks[row[0]] = row[1]
 		}
-		if len(row) >= 4 && row[0] == "0.25 g" && row[1] == "Crystallization" && (row[2] != "not feasible" || !strings.HasPrefix(row[3], "below 1 g")) {
+		if len(row) >= 4 && row[0] == "250 mg" && row[1] == "Crystallization" && (row[2] != "not feasible" || !strings.HasPrefix(row[3], "below 1 g")) {
 			t.Errorf("infeasible row shows %q, %q, not the status and the reason", row[2], row[3])
 		}
 	}
-	wantMarks := map[string]string{"0.25 g": "Chromatography", "20 g": "Chromatography", "2 kg": "Crystallization"}
+	wantMarks := map[string]string{"250 mg": "Chromatography", "20 g": "Chromatography", "2 kg": "Crystallization"}
 	for m, meth := range wantMarks {
 		if marks[m] != meth {
 			t.Errorf("cheapest at %s: %q, want %q (all marks %v)", m, marks[m], meth, marks)
@@ -539,7 +539,7 @@ func TestSheetsAndMarks(t *testing.T) {
 		t.Fatal(err)
 	}
 	for k, row := range cr {
-		for _, col := range []int{4, 5} { // columns E and F: the 0.25 g block
+		for _, col := range []int{4, 5} { // columns E and F: the 250 mg block
 			if col < len(row) && row[col] != "" {
 				if _, err := decimal.NewFromString(row[col]); err == nil {
 					t.Errorf("Crystallization %s: number %q in the infeasible block", cellName(col+1, k+1), row[col])

@@ -35,6 +35,7 @@ import (
 
 	"sepcost/costing"
 	"sepcost/costing/ledger"
+	"sepcost/costing/units"
 	"sepcost/costing/usage"
 	"sepcost/scale"
 )
@@ -273,7 +274,7 @@ func validate(r *scale.Report) (money, error) {
 			return m, fmt.Errorf("workbook: batch mass %d is %v kg; it must be a positive number", i+1, kg)
 		}
 		if len(r.Results[i]) != len(r.Methods) {
-			return m, fmt.Errorf("workbook: at %s the report has %d results for %d methods", massLabel(kg), len(r.Results[i]), len(r.Methods))
+			return m, fmt.Errorf("workbook: at %s the report has %d results for %d methods", units.FormatMass(kg), len(r.Results[i]), len(r.Methods))
 		}
 	}
 	seen := map[string]bool{}
@@ -467,7 +468,9 @@ type resultWhere struct {
 	kg     float64
 }
 
-func (w resultWhere) String() string { return "workbook: " + w.method + " at " + massLabel(w.kg) }
+func (w resultWhere) String() string {
+	return "workbook: " + w.method + " at " + units.FormatMass(w.kg)
+}
 
 // lineWhere names a ledger line of a result in an error.
 type lineWhere struct {
