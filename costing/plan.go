@@ -127,7 +127,7 @@ func PrepareWith(sc *scenario.Scenario, opt Options) (*Plan, error) {
 				err = fmt.Errorf("%q reaches outside the range %s accepts: %.4g to %.4g %s", s.Written, s.Key, lo.Display(), hi.Display(), c.Unit)
 			}
 			if err != nil {
-				problems = append(problems, &scenario.Problem{File: sc.File, Line: s.Line, Field: "settings." + s.Key, Msg: err.Error()})
+				problems = append(problems, &scenario.Problem{Of: scenario.ErrInvalid, File: sc.File, Line: s.Line, Field: "settings." + s.Key, Msg: err.Error()})
 			}
 		}
 	}
@@ -146,13 +146,13 @@ func PrepareWith(sc *scenario.Scenario, opt Options) (*Plan, error) {
 		described = described || e.Described(sc)
 	}
 	if !described {
-		return nil, &scenario.Problem{File: sc.File, Msg: "describes no purification method; add " + sectionList() + " (see `sepcost init`)"}
+		return nil, &scenario.Problem{Of: scenario.ErrInvalid, File: sc.File, Msg: "describes no purification method; add " + sectionList() + " (see `sepcost init`)"}
 	}
 	p := newPlan(sc, coef, eq)
 	if sc.WasteSector.Text != "" {
 		sec, err := waste.ParseSector(sc.WasteSector.Text)
 		if err != nil {
-			return nil, &scenario.Problem{File: sc.File, Line: sc.WasteSector.Line, Field: "waste_sector", Msg: err.Error()}
+			return nil, &scenario.Problem{Of: scenario.ErrInvalid, File: sc.File, Line: sc.WasteSector.Line, Field: "waste_sector", Msg: err.Error()}
 		}
 		p.WasteSector = sec
 	}

@@ -17,6 +17,7 @@ import (
 
 	"sepcost/costing"
 	"sepcost/costing/prices"
+	"sepcost/costing/problem"
 	"sepcost/costing/quote"
 	"sepcost/costing/scenario"
 	"sepcost/costing/units"
@@ -27,23 +28,9 @@ import (
 // ErrPlan is the sentinel every plan-file error unwraps to.
 var ErrPlan = errors.New("invalid plan")
 
-// PlanError is one problem in a plan file, with its line.
-type PlanError struct {
-	File  string
-	Line  int
-	Field string
-	Msg   string
-}
-
-func (e *PlanError) Error() string {
-	if e.Field == "" {
-		return fmt.Sprintf("%s:%d: %s", e.File, e.Line, e.Msg)
-	}
-	return fmt.Sprintf("%s:%d: %s: %s", e.File, e.Line, e.Field, e.Msg)
-}
-
-// Unwrap returns ErrPlan.
-func (e *PlanError) Unwrap() error { return ErrPlan }
+// PlanError is one problem in a plan file, with its line; it unwraps to
+// ErrPlan.
+type PlanError = problem.Problem
 
 // PlanRow is one row of a year's plan: a scenario, a batch mass, how many
 // times the batch is run, and optionally a forced method.
@@ -109,7 +96,7 @@ func ReadPlan(r io.Reader, file string) ([]PlanRow, error) {
 		return nil, fmt.Errorf("%s: %w", file, err)
 	}
 	if len(data) > MaxPlanSize {
-		return nil, &PlanError{File: file, Line: 1, Msg: fmt.Sprintf("larger than %d bytes (1 MiB); a plan has one short line per batch, at most %d lines", MaxPlanSize, MaxPlanRows)}
+		return nil, &PlanError{Of: ErrPlan, File: file, Line: 1, Msg: fmt.Sprintf("larger than %d bytes (1 MiB); a plan has one short line per batch, at most %d lines", MaxPlanSize, MaxPlanRows)}
 	}
 	cr := csv.NewReader(bytes.NewReader(data))
 	cr.Comment = '#'
@@ -117,7 +104,7 @@ func ReadPlan(r io.Reader, file string) ([]PlanRow, error) {
 	cr.FieldsPerRecord = -1
 	header, err := cr.Read()
 	if err != nil {
-		return nil, &PlanError{File: file, Line: planErrLine(err, 1), Msg: "no readable header; the first line must be scenario,mass,runs (and optionally ,method)"}
+		return nil, &PlanError{Of: ErrPlan, File: file, Line: planErrLine(err, 1), Msg: "no readable header; the first line must be scenario,mass,runs (and optionally ,method)"}
 	}
 	col, errs := planHeader(file, header)
 	if len(errs) > 0 {
@@ -130,12 +117,12 @@ func ReadPlan(r io.Reader, file string) ([]PlanRow, error) {
 			break
 		}
 		if err != nil {
-			errs = append(errs, &PlanError{File: file, Line: planErrLine(err, 0), Msg: "not valid CSV: " + csvMessage(err) + "; a value with a comma or a quote is written in double quotes, a quote inside doubled"})
+			errs = append(errs, &PlanError{Of: ErrPlan, File: file, Line: planErrLine(err, 0), Msg: "not valid CSV: " + csvMessage(err) + "; a value with a comma or a quote is written in double quotes, a quote inside doubled"})
 			break
 		}
 		line, _ := cr.FieldPos(0)
 		if len(rows) >= MaxPlanRows {
-			errs = append(errs, &PlanError{File: file, Line: line, Msg: fmt.Sprintf("more than %d rows; a plan has at most %d", MaxPlanRows, MaxPlanRows)})
+			errs = append(errs, &PlanError{Of: ErrPlan, File: file, Line: line, Msg: fmt.Sprintf("more than %d rows; a plan has at most %d", MaxPlanRows, MaxPlanRows)})
 			break
 		}
 		row, rowErrs := planRow(file, line, rec, col)
@@ -146,7 +133,7 @@ func ReadPlan(r io.Reader, file string) ([]PlanRow, error) {
 		return nil, errors.Join(errs...)
 	}
 	if len(rows) == 0 {
-		return nil, &PlanError{File: file, Line: 2, Msg: "no rows; add one line per scenario, mass and number of runs"}
+		return nil, &PlanError{Of: ErrPlan, File: file, Line: 2, Msg: "no rows; add one line per scenario, mass and number of runs"}
 	}
 	return rows, nil
 }
@@ -159,18 +146,18 @@ func planHeader(file string, header []string) (map[string]int, []error) {
 	for i, h := range header {
 		name := strings.ToLower(strings.TrimSpace(strings.TrimPrefix(h, "\ufeff")))
 		if !slices.Contains(planColumns, name) {
-			errs = append(errs, &PlanError{File: file, Line: 1, Field: quote.Field(name), Msg: "unknown column; valid columns: scenario, mass, runs, method, date, development"})
+			errs = append(errs, &PlanError{Of: ErrPlan, File: file, Line: 1, Field: quote.Field(name), Msg: "unknown column; valid columns: scenario, mass, runs, method, date, development"})
 			continue
 		}
 		if first, dup := col[name]; dup {
-			errs = append(errs, &PlanError{File: file, Line: 1, Field: name, Msg: fmt.Sprintf("named twice, as columns %d and %d; name each column once", first+1, i+1)})
+			errs = append(errs, &PlanError{Of: ErrPlan, File: file, Line: 1, Field: name, Msg: fmt.Sprintf("named twice, as columns %d and %d; name each column once", first+1, i+1)})
 			continue
 		}
 		col[name] = i
 	}
 	for _, need := range planColumns[:3] {
 		if _, ok := col[need]; !ok {
-			errs = append(errs, &PlanError{File: file, Line: 1, Field: need, Msg: "missing column; the header must be scenario,mass,runs (and optionally ,method)"})
+			errs = append(errs, &PlanError{Of: ErrPlan, File: file, Line: 1, Field: need, Msg: "missing column; the header must be scenario,mass,runs (and optionally ,method)"})
 		}
 	}
 	return col, errs
@@ -180,7 +167,7 @@ func planHeader(file string, header []string) (map[string]int, []error) {
 func planRow(file string, line int, rec []string, col map[string]int) (PlanRow, []error) {
 	var errs []error
 	bad := func(field, format string, args ...any) {
-		errs = append(errs, &PlanError{File: file, Line: line, Field: field, Msg: fmt.Sprintf(format, args...)})
+		errs = append(errs, &PlanError{Of: ErrPlan, File: file, Line: line, Field: field, Msg: fmt.Sprintf(format, args...)})
 	}
 	get := func(name string) string {
 		if i, ok := col[name]; ok && i < len(rec) {
@@ -324,12 +311,12 @@ func BuildPortfolio(file string, rows []PlanRow, load Loader, t *prices.Table) (
 	for _, row := range rows {
 		p, err := load(row.Scenario)
 		if err != nil {
-			errs = append(errs, &PlanError{File: file, Line: row.Line, Field: "scenario", Msg: err.Error()})
+			errs = append(errs, &PlanError{Of: ErrPlan, File: file, Line: row.Line, Field: "scenario", Msg: err.Error()})
 			continue
 		}
 		line, err := costRow(p, row, t, charged)
 		if err != nil {
-			errs = append(errs, &PlanError{File: file, Line: row.Line, Msg: err.Error()})
+			errs = append(errs, &PlanError{Of: ErrPlan, File: file, Line: row.Line, Msg: err.Error()})
 			continue
 		}
 		pf.Lines = append(pf.Lines, line)

@@ -10,8 +10,7 @@ import (
 	"github.com/spf13/cobra"
 
 	"sepcost/costing"
-	"sepcost/costing/prices"
-	"sepcost/costing/scenario"
+	"sepcost/costing/problem"
 	"sepcost/costing/units"
 	"sepcost/costing/usage"
 	"sepcost/scale"
@@ -119,21 +118,16 @@ func runCheck(_ context.Context, opts *checkOptions, stdout io.Writer) error {
 	return nil
 }
 
-// printProblems prints each problem of an error on its own line.
+// printProblems prints each problem of an error on its own line: the
+// input problems of any file (problem.List: scenario, prices, equipment,
+// plan) and the ledger's joined errors.
 func printProblems(w io.Writer, err error) int {
-	var sp scenario.Problems
-	var pe prices.Errors
-	switch {
-	case errors.As(err, &sp):
-		for _, p := range sp {
+	var list problem.List
+	if errors.As(err, &list) {
+		for _, p := range list {
 			fmt.Fprintln(w, p.Error())
 		}
-		return len(sp)
-	case errors.As(err, &pe):
-		for _, p := range pe {
-			fmt.Fprintln(w, p.Error())
-		}
-		return len(pe)
+		return len(list)
 	}
 	if j, ok := err.(interface{ Unwrap() []error }); ok {
 		// errors.Join of several problems (the ledger's): count each.

@@ -43,7 +43,7 @@ func (e *Table) WithPrices(t *prices.Table) (*prices.Table, error) {
 			continue
 		}
 		if it.Currency != t.Currency {
-			return nil, &Error{File: e.File, Line: it.Line, Field: "currency", Msg: fmt.Sprintf("%q: the price table %s is in %s; write the equipment's rates and prices in the same currency", it.Currency, t.File, t.Currency)}
+			return nil, &Error{Of: ErrInvalid, File: e.File, Line: it.Line, Field: "currency", Msg: fmt.Sprintf("%q: the price table %s is in %s; write the equipment's rates and prices in the same currency", it.Currency, t.File, t.Currency)}
 		}
 		if perHour {
 			add = append(add, e.row(HourItem(it.Name), "h", hourPrice(it), it))

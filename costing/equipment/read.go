@@ -10,6 +10,7 @@ import (
 
 	"github.com/shopspring/decimal"
 
+	"sepcost/costing/problem"
 	"sepcost/costing/units"
 )
 
@@ -26,50 +27,12 @@ const (
 // ErrInvalid is what every problem in an equipment table unwraps to.
 var ErrInvalid = errors.New("invalid equipment table")
 
-// Error is one problem, located by file, line and column.
-type Error struct {
-	File  string
-	Line  int // 0 for the whole table
-	Field string
-	Msg   string
-}
-
-func (e *Error) Error() string {
-	var b strings.Builder
-	b.WriteString(e.File)
-	if e.Line > 0 {
-		fmt.Fprintf(&b, ":%d", e.Line)
-	}
-	b.WriteString(": ")
-	if e.Field != "" {
-		b.WriteString(e.Field + ": ")
-	}
-	b.WriteString(e.Msg)
-	return b.String()
-}
-
-// Unwrap returns ErrInvalid.
-func (e *Error) Unwrap() error { return ErrInvalid }
+// Error is one problem, located by file, line and column; it unwraps to
+// ErrInvalid.
+type Error = problem.Problem
 
 // Errors is every problem found in one table, in file order.
-type Errors []*Error
-
-func (es Errors) Error() string {
-	s := make([]string, len(es))
-	for i, e := range es {
-		s[i] = e.Error()
-	}
-	return strings.Join(s, "\n")
-}
-
-// Unwrap returns the individual problems.
-func (es Errors) Unwrap() []error {
-	out := make([]error, len(es))
-	for i, e := range es {
-		out[i] = e
-	}
-	return out
-}
+type Errors = problem.List
 
 // MaxFileSize caps an equipment table: a site lists tens of items, so 1 MiB
 // is far beyond any real table and keeps a wrong file from filling memory.
@@ -97,7 +60,7 @@ func Read(r io.Reader, file string) (*Table, error) {
 	cr.TrimLeadingSpace = true
 	var errs Errors
 	add := func(line int, field, format string, a ...any) {
-		errs = append(errs, &Error{File: file, Line: line, Field: field, Msg: fmt.Sprintf(format, a...)})
+		errs = append(errs, &Error{Of: ErrInvalid, File: file, Line: line, Field: field, Msg: fmt.Sprintf(format, a...)})
 	}
 	header, err := cr.Read()
 	if err == io.EOF {
@@ -354,7 +317,7 @@ func validCode(s string) bool {
 func csvProblem(file string, err error) error {
 	var pe *csv.ParseError
 	if errors.As(err, &pe) {
-		return Errors{{File: file, Line: pe.StartLine, Msg: pe.Err.Error()}}
+		return Errors{{Of: ErrInvalid, File: file, Line: pe.StartLine, Msg: pe.Err.Error()}}
 	}
 	return fmt.Errorf("%s: %w", file, err)
 }

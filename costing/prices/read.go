@@ -91,7 +91,7 @@ func Read(r io.Reader, file string) (*Table, error) {
 	var errs Errors
 	add := func(line int, field, format string, args ...any) {
 		quote.Args(format, args) // the user's text, cut to a short excerpt
-		errs = append(errs, &Error{File: file, Line: line, Field: quote.Field(field), Msg: fmt.Sprintf(format, args...)})
+		errs = append(errs, &Error{Of: ErrInvalid, File: file, Line: line, Field: quote.Field(field), Msg: fmt.Sprintf(format, args...)})
 	}
 
 	// Header.
@@ -248,7 +248,7 @@ func boundedCSV(r io.Reader, file string) (*csv.Reader, error) {
 		return nil, fmt.Errorf("%s: %w", file, err)
 	}
 	if len(data) > MaxFileSize {
-		return nil, Errors{{File: file, Msg: fmt.Sprintf("larger than %d bytes (4 MiB); a price table lists at most %d items", MaxFileSize, MaxItems)}}
+		return nil, Errors{{Of: ErrInvalid, File: file, Msg: fmt.Sprintf("larger than %d bytes (4 MiB); a price table lists at most %d items", MaxFileSize, MaxItems)}}
 	}
 	cr := csv.NewReader(bytes.NewReader(data))
 	cr.Comment = '#'
@@ -535,7 +535,7 @@ func checkDate(s string, line int, add func(int, string, string, ...any)) {
 
 // parseProblem turns an encoding/csv error into an *Error with advice.
 func parseProblem(file string, pe *csv.ParseError, fields int) *Error {
-	e := &Error{File: file, Line: pe.StartLine}
+	e := &Error{Of: ErrInvalid, File: file, Line: pe.StartLine}
 	switch {
 	case errors.Is(pe.Err, csv.ErrFieldCount):
 		e.Msg = fmt.Sprintf("this line has a different number of values from the header's %d; check for a missing or extra comma (a value that contains a comma must be in double quotes)", fields)

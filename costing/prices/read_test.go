@@ -112,9 +112,9 @@ func TestReadGood(t *testing.T) {
 	}
 }
 
-// problem is one expected *Error: its line and field, and a part of its
+// wantProblem is one expected *Error: its line and field, and a part of its
 // message.
-type problem struct {
+type wantProblem struct {
 	line  int
 	field string
 	part  string
@@ -124,90 +124,90 @@ func TestReadBad(t *testing.T) {
 	tests := []struct {
 		name string
 		in   string
-		want []problem
+		want []wantProblem
 	}{
 		{"comma as decimal separator",
 			header + "silica gel,kg,48.60,EUR,,,\nsand,kg,\"12,5\",EUR,,,\n",
-			[]problem{{3, "price", `prices.csv:3: price: "12,5" is not a number; write a decimal such as 12.50`}}},
+			[]wantProblem{{3, "price", `prices.csv:3: price: "12,5" is not a number; write a decimal such as 12.50`}}},
 		{"exponent form is refused",
 			header + "sand,kg,1e3,EUR,,,\n",
-			[]problem{{2, "price", `"1e3" is not a number`}}},
+			[]wantProblem{{2, "price", `"1e3" is not a number`}}},
 		{"currency symbol in the price",
 			header + "sand,kg,€12.50,EUR,,,\n",
-			[]problem{{2, "price", `"€12.50" is not a number`}}},
+			[]wantProblem{{2, "price", `"€12.50" is not a number`}}},
 		{"negative price",
 			header + "sand,kg,-2.00,EUR,,,\n",
-			[]problem{{2, "price", `"-2.00" is negative`}}},
+			[]wantProblem{{2, "price", `"-2.00" is negative`}}},
 		{"empty item",
 			header + "silica gel,kg,1,EUR,,,\n ,kg,2,EUR,,,\n",
-			[]problem{{3, "item", "empty; name the item"}}},
+			[]wantProblem{{3, "item", "empty; name the item"}}},
 		{"empty price, unit and currency on one line",
 			header + "sand,,,,,,\n",
-			[]problem{{2, "unit", "empty; write the unit"}, {2, "price", "empty; write the price"}, {2, "currency", "empty; write an ISO 4217 code"}}},
+			[]wantProblem{{2, "unit", "empty; write the unit"}, {2, "price", "empty; write the price"}, {2, "currency", "empty; write an ISO 4217 code"}}},
 		{"duplicate item ignoring case names both lines",
 			header + "silica gel,kg,48.60,EUR,,,\nsand,kg,1,EUR,,,\nSilica Gel ,kg,50,EUR,,,\n",
-			[]problem{{4, "item", `"Silica Gel" is listed twice, on line 2 as "silica gel" and on line 4`}}},
+			[]wantProblem{{4, "item", `"Silica Gel" is listed twice, on line 2 as "silica gel" and on line 4`}}},
 		{"exact duplicate",
 			header + "sand,kg,1,EUR,,,\nsand,kg,1,EUR,,,\n",
-			[]problem{{3, "item", `"sand" is listed twice, on lines 2 and 3`}}},
+			[]wantProblem{{3, "item", `"sand" is listed twice, on lines 2 and 3`}}},
 		{"unknown unit lists the valid ones",
 			header + "vial,bottle,1,EUR,,,\n",
-			[]problem{{2, "unit", `"bottle" is not a unit; write one of kg, g, L, mL, each, h, min, kWh, MJ`}}},
+			[]wantProblem{{2, "unit", `"bottle" is not a unit; write one of kg, g, L, mL, each, h, min, kWh, MJ`}}},
 		{"temperature is no price unit",
 			header + "heating,C,1,EUR,,,\n",
-			[]problem{{2, "unit", `"C" is a unit of temperature; a price is per unit of mass, volume, count, time or energy`}}},
+			[]wantProblem{{2, "unit", `"C" is a unit of temperature; a price is per unit of mass, volume, count, time or energy`}}},
 		{"rate is no price unit",
 			header + "pump,L/h,1,EUR,,,\n",
-			[]problem{{2, "unit", `"L/h" is a unit of volume flow`}}},
+			[]wantProblem{{2, "unit", `"L/h" is a unit of volume flow`}}},
 		{"lower-case currency",
 			header + "sand,kg,1,eur,,,\n",
-			[]problem{{2, "currency", `"eur": write ISO 4217 codes in capitals, here EUR`}}},
+			[]wantProblem{{2, "currency", `"eur": write ISO 4217 codes in capitals, here EUR`}}},
 		{"currency symbol",
 			header + "sand,kg,1,€,,,\n",
-			[]problem{{2, "currency", `"€" is not an ISO 4217 currency code`}}},
+			[]wantProblem{{2, "currency", `"€" is not an ISO 4217 currency code`}}},
 		{"four letters",
 			header + "sand,kg,1,EURO,,,\n",
-			[]problem{{2, "currency", `"EURO" is not an ISO 4217 currency code`}}},
+			[]wantProblem{{2, "currency", `"EURO" is not an ISO 4217 currency code`}}},
 		{"two currencies name the lines of each",
 			header + "a,kg,1,EUR,,,\nb,kg,1,USD,,,\nc,kg,1,EUR,,,\n",
-			[]problem{{0, "currency", "prices.csv: currency: one currency per run, but the table has EUR (lines 2, 4) and USD (line 3)"}}},
+			[]wantProblem{{0, "currency", "prices.csv: currency: one currency per run, but the table has EUR (lines 2, 4) and USD (line 3)"}}},
 		{"day-first date",
 			header + "sand,kg,1,EUR,,,15/01/2025\n",
-			[]problem{{2, "date", `"15/01/2025" is not a date written YYYY-MM-DD`}}},
+			[]wantProblem{{2, "date", `"15/01/2025" is not a date written YYYY-MM-DD`}}},
 		{"date that does not exist",
 			// Source: Gregorian calendar: February 2025 has 28 days (2025 is not a leap year)
 			header + "sand,kg,1,EUR,,,2025-02-29\n",
-			[]problem{{2, "date", `"2025-02-29" is not a date`}}},
+			[]wantProblem{{2, "date", `"2025-02-29" is not a date`}}},
 		{"header only",
 			"# nothing yet\n" + header,
-			[]problem{{0, "", "prices.csv: the table has no items"}}},
+			[]wantProblem{{0, "", "prices.csv: the table has no items"}}},
 		{"empty file",
 			"",
-			[]problem{{0, "header", "no header row (the file is empty or holds only comments); the first line must name the columns item,unit,price,currency,category,source,date"}}},
+			[]wantProblem{{0, "header", "no header row (the file is empty or holds only comments); the first line must name the columns item,unit,price,currency,category,source,date"}}},
 		{"comments only",
 			"# prices to come\n# none yet\n",
-			[]problem{{0, "header", "no header row (the file is empty or holds only comments)"}}},
+			[]wantProblem{{0, "header", "no header row (the file is empty or holds only comments)"}}},
 		{"missing column",
 			"item,unit,price,category,source,date\nsand,kg,1,,,\n",
-			[]problem{{1, "header", `missing column "currency"; the columns are item, unit, price, currency, category, source, date`}}},
+			[]wantProblem{{1, "header", `missing column "currency"; the columns are item, unit, price, currency, category, source, date`}}},
 		{"unknown column",
 			"item,unit,price,currency,category,source,date,notes\nsand,kg,1,EUR,,,,fine\n",
-			[]problem{{1, "header", `unknown column "notes"; the columns are item, unit, price, currency, category, source, date`}}},
+			[]wantProblem{{1, "header", `unknown column "notes"; the columns are item, unit, price, currency, category, source, date`}}},
 		{"column named twice",
 			"item,unit,price,currency,category,source,date,Price\nsand,kg,1,EUR,,,,2\n",
-			[]problem{{1, "header", `column "Price" is named twice (columns 3 and 8)`}}},
+			[]wantProblem{{1, "header", `column "Price" is named twice (columns 3 and 8)`}}},
 		{"no header row",
 			"silica gel,kg,48.60,EUR,consumable,quote,2025-01-15\n",
-			[]problem{{1, "header", `the first line must name the columns (item, unit, price, currency, category, source, date, in any order), but it is "silica gel,kg`}}},
+			[]wantProblem{{1, "header", `the first line must name the columns (item, unit, price, currency, category, source, date, in any order), but it is "silica gel,kg`}}},
 		{"wrong number of values",
 			header + "sand, washed,kg,1,EUR,,,\n",
-			[]problem{{2, "", "a different number of values from the header's 7"}}},
+			[]wantProblem{{2, "", "a different number of values from the header's 7"}}},
 		{"stray quote",
 			header + "sand,kg,1\"2,EUR,,,\n",
-			[]problem{{2, "", `a double quote (") inside an unquoted value at column 10`}}},
+			[]wantProblem{{2, "", `a double quote (") inside an unquoted value at column 10`}}},
 		{"Latin-1 text",
 			header + "\xb5 beads,kg,1,EUR,,,\n",
-			[]problem{{2, "item", "not valid UTF-8 text"}}},
+			[]wantProblem{{2, "item", "not valid UTF-8 text"}}},
 	}
 	for _, tc := range tests {
 		t.Run(tc.name, func(t *testing.T) {
@@ -225,7 +225,7 @@ func TestReadBad(t *testing.T) {
 
 // checkProblems checks that err is Errors holding exactly the wanted
 // problems, in order, each unwrapping to ErrInvalid.
-func checkProblems(t *testing.T, err error, want []problem) {
+func checkProblems(t *testing.T, err error, want []wantProblem) {
 	t.Helper()
 	if !errors.Is(err, ErrInvalid) {
 		t.Errorf("errors.Is(err, ErrInvalid) is false for %v", err)
@@ -265,7 +265,7 @@ func TestReadAllProblemsAtOnce(t *testing.T) {
 		"sand,kg,2,eur,,,\n" + //                                    line 7: currency
 		"celite,kg,30,USD,,,2025/01/15\n" //                         line 8: date, and a second currency
 	_, err := Read(strings.NewReader(in), "prices.csv")
-	checkProblems(t, err, []problem{
+	checkProblems(t, err, []wantProblem{
 		{3, "price", `"12,5" is not a number`},
 		{4, "unit", `"gallon" is not a unit`},
 		{5, "item", `"SILICA GEL" is listed twice, on line 2 as "silica gel" and on line 5`},
@@ -300,7 +300,7 @@ func TestErrorFormat(t *testing.T) {
 	if got, want := e.Error(), `prices.csv:12: price: "12,5" is not a number; write a decimal such as 12.50`; got != want {
 		t.Errorf("got  %s\nwant %s", got, want)
 	}
-	e = &Error{File: "prices.csv", Msg: "the table has no items"}
+	e = &Error{File: "prices.csv", Msg: "the table has no items", Of: ErrInvalid}
 	if got, want := e.Error(), "prices.csv: the table has no items"; got != want {
 		t.Errorf("got  %s\nwant %s", got, want)
 	}

@@ -38,7 +38,7 @@ func (t *Table) Resolve(names Names) (*Table, error) {
 		if key := nameKey(id); key != nameKey(it.Name) {
 			if j, dup := seen[key]; dup && j != i {
 				other := out.Items[j]
-				errs = append(errs, &Error{File: t.File, Line: it.Line, Field: "item",
+				errs = append(errs, &Error{Of: ErrInvalid, File: t.File, Line: it.Line, Field: "item",
 					Msg: fmt.Sprintf("%q and %q (line %d) are the same solvent, %s; keep one line for it", it.Name, other.Name, other.Line, id)})
 				continue
 			}

@@ -29,10 +29,10 @@ func (a *rawAny) UnmarshalYAML(n *yaml.Node) error {
 func Load(r io.Reader, file string) (*Scenario, error) {
 	data, err := io.ReadAll(io.LimitReader(r, MaxFileSize+1))
 	if err != nil {
-		return nil, &Problem{File: file, Msg: "cannot read: " + err.Error()}
+		return nil, &Problem{Of: ErrInvalid, File: file, Msg: "cannot read: " + err.Error()}
 	}
 	if len(data) > MaxFileSize {
-		return nil, &Problem{File: file, Msg: fmt.Sprintf("larger than %d bytes (1 MiB); a scenario is a short YAML file", MaxFileSize)}
+		return nil, &Problem{Of: ErrInvalid, File: file, Msg: fmt.Sprintf("larger than %d bytes (1 MiB); a scenario is a short YAML file", MaxFileSize)}
 	}
 	dec := yaml.NewDecoder(bytes.NewReader(data))
 	var doc yaml.Node
@@ -40,11 +40,11 @@ func Load(r io.Reader, file string) (*Scenario, error) {
 		return nil, yamlProblem(file, err)
 	}
 	if len(doc.Content) == 0 {
-		return nil, &Problem{File: file, Msg: "empty; start from `sepcost init` for a commented example"}
+		return nil, &Problem{Of: ErrInvalid, File: file, Msg: "empty; start from `sepcost init` for a commented example"}
 	}
 	var next yaml.Node
 	if err := dec.Decode(&next); err != io.EOF {
-		p := &Problem{File: file, Msg: "holds more than one YAML document (a line `---` starts another); keep one scenario per file"}
+		p := &Problem{Of: ErrInvalid, File: file, Msg: "holds more than one YAML document (a line `---` starts another); keep one scenario per file"}
 		if err == nil {
 			p.Line = next.Line
 		}
@@ -52,7 +52,7 @@ func Load(r io.Reader, file string) (*Scenario, error) {
 	}
 	root := doc.Content[0]
 	if root.Kind != yaml.MappingNode || !anyKnownKey(root) {
-		return nil, &Problem{File: file, Line: root.Line, Msg: fmt.Sprintf("does not look like a scenario: none of its top-level keys is a scenario field (%s); start from `sepcost init`",
+		return nil, &Problem{Of: ErrInvalid, File: file, Line: root.Line, Msg: fmt.Sprintf("does not look like a scenario: none of its top-level keys is a scenario field (%s); start from `sepcost init`",
 			strings.Join(fieldNames(rawScenario{}), ", "))}
 	}
 	var raw rawScenario
@@ -98,7 +98,7 @@ func yamlProblem(file string, err error) error {
 	if errors.As(err, &te) {
 		var ps Problems
 		for _, e := range te.Errors {
-			p := &Problem{File: file, Msg: e}
+			p := &Problem{Of: ErrInvalid, File: file, Msg: e}
 			if m := lineRe.FindStringSubmatch(e); m != nil {
 				fmt.Sscan(m[1], &p.Line)
 				p.Msg = m[2]
@@ -109,7 +109,7 @@ func yamlProblem(file string, err error) error {
 		return ps
 	}
 	msg := strings.TrimPrefix(err.Error(), "yaml: ")
-	p := &Problem{File: file, Line: 1, Msg: "not valid YAML: " + msg}
+	p := &Problem{Of: ErrInvalid, File: file, Line: 1, Msg: "not valid YAML: " + msg}
 	if m := lineRe.FindStringSubmatch(msg); m != nil {
 		fmt.Sscan(m[1], &p.Line)
 		p.Msg = "not valid YAML: " + m[2]

@@ -3,10 +3,10 @@ package scenario
 import (
 	"errors"
 	"fmt"
-	"strings"
 
 	"go.yaml.in/yaml/v3"
 
+	"sepcost/costing/problem"
 	"sepcost/costing/quote"
 )
 
@@ -14,47 +14,11 @@ import (
 var ErrInvalid = errors.New("invalid scenario")
 
 // Problem is one thing wrong with a scenario file: where, which field, what
-// is wrong and what would be valid.
-type Problem struct {
-	File  string
-	Line  int // 1-based; 0 when unknown
-	Field string
-	Msg   string
-}
-
-func (p *Problem) Error() string {
-	loc := p.File
-	if p.Line > 0 {
-		loc = fmt.Sprintf("%s:%d", p.File, p.Line)
-	}
-	if p.Field == "" {
-		return loc + ": " + p.Msg
-	}
-	return loc + ": " + p.Field + ": " + p.Msg
-}
-
-// Unwrap returns ErrInvalid.
-func (p *Problem) Unwrap() error { return ErrInvalid }
+// is wrong and what would be valid; it unwraps to ErrInvalid.
+type Problem = problem.Problem
 
 // Problems is every problem found in one file, reported together.
-type Problems []*Problem
-
-func (ps Problems) Error() string {
-	lines := make([]string, len(ps))
-	for i, p := range ps {
-		lines[i] = p.Error()
-	}
-	return strings.Join(lines, "\n")
-}
-
-// Unwrap returns each problem, so errors.Is(err, ErrInvalid) holds.
-func (ps Problems) Unwrap() []error {
-	out := make([]error, len(ps))
-	for i, p := range ps {
-		out[i] = p
-	}
-	return out
-}
+type Problems = problem.List
 
 // collector gathers problems while a file is resolved.
 type collector struct {
@@ -67,7 +31,7 @@ type collector struct {
 // cut to a short excerpt (quote.Args), so that no message repeats a file.
 func (c *collector) add(line int, field, format string, args ...any) {
 	quote.Args(format, args)
-	c.list = append(c.list, &Problem{File: c.file, Line: line, Field: field, Msg: fmt.Sprintf(format, args...)})
+	c.list = append(c.list, &Problem{Of: ErrInvalid, File: c.file, Line: line, Field: field, Msg: fmt.Sprintf(format, args...)})
 }
 
 func (c *collector) err() error {
