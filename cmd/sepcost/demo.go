@@ -63,7 +63,7 @@ func runDemo(_ context.Context, opts *demoOptions, stdout, stderr io.Writer) err
 		if opts.liquid {
 			base = "sepcost-demo-liquid"
 		}
-		out = defaultOut(base, strings.ToLower(f))
+		out = defaultOut(base, format(strings.ToLower(f)))
 	}
 	format, err := formatFor(opts.format, out)
 	if err != nil {
@@ -88,15 +88,15 @@ func runDemo(_ context.Context, opts *demoOptions, stdout, stderr io.Writer) err
 	if err := emit(buf, out, opts.force, stdout); err != nil {
 		return err
 	}
-	if format != "text" && out != "" && out != "-" {
-		text, err := render(r, "text")
+	if format != formatText && out != "" && out != "-" {
+		text, err := render(r, formatText)
 		if err != nil {
 			return err
 		}
 		if _, err := stdout.Write(text.Bytes()); err != nil {
 			return err
 		}
-		if format == "xlsx" {
+		if format == formatXLSX {
 			fmt.Fprintf(stderr, "\nwrote %s (open it in a spreadsheet program; every cost cell is a live formula on the Prices sheet)\n", out)
 		} else {
 			fmt.Fprintf(stderr, "\nwrote %s\n", out)

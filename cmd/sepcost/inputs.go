@@ -10,7 +10,6 @@ import (
 
 	"github.com/spf13/cobra"
 
-	"sepcost/cmd/sepcost/internal/plain"
 	"sepcost/cmd/sepcost/internal/workbook"
 	"sepcost/costing"
 	"sepcost/costing/equipment"
@@ -58,25 +57,13 @@ func loadPrices(path, sheet, scenarioPath string) (*prices.Table, error) {
 }
 
 // render lays a report out in the chosen format.
-func render(r *scale.Report, format string) (*bytes.Buffer, error) {
-	var buf bytes.Buffer
-	var err error
-	switch format {
-	case "xlsx":
-		err = workbook.Write(&buf, r, workbook.Options{})
-	case "json":
-		err = plain.JSON(&buf, r)
-	case "csv":
-		err = plain.CSV(&buf, r)
-	default:
-		err = plain.Text(&buf, r)
-	}
-	return &buf, err
+func render(r *scale.Report, f format) (*bytes.Buffer, error) {
+	return reportRenderers.render(f, r)
 }
 
 // deliver renders a report and writes it to the -o file (saying so on
 // stderr) or to stdout.
-func deliver(r *scale.Report, format, out string, force bool, stdout, stderr io.Writer) error {
+func deliver(r *scale.Report, format format, out string, force bool, stdout, stderr io.Writer) error {
 	buf, err := render(r, format)
 	if err != nil {
 		return err

@@ -92,38 +92,32 @@ func placeTemp(name, path string, force bool) error {
 	return nil
 }
 
-// extFormats maps an output file's extension to the format it holds.
-var extFormats = map[string]string{".xlsx": "xlsx", ".json": "json", ".csv": "csv", ".txt": "text"}
-
-// formatExt is the extension a file of the format takes.
-var formatExt = map[string]string{"xlsx": ".xlsx", "json": ".json", "csv": ".csv", "text": ".txt"}
-
 // formatFor decides the output format: the --format flag, else from the
 // -o file's extension, else text to the terminal. A --format that
 // contradicts the extension of -o (--format json -o plan.xlsx) is a usage
 // error: a file must hold what its name says.
-func formatFor(flag, out string) (string, error) {
-	f := strings.ToLower(flag)
+func formatFor(flag, out string) (format, error) {
+	f := format(strings.ToLower(flag))
 	ext := strings.ToLower(filepath.Ext(out))
-	byExt, known := extFormats[ext]
+	byExt, known := formatOfExt(ext)
 	if f == "" {
 		switch {
 		case known:
 			f = byExt
 		case out == "" || out == "-":
-			f = "text"
+			f = formatText
 		default:
 			return "", usageError{fmt.Errorf("-o %s: cannot tell the format from the extension; name the file .xlsx, .json, .csv or .txt, or add --format xlsx, json, csv or text", out)}
 		}
 	}
-	if _, ok := formatExt[f]; !ok {
+	if f.ext() == "" {
 		return "", usageError{fmt.Errorf("--format %q: write xlsx, json, csv or text", flag)}
 	}
 	if known && byExt != f {
 		return "", usageError{fmt.Errorf("--format %s but -o %s has the extension of %s: make them agree (for example -o %s)",
-			f, out, byExt, strings.TrimSuffix(out, filepath.Ext(out))+formatExt[f])}
+			f, out, byExt, strings.TrimSuffix(out, filepath.Ext(out))+f.ext())}
 	}
-	if f == "xlsx" && (out == "" || out == "-") {
+	if f == formatXLSX && (out == "" || out == "-") {
 		return "", usageError{errors.New("--format xlsx needs an output file: add -o plan.xlsx")}
 	}
 	return f, nil
@@ -132,11 +126,11 @@ func formatFor(flag, out string) (string, error) {
 // defaultOut is the default output file for a command whose default is
 // base (e.g. "sepcost-demo") with the extension of the format; text goes to
 // the terminal ("").
-func defaultOut(base, format string) string {
-	if format == "text" {
+func defaultOut(base string, f format) string {
+	if f == formatText {
 		return ""
 	}
-	return base + formatExt[format]
+	return base + f.ext()
 }
 
 // emit writes rendered output to the file or to stdout.

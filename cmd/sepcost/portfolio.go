@@ -8,8 +8,6 @@ import (
 
 	"github.com/spf13/cobra"
 
-	"sepcost/cmd/sepcost/internal/plain"
-	"sepcost/cmd/sepcost/internal/workbook"
 	"sepcost/costing"
 	"sepcost/scale"
 )
@@ -85,19 +83,9 @@ func runPortfolio(_ context.Context, opts *portfolioOptions, stdout, stderr io.W
 	if err != nil {
 		return err
 	}
-	var buf bytes.Buffer
-	switch format {
-	case "xlsx":
-		err = workbook.WritePortfolio(&buf, pf)
-	case "json":
-		err = plain.PortfolioJSON(&buf, pf)
-	case "csv":
-		err = plain.PortfolioCSV(&buf, pf)
-	default:
-		err = plain.PortfolioText(&buf, pf)
-	}
+	buf, err := portfolioRenderers.render(format, pf)
 	if err != nil {
 		return err
 	}
-	return writeOut(&buf, opts.out, opts.force, stdout, stderr)
+	return writeOut(buf, opts.out, opts.force, stdout, stderr)
 }

@@ -1,14 +1,11 @@
 package main
 
 import (
-	"bytes"
 	"context"
 	"io"
 
 	"github.com/spf13/cobra"
 
-	"sepcost/cmd/sepcost/internal/plain"
-	"sepcost/cmd/sepcost/internal/workbook"
 	"sepcost/scale"
 )
 
@@ -63,19 +60,9 @@ func runWaste(_ context.Context, opts *wasteOptions, stdout, stderr io.Writer) e
 	if err != nil {
 		return err
 	}
-	var buf bytes.Buffer
-	switch format {
-	case "xlsx":
-		err = workbook.WriteWaste(&buf, r)
-	case "json":
-		err = plain.WasteJSON(&buf, r)
-	case "csv":
-		err = plain.WasteCSV(&buf, r)
-	default:
-		err = plain.WasteText(&buf, r)
-	}
+	buf, err := wasteRenderers.render(format, r)
 	if err != nil {
 		return err
 	}
-	return writeOut(&buf, opts.out, opts.force, stdout, stderr)
+	return writeOut(buf, opts.out, opts.force, stdout, stderr)
 }
