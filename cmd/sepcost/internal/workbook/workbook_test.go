@@ -600,7 +600,7 @@ func TestBadReports(t *testing.T) {
 		{"amount", func(r *scale.Report) *scale.Report {
 			r.Results[1][0].Ledger.Lines[2].Amount = decimal.RequireFromString("39.53")
 			return r
-		}, "chromatography at 20 g, ledger line 3 (ethyl acetate"},
+		}, "chromatography at 20 g: ledger line 3 (ethyl acetate"},
 		{"total", func(r *scale.Report) *scale.Report {
 			r.Results[2][0].Ledger.Total = decimal.RequireFromString("51080.60")
 			return r

@@ -15,7 +15,8 @@
 //
 // where Qty is the ledger quantity in the price item's unit, Prices!$C$n is
 // the unit price of price-table row n − 2 and places is the currency's
-// minor unit. This is the ledger's own rule (DEVELOPERS.md, "Money"); ROUND, like
+// minor unit. This is the ledger's own rule (ledger.LineAmount; the writer
+// checks every ledger with ledger.Checker before writing); ROUND, like
 // decimal's Round, rounds half away from zero (DEVELOPERS.md, "Library notes"), so the sheet
 // reconciles with the ledger to the cent.
 //
@@ -36,7 +37,6 @@ import (
 	"sepcost/costing"
 	"sepcost/costing/ledger"
 	"sepcost/costing/units"
-	"sepcost/costing/usage"
 	"sepcost/scale"
 )
 
@@ -297,10 +297,7 @@ func validate(r *scale.Report) (money, error) {
 	// Money places come from the ledger (the currency's minor unit); every
 	// priced ledger must agree.
 	placesSet := false
-	prices := make([]small, len(r.Prices.Items))
-	for k, it := range r.Prices.Items {
-		prices[k] = smallOf(it.Price)
-	}
+	checker := ledger.NewChecker(r.Prices)
 	for i := range r.Results {
 		for j := range r.Results[i] {
 			res := &r.Results[i][j]
@@ -325,7 +322,7 @@ func validate(r *scale.Report) (money, error) {
 				return m, fmt.Errorf("%s: the ledger rounds to %d places but another rounds to %d", where, l.Places, m.places)
 			}
 			m.places, placesSet = l.Places, true
-			if err := validateLedger(where, r, prices, &res.Ledger); err != nil {
+			if err := validateLedger(where, checker, &res.Ledger); err != nil {
 				return m, err
 			}
 		}
@@ -348,45 +345,18 @@ func validate(r *scale.Report) (money, error) {
 }
 
 // validateLedger checks one ledger against the price table and its own
-// rounding rule, so that the formulas written for it give its amounts.
-func validateLedger(where resultWhere, r *scale.Report, prices []small, l *ledger.Ledger) error {
-	sum := ledgerSum{}
-	for k := range l.Lines {
-		line := &l.Lines[k]
-		at := lineWhere{where, k, line}
-		if !knownGroup(line.Demand.Group) {
-			return fmt.Errorf("%s: group %q is not one of %v", at, line.Demand.Group, usage.Groups)
-		}
-		if line.PriceRow < 0 || line.PriceRow >= len(r.Prices.Items) {
-			return fmt.Errorf("%s: price row %d is outside the price table's %d items", at, line.PriceRow, len(r.Prices.Items))
-		}
-		it := &r.Prices.Items[line.PriceRow]
-		if !strings.EqualFold(strings.TrimSpace(it.Name), strings.TrimSpace(line.Demand.Item)) { // as prices.Find matches
-			return fmt.Errorf("%s: price row %d is %q, not the item demanded", at, line.PriceRow, it.Name)
-		}
-		price := smallOf(line.UnitPrice)
-		if !price.equal(prices[line.PriceRow], line.UnitPrice, it.Price) {
-			return fmt.Errorf("%s: unit price %s differs from the price table's %s", at, line.UnitPrice, it.Price)
-		}
-		if line.Unit != it.Unit {
-			return fmt.Errorf("%s: unit %q differs from the price table's %q", at, line.Unit, it.Unit)
-		}
-		amount := smallOf(line.Amount)
-		if !amountFollowsRule(smallOf(line.Qty), price, amount, line.Qty, line.UnitPrice, line.Amount, l.Places) {
-			want := line.Qty.Mul(line.UnitPrice).Round(l.Places)
-			return fmt.Errorf("%s: amount %s is not %s × %s rounded to %d places (%s)", at, line.Amount, line.Qty, line.UnitPrice, l.Places, want)
-		}
-		sum.add(amount, line.Amount)
-	}
-	if !sum.equals(l.Total) {
-		return fmt.Errorf("%s: the ledger total %s is not the sum of its lines, %s", where, l.Total, sum.value())
+// rounding rule (ledger.Checker), so that the formulas written for it give
+// its amounts.
+func validateLedger(where resultWhere, c *ledger.Checker, l *ledger.Ledger) error {
+	if err := c.Check(l); err != nil {
+		return fmt.Errorf("%s: %w", where, err)
 	}
 	return nil
 }
 
 // small is a decimal c × 10^e whose coefficient has at most 18 digits,
-// held in an int64 (ok false when it has more). Validation of a sweep
-// checks every line of every ledger; in int64 it allocates nothing.
+// held in an int64 (ok false when it has more), to turn ledger decimals
+// into cell values without allocating.
 type small struct {
 	c  int64
 	e  int32
@@ -400,14 +370,6 @@ func smallOf(d decimal.Decimal) small {
 	return small{d.CoefficientInt64(), d.Exponent(), true}
 }
 
-// equal compares two decimals, a and b, given in small form where they fit.
-func (x small) equal(y small, a, b decimal.Decimal) bool {
-	if x.ok && y.ok && x.e == y.e {
-		return x.c == y.c
-	}
-	return a.Equal(b)
-}
-
 // float is the decimal as the nearest double, as decimal's InexactFloat64
 // gives it: where the coefficient is below 2^53 and the exponent between
 // −22 and 0 both operands of c / 10^−e are exact and the division is
@@ -417,47 +379,6 @@ func (x small) float(d decimal.Decimal) float64 {
 		return float64(x.c) / pow10[-x.e]
 	}
 	return d.InexactFloat64()
-}
-
-// ledgerSum adds amounts exactly: in int64 units of the first amount's
-// exponent while every amount has that exponent and the sum stays far
-// from overflow (the common case: every line rounded to the minor unit),
-// in decimal otherwise.
-type ledgerSum struct {
-	n     int64
-	exp   int32
-	set   bool
-	big   bool
-	exact decimal.Decimal
-}
-
-func (s *ledgerSum) add(a small, d decimal.Decimal) {
-	if !s.big && a.ok && (!s.set || a.e == s.exp) && a.c > -1<<60 && a.c < 1<<60 && s.n > -1<<60 && s.n < 1<<60 {
-		s.n += a.c
-		s.exp, s.set = a.e, true
-		return
-	}
-	if !s.big {
-		s.exact, s.big = s.value(), true
-	}
-	s.exact = s.exact.Add(d)
-}
-
-// equals reports whether the sum is d.
-func (s *ledgerSum) equals(d decimal.Decimal) bool {
-	if !s.big {
-		if t := smallOf(d); t.ok && (t.e == s.exp || !s.set) {
-			return t.c == s.n
-		}
-	}
-	return d.Equal(s.value())
-}
-
-func (s *ledgerSum) value() decimal.Decimal {
-	if s.big {
-		return s.exact
-	}
-	return decimal.New(s.n, s.exp)
 }
 
 // resultWhere names a result in an error, "workbook: chromatography at
@@ -470,62 +391,6 @@ type resultWhere struct {
 
 func (w resultWhere) String() string {
 	return "workbook: " + w.method + " at " + units.FormatMass(w.kg)
-}
-
-// lineWhere names a ledger line of a result in an error.
-type lineWhere struct {
-	where resultWhere
-	k     int
-	line  *ledger.Line
-}
-
-func (w lineWhere) String() string {
-	return fmt.Sprintf("%s, ledger line %d (%s, %q)", w.where, w.k+1, w.line.Demand.Item, w.line.Demand.Label)
-}
-
-// knownGroup reports whether g is one of usage.Groups.
-func knownGroup(g usage.Group) bool {
-	for _, k := range usage.Groups {
-		if g == k {
-			return true
-		}
-	}
-	return false
-}
-
-// amountFollowsRule reports whether amount = qty × price rounded half away
-// from zero to places (DEVELOPERS.md, "Money"). Where the coefficients are small, as
-// a ledger's are, it works in int64 (q·p exact, then one rounding), which
-// is what decimal's Mul and Round do; otherwise it uses them on the
-// decimals qd, pd and ad.
-func amountFollowsRule(q, p, a small, qd, pd, ad decimal.Decimal, places int32) bool {
-	exp := q.e + p.e       // q·p = qc·pc × 10^exp
-	shift := -exp - places // decimal digits to drop
-	// Below 10^9 each: |qc·pc| < 10^18, inside int64.
-	const lim = 1_000_000_000
-	if !q.ok || !p.ok || q.c <= -lim || q.c >= lim || p.c <= -lim || p.c >= lim || shift < 0 || shift > 18 {
-		return ad.Equal(qd.Mul(pd).Round(places))
-	}
-	v := q.c * p.c
-	div := int64(1)
-	for range shift {
-		div *= 10
-	}
-	r, rem := v/div, v%div
-	if rem < 0 {
-		rem = -rem
-	}
-	if 2*rem >= div { // half away from zero
-		if v < 0 {
-			r--
-		} else {
-			r++
-		}
-	}
-	if a.ok && a.e == -places {
-		return a.c == r
-	}
-	return ad.Equal(decimal.New(r, -places))
 }
 
 // priceRef is the absolute reference to the unit price of price-table item i.
