@@ -15,7 +15,7 @@ func ExampleWrite() {
 		fmt.Println(err)
 		return
 	}
-	d, err := Dump(bytes.NewReader(buf.Bytes()), int64(buf.Len()))
+	d, err := dumpWorkbook(bytes.NewReader(buf.Bytes()), int64(buf.Len()))
 	if err != nil {
 		fmt.Println(err)
 		return

@@ -50,7 +50,7 @@ func render(t *testing.T, r *scale.Report, opt Options) ([]byte, *layout) {
 
 func dump(t *testing.T, b []byte) string {
 	t.Helper()
-	s, err := Dump(bytes.NewReader(b), int64(len(b)))
+	s, err := dumpWorkbook(bytes.NewReader(b), int64(len(b)))
 	if err != nil {
 		t.Fatalf("Dump: %v", err)
 	}

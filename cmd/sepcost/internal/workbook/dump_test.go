@@ -13,14 +13,14 @@ import (
 	"github.com/xuri/excelize/v2"
 )
 
-// Dump is a stable text dump of a workbook for golden tests: document
+// dumpWorkbook is a stable text dump of a workbook for golden tests: document
 // properties and calculation setting, sheet names in order, then per sheet
 // its frozen panes, column widths, row heights other than the default,
 // merged ranges, every non-empty cell with its type, value, formula,
 // number format and the bold and wrap flags, and its charts (anchor,
 // title, series references, axes and their scales). It compares content,
 // not zip bytes.
-func Dump(r io.ReaderAt, size int64) (string, error) {
+func dumpWorkbook(r io.ReaderAt, size int64) (string, error) {
 	refs, err := cellRefs(r, size)
 	if err != nil {
 		return "", err
