@@ -26,6 +26,7 @@ import (
 // the scenario's masses and from 100 mg to 100 kg. Chromatography is
 // checked on every candidate plan the plan prices (loadings and equipment).
 func TestMassBalanceCloses(t *testing.T) {
+	t.Parallel()
 	closes := map[string]bool{chrom.Method: true, cryst.Method: true, distil.Method: true}
 	cases := map[string][]byte{"demo": templates.Scenario, "liquid demo": templates.Liquid}
 	fixtures, _ := filepath.Glob(filepath.Join("..", "testdata", "*.yaml"))

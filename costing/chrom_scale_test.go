@@ -16,6 +16,7 @@ import (
 // a warning that it exceeds one chemist's working week, and the choice of
 // loading and equipment said in a note.
 func TestDemoTenKilogramsOnProcessEquipment(t *testing.T) {
+	t.Parallel()
 	p, tab := demoPlan(t)
 	r, err := p.RunOne(0, 10, tab)
 	if err != nil {

@@ -16,6 +16,7 @@ import (
 // rounding line by line, within a cent per line of the decimal ledger
 // (the float path's only difference: a product that lies on a half-cent).
 func TestPerGramLeanMatchesRunOne(t *testing.T) {
+	t.Parallel()
 	pt, err := prices.Read(bytes.NewReader(templates.Prices), "prices.csv")
 	if err != nil {
 		t.Fatal(err)

@@ -19,6 +19,7 @@ import (
 // cost in a user case (not this one), so only the direction and the
 // amounts are asserted here.
 func TestCrystallizationImpurityFromCrude(t *testing.T) {
+	t.Parallel()
 	run := func(yaml string) (passes, total, impurity float64) {
 		t.Helper()
 		sc, err := scenario.Load(strings.NewReader(yaml), "demo.yaml")

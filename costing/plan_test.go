@@ -33,6 +33,7 @@ func load(t *testing.T, y string) *scenario.Scenario {
 // Settings override the defaults and are recorded as such; unknown keys
 // and wrong dimensions are refused with file, line and the valid choices.
 func TestSettings(t *testing.T) {
+	t.Parallel()
 	p, err := Prepare(load(t, base+"settings:\n  chromatography.bed_density: \"0.45 g/mL\"\n"))
 	if err != nil {
 		t.Fatal(err)
@@ -55,6 +56,7 @@ func TestSettings(t *testing.T) {
 
 // A scenario without any method section is refused.
 func TestNoMethod(t *testing.T) {
+	t.Parallel()
 	_, err := Prepare(load(t, "name: t\nmasses: [\"1 g\"]\ncrude: {purity: 0.8}\n"))
 	// The message lists every section a scenario may have.
 	if err == nil || !strings.Contains(err.Error(), "add a chromatography:, crystallization: or distillation: section") {
@@ -66,6 +68,7 @@ func TestNoMethod(t *testing.T) {
 // −45 °C, National Academies 2016, Appendix D, confirmed) and forms
 // peroxides; every scenario gets the EHS deferral.
 func TestCautions(t *testing.T) {
+	t.Parallel()
 	p, err := Prepare(load(t, base))
 	if err != nil {
 		t.Fatal(err)
@@ -85,6 +88,7 @@ func TestCautions(t *testing.T) {
 // against the coefficient's physical range as a single value would be); a
 // range reaching below zero is refused (no negative mass, time or share).
 func TestSettingRange(t *testing.T) {
+	t.Parallel()
 	p, err := Prepare(load(t, base+"settings:\n  chromatography.bed_density: \"0.40–0.50 g/mL\"\n"))
 	if err != nil {
 		t.Fatal(err)

@@ -12,6 +12,7 @@ import (
 // default (or calibrated value) lies inside it. The ranges themselves are
 // physical limits stated beside each model's coefficients.
 func TestEveryCoefficientBounded(t *testing.T) {
+	t.Parallel()
 	plan, err := Prepare(load(t, base))
 	if err != nil {
 		t.Fatal(err)
@@ -37,6 +38,7 @@ func TestEveryCoefficientBounded(t *testing.T) {
 // setting and the range; a rate or share that a model divides by cannot be
 // zero.
 func TestSettingsOutOfRange(t *testing.T) {
+	t.Parallel()
 	cases := []struct {
 		setting string
 		want    []string

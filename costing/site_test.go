@@ -11,6 +11,7 @@ import (
 // makes chromatography not feasible, with the reason naming the table;
 // the other methods are unaffected.
 func TestSiteWithoutEvaporator(t *testing.T) {
+	t.Parallel()
 	p, tab := demoPlan(t)
 	eq, err := equipment.Read(strings.NewReader("item,kind,size,throughput,max_load,hourly_rate,ownership,price,currency,service_life,source\nc,column,40 mm,,,,owned,,,,\n"), "site.csv")
 	if err != nil {

@@ -5,6 +5,7 @@ import "testing"
 // A method the scenario does not describe is "not assessed", one tried and
 // refused is "not feasible" (the plan's own wording, plan.go).
 func TestStatusOf(t *testing.T) {
+	t.Parallel()
 	for _, c := range []struct {
 		feasible bool
 		reason   string

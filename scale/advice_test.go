@@ -6,6 +6,7 @@ import "testing"
 // English-language accounts write them (common practice, no source), whole
 // units from 100 up, three significant figures below (hand-rounded cases).
 func TestMoney(t *testing.T) {
+	t.Parallel()
 	for _, c := range []struct {
 		v    float64
 		want string
@@ -19,6 +20,7 @@ func TestMoney(t *testing.T) {
 // The sentences a chemist acts on name the input, where it is written and
 // the money; a crossover interval is given in masses a chemist reads.
 func TestAdviceWords(t *testing.T) {
+	t.Parallel()
 	u := &Uncertainty{Currency: "EUR", EVPI: 2500, ProductG: 1640, TargetKg: 2,
 		Inputs: []Uncertain{{Name: "solubility of the impurity at 0 °C", Field: "crystallization.impurity.solubility[0 C]", Kind: KindMeasured},
 			{Name: "price of silica gel", Field: "price: silica gel", Kind: KindPrice}},
@@ -46,6 +48,7 @@ func TestAdviceWords(t *testing.T) {
 // A choice that only several inputs together could change: the whole value
 // is given, and no single measurement is advised.
 func TestAdviceNoSingleInput(t *testing.T) {
+	t.Parallel()
 	u := &Uncertainty{Currency: "EUR", EVPI: 23.6, ProductG: 16.4, TargetKg: 0.02}
 	lines := u.AdviceLines(3)
 	if len(lines) != 2 || lines[1] != "No single input known alone would change the choice: only several moving together would, so no one measurement is worth making for it." {

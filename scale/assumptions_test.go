@@ -18,6 +18,7 @@ import (
 // way a user would (settings: in the scenario) gives the same cost per
 // gram as the one-at-a-time test.
 func TestAssumptionsListed(t *testing.T) {
+	t.Parallel()
 	p, pt := plan(t, templates.Liquid)
 	as, err := FindAssumptions(p, pt, 2)
 	if err != nil {
@@ -72,6 +73,7 @@ func TestAssumptionsListed(t *testing.T) {
 // still (its hold-up near the 25 % limit), so the hold-up defaults decide
 // whether it is feasible at all.
 func TestAssumptionsInReport(t *testing.T) {
+	t.Parallel()
 	yaml, err := os.ReadFile("testdata/liquid-small-stills.yaml")
 	if err != nil {
 		t.Fatal(err)

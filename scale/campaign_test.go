@@ -21,6 +21,7 @@ import (
 // batches, its one-time lines are charged once, and the decision at the
 // target is the method cheapest per gram over the campaign.
 func TestDemoCampaign(t *testing.T) {
+	t.Parallel()
 	p, pt := plan2(t)
 	r, err := EstimateWith(p, pt, []float64{p.Scenario.TargetKg}, Options{Draws: 50, Seed: 1})
 	if err != nil {
@@ -74,6 +75,7 @@ func TestDemoCampaign(t *testing.T) {
 // (example prices and scenario, invented; hand computation); the
 // contingency is round(subtotal × (P90/P50 − 1)).
 func TestBudget(t *testing.T) {
+	t.Parallel()
 	p, pt := plan2(t)
 	r, err := EstimateWith(p, pt, []float64{p.Scenario.TargetKg}, Options{Draws: 50, Seed: 1})
 	if err != nil {
@@ -111,6 +113,7 @@ func TestBudget(t *testing.T) {
 // Every ledger group is under exactly one budget heading, so the headings
 // always add up to the campaign's cost.
 func TestBudgetGroupsCoverLedger(t *testing.T) {
+	t.Parallel()
 	seen := map[usage.Group]int{}
 	for _, gs := range BudgetGroups {
 		for _, g := range gs {
@@ -131,6 +134,7 @@ func TestBudgetGroupsCoverLedger(t *testing.T) {
 // purchase: the smallest n with n·(g_c·R_x − g_x·R_c) ≤ g_x·K_c − g_c·K_x
 // (campaign.Payback, tested by hand there).
 func TestCampaignCapital(t *testing.T) {
+	t.Parallel()
 	eqCSV := strings.NewReplacer(
 		"jacketed reactor 20 L,reactor,20 L,,,20.00,owned,,EUR,,", "jacketed reactor 20 L,reactor,20 L,,,20.00,to buy,18000.00,EUR,20000 h,",
 		"jacketed reactor 100 L,reactor,100 L,,,45.00,owned,,EUR,,", "jacketed reactor 100 L,reactor,100 L,,,45.00,to buy,42000.00,EUR,20000 h,",

@@ -33,6 +33,7 @@ import (
 // against the models themselves (derived: the cheapest method at the
 // bracket's ends) and against a fine brute-force scan.
 func TestDecisionCrossoverCases(t *testing.T) {
+	t.Parallel()
 	type change struct {
 		below, above, kind string
 		lo, hi             float64 // kg
@@ -132,6 +133,7 @@ func cheapestName(t *testing.T, names []string, p *costing.Plan, pt *prices.Tabl
 // per gram of purified product among the feasible (derived from the
 // results themselves), whichever batch total is lowest.
 func TestOneCheapest(t *testing.T) {
+	t.Parallel()
 	yaml, err := os.ReadFile("testdata/solid-with-distillation.yaml")
 	if err != nil {
 		t.Fatal(err)

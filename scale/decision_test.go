@@ -45,6 +45,7 @@ func withPrice(t *prices.Table, item string, p decimal.Decimal) *prices.Table {
 // source): chromatography is cheaper for a few hundred milligrams, a
 // recrystallization at kilograms, so there is a crossover between.
 func TestDemoCrossover(t *testing.T) {
+	t.Parallel()
 	p, pt := plan(t, templates.Scenario)
 	masses, _ := LogSpace(1e-4, 1, 25)
 	r, err := Sweep(p, pt, masses)
@@ -98,6 +99,7 @@ func TestDemoCrossover(t *testing.T) {
 // Break-even prices really flip the decision when applied: 1 % beyond the
 // break-even the runner-up wins, 1 % short of it the winner stays.
 func TestBreakEvenFlips(t *testing.T) {
+	t.Parallel()
 	p, pt := plan(t, templates.Scenario)
 	d, err := Decide(p, pt, 2)
 	if err != nil {
@@ -130,6 +132,7 @@ func TestBreakEvenFlips(t *testing.T) {
 // A method that is infeasible is never recommended: a crystallization whose
 // impurity co-crystallises cannot reach the target purity.
 func TestInfeasibleNeverRecommended(t *testing.T) {
+	t.Parallel()
 	y := strings.Replace(string(templates.Scenario), `solubility: {"0 C": "30 g/L", "75 C": "140 g/L"}`, `solubility: {"0 C": "0.5 g/L", "75 C": "2 g/L"}`, 1)
 	p, pt := plan(t, []byte(y))
 	for _, m := range []float64{1e-3, 0.1, 2} {
@@ -149,6 +152,7 @@ func TestInfeasibleNeverRecommended(t *testing.T) {
 // Scale 1 reproduces estimate: the sweep's result at a mass equals an
 // estimate at that mass, to the cent.
 func TestSweepReproducesEstimate(t *testing.T) {
+	t.Parallel()
 	p, pt := plan(t, templates.Scenario)
 	masses, _ := LogSpace(0.02, 2, 3)
 	sw, err := Sweep(p, pt, masses)
@@ -170,6 +174,7 @@ func TestSweepReproducesEstimate(t *testing.T) {
 // wherever the number of chromatography runs or crystallization batches
 // goes up, the batch's total cost does not go down (identity of the models).
 func TestCostNeverFallsWhenRunsAdded(t *testing.T) {
+	t.Parallel()
 	p, pt := plan(t, templates.Scenario)
 	masses, _ := LogSpace(0.1, 20, 300)
 	r, err := SweepWith(p, pt, masses, Options{}) // no Monte Carlo draws: the identity is of the models
@@ -198,6 +203,7 @@ func TestCostNeverFallsWhenRunsAdded(t *testing.T) {
 // Crystallization cost per gram falls as the one-time development cost is
 // spread over more product (the development cost is one-time, usage.OneTime).
 func TestDevelopmentCostSpread(t *testing.T) {
+	t.Parallel()
 	p, pt := plan(t, templates.Scenario)
 	prev := math.Inf(1)
 	for _, m := range []float64{1e-3, 1e-2, 0.1, 1} {

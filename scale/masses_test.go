@@ -7,6 +7,7 @@ import (
 )
 
 func TestLogSpace(t *testing.T) {
+	t.Parallel()
 	m, err := LogSpace(1e-4, 10, 6)
 	if err != nil {
 		t.Fatal(err)
@@ -59,6 +60,7 @@ func synthetic(curves []func(m float64) float64, masses []float64) (evalFunc, []
 // b = 20 + 40/m cross where 30 = 35/m, m = 7/6 kg (hand computation); and a
 // step curve c that jumps from 10 to 100 at m = 0.3 kg against a flat 50.
 func TestCrossoverAgainstBruteForce(t *testing.T) {
+	t.Parallel()
 	curves := []func(m float64) float64{
 		func(m float64) float64 { return 50 + 5/m },
 		func(m float64) float64 { return 20 + 40/m },
@@ -144,6 +146,7 @@ func indexOf(list []string, s string) int {
 // (1, 10 kg) the cheapest goes a → c, with b cheapest in between: the
 // search must find both changes.
 func TestDecisionCrossovers(t *testing.T) {
+	t.Parallel()
 	curves := []func(m float64) float64{
 		func(m float64) float64 { return 50 + 5/m },
 		func(m float64) float64 { return 20 + 40/m },

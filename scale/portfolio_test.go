@@ -35,6 +35,7 @@ func loaderFor(t *testing.T, files map[string][]byte) Loader {
 // runs × (the batch's ledger total less its one-time lines), plus the
 // one-time lines once per scenario and method in the plan (identity).
 func TestPortfolioReconciles(t *testing.T) {
+	t.Parallel()
 	plan := "scenario,mass,runs,method\nsolid.yaml,20 g,3,\nsolid.yaml,2 kg,2,\nliquid.yaml,2 kg,4,\nsolid.yaml,1 g,5,chromatography\n"
 	rows, err := ReadPlan(strings.NewReader(plan), "plan.csv")
 	if err != nil {
@@ -100,6 +101,7 @@ func TestPortfolioReconciles(t *testing.T) {
 // of the same scenario does not pay again; a row marked row pays its own;
 // a row marked done pays none.
 func TestPortfolioChargeOnce(t *testing.T) {
+	t.Parallel()
 	plan := "scenario,mass,runs,method,development,date\n" +
 		"solid.yaml,100 g,10,crystallization,,2026-02-10\n" +
 		"solid.yaml,50 g,4,crystallization,,2026-03-31\n" +
@@ -155,6 +157,7 @@ func TestPortfolioChargeOnce(t *testing.T) {
 // Each row's method is chosen on its campaign: the cheaper per gram over
 // the runs as charged, not over one batch bearing all one-time costs.
 func TestPortfolioChoosesOnCampaign(t *testing.T) {
+	t.Parallel()
 	p, pt := plan2(t)
 	for _, runs := range []int{1, 4, 40} {
 		rows, err := ReadPlan(strings.NewReader(fmt.Sprintf("scenario,mass,runs\nsolid.yaml,50 g,%d\n", runs)), "plan.csv")
@@ -199,6 +202,7 @@ func plan2(t testing.TB) (*costing.Plan, *prices.Table) {
 }
 
 func TestPlanErrors(t *testing.T) {
+	t.Parallel()
 	cases := []struct{ csv, want string }{
 		{"scenario,mass,runs\na.yaml,20 g,-1\n", "plan.csv:2: runs"},
 		{"scenario,mass,runs\na.yaml,20,1\n", "plan.csv:2: mass"},

@@ -19,6 +19,7 @@ import (
 // definition 7): for 1..10, P10 = 1.9, P50 = 5.5, P90 = 9.1 (hand
 // computation: h = q·(n − 1)).
 func TestQuantile(t *testing.T) {
+	t.Parallel()
 	v := []float64{1, 2, 3, 4, 5, 6, 7, 8, 9, 10}
 	for _, c := range []struct{ q, want float64 }{{0.1, 1.9}, {0.5, 5.5}, {0.9, 9.1}, {0, 1}, {1, 10}} {
 		if got := quantile(v, c.q); math.Abs(got-c.want) > 1e-12 {
@@ -69,6 +70,7 @@ func TestSampleDeterministic(t *testing.T) {
 // Drawn shares stay inside (0, 1), temperatures and the site's equipment
 // are not drawn, shared quantities take one draw for every method.
 func TestDrawnCoefficientsStayPhysical(t *testing.T) {
+	t.Parallel()
 	p, pt := plan(t, templates.Liquid)
 	d := newDesign(p, pt, usedPrices(p, pt, p.Scenario.TargetKg))
 	r := ledger.NewRates(pt)
@@ -106,6 +108,7 @@ func TestDrawnCoefficientsStayPhysical(t *testing.T) {
 // 1957 — from memory; it follows from the normal moment generating
 // function); the loading rule is drawn with its stated weights.
 func TestDrawsMatchTheirMoments(t *testing.T) {
+	t.Parallel()
 	p, pt := plan(t, templates.Scenario)
 	d := newDesign(p, pt, usedPrices(p, pt, p.Scenario.TargetKg))
 	n := 20000
@@ -226,6 +229,7 @@ func TestSampleAcrossReproducible(t *testing.T) {
 // Thin keeps the ends and spreads the rest evenly: 0..9 thinned to 4 is
 // 0, 3, 6, 9 (positions k·9/3, hand computation).
 func TestThin(t *testing.T) {
+	t.Parallel()
 	v := []float64{0, 1, 2, 3, 4, 5, 6, 7, 8, 9}
 	got := Thin(v, 4)
 	if len(got) != 4 || got[0] != 0 || got[1] != 3 || got[2] != 6 || got[3] != 9 {

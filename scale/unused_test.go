@@ -13,6 +13,7 @@ import (
 // A price line no ledger refers to is listed by name and file line; a
 // table whose every line is used gives no note.
 func TestUnusedPrices(t *testing.T) {
+	t.Parallel()
 	tab := &prices.Table{File: "p.csv", Currency: "EUR", Items: []prices.Item{
 		{Name: "silica gel", Line: 2, Price: decimal.NewFromInt(30)},
 		{Name: "n-hexane", Written: "hexanes", Line: 3, Price: decimal.NewFromInt(9)},

@@ -26,6 +26,7 @@ func unitNormalLoss(z float64) float64 {
 // estimator of Strong and Oakley (2013) must recover them from one set of
 // draws.
 func TestEVPIClosedForm(t *testing.T) {
+	t.Parallel()
 	if got := unitNormalLoss(0.5); math.Abs(got-0.19780) > 5e-5 {
 		t.Fatalf("L(0.5) = %g", got)
 	}
@@ -55,6 +56,7 @@ func TestEVPIClosedForm(t *testing.T) {
 // (equally likely) and NB₂ = 0 are worth E[max] − max E = 0.5 − 0 = 0.5
 // when known (hand computation).
 func TestEVPPIDiscrete(t *testing.T) {
+	t.Parallel()
 	var xs []float64
 	var nb [][]float64
 	for k := 0; k < 1000; k++ {
@@ -73,6 +75,7 @@ func TestEVPPIDiscrete(t *testing.T) {
 // worked example — from memory; hand computation agrees). A monotone
 // transform gives 1, a reversal −1, ties take their mean rank.
 func TestSpearman(t *testing.T) {
+	t.Parallel()
 	iq := []float64{106, 100, 86, 101, 99, 103, 97, 113, 112, 110}
 	tv := []float64{7, 27, 2, 50, 28, 29, 20, 12, 6, 17}
 	if got := spearman(iq, tv); math.Abs(got-(-29.0/165)) > 1e-12 {

@@ -19,6 +19,7 @@ import (
 // warning at several masses, with other figures, is listed once with all
 // its masses.
 func TestImpracticalPlansWarn(t *testing.T) {
+	t.Parallel()
 	y := bytes.Replace(templates.Scenario, []byte("  loading_rule: theory\n"), []byte("  loading_rule: theory\n  column_diameters: [\"100 mm\", \"200 mm\", \"300 mm\"]\n"), 1)
 	p, pt := plan(t, y)
 	r, err := EstimateWith(p, pt, []float64{0.0005, 0.001, 5}, Options{})

@@ -16,6 +16,7 @@ import (
 // dichloromethane, carries no F002 either. Mixing and code rules apply
 // only to streams that are really combined.
 func TestDryLoadDichloromethaneIsItsOwnStream(t *testing.T) {
+	t.Parallel()
 	y := bytes.Replace(templates.Scenario, []byte("loading_solvent: ethyl acetate"), []byte("loading_solvent: dichloromethane"), 1)
 	if bytes.Equal(y, templates.Scenario) {
 		t.Fatal("the demo scenario no longer names its loading solvent")

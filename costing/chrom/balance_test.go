@@ -15,6 +15,7 @@ import (
 // liquid and dry loading, with eluent recovery, on columns and cartridges,
 // from 100 mg to 10 kg.
 func TestMassBalanceCloses(t *testing.T) {
+	t.Parallel()
 	site := testSite()
 	site.Cartridges = []SiteCartridge{{Name: "40 g", Silica: 0.04, MaxLoad: 0.004, Flow: 40e-6 / 60, UseItem: "use 40"}}
 	for _, extra := range []string{"", "  loading: dry\n  loading_solvent: dichloromethane\n", "  recover_solvent: 0.6\n", "  mixed_fractions: rerun\n  loading: dry\n"} {
@@ -43,6 +44,7 @@ func TestMassBalanceCloses(t *testing.T) {
 // are set aside, the second run's materials are added, and the balance
 // still closes (identity).
 func TestRerunMixedFractions(t *testing.T) {
+	t.Parallel()
 	coef := testCoefficients()
 	for _, m := range []float64{0.01, 5} {
 		aside := Run(loadScenario(t, caseYAML(0.35, 0.43, 0.90, 0.05, "")), coef, testSite(), m)

@@ -10,6 +10,7 @@ import (
 // closed form agrees with a direct numerical convolution (Simpson's rule,
 // 4000 intervals) to 1e-6. A mirrored band is the reflection.
 func TestBlurredTriangle(t *testing.T) {
+	t.Parallel()
 	b := Band{Front: 2, End: 2.6, Kinetic: 0.1, Kg: 1}
 	if f := b.share(1); f > 1e-9 {
 		t.Errorf("F before the band = %g", f)
@@ -61,6 +62,7 @@ func TestBlurredTriangle(t *testing.T) {
 // (from memory): w = k(2√Lf − Lf); at Lf = 1 the band spans the whole
 // retention, w = k; at Lf = 0.25, w = k·0.75.
 func TestOverloadWidth(t *testing.T) {
+	t.Parallel()
 	if w := OverloadWidth(2, 1); math.Abs(w-2) > 1e-12 {
 		t.Errorf("w(Lf=1) = %g", w)
 	}

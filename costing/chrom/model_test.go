@@ -42,6 +42,7 @@ func figure(t *testing.T, u usage.Usage, key usage.FigureKey) float64 {
 // litre per gram of crude (common practice, no source) — here checked to lie
 // within 0.2–3 L/g.
 func TestOrdinarySeparationRulesOfThumb(t *testing.T) {
+	t.Parallel()
 	sc := loadScenario(t, ordinary)
 	coef := testCoefficients()
 	for _, m := range []float64{1e-3, 0.02, 0.5} {
@@ -69,6 +70,7 @@ func TestOrdinarySeparationRulesOfThumb(t *testing.T) {
 // crude leaves as isolated product (with the impurity it holds), product
 // lost and impurities (identity, no source needed).
 func TestMassBalance(t *testing.T) {
+	t.Parallel()
 	for _, recover := range []string{"0", "0.6"} {
 		sc := loadScenario(t, ordinary+"  recover_solvent: "+recover+"\n  loading: dry\n")
 		u := Run(sc, testCoefficients(), testSite(), 0.05)
@@ -113,6 +115,7 @@ func TestMassBalance(t *testing.T) {
 // rule (the loading is a ratio; common practice): between 20 g and 2 kg (1 run to many runs) silica per
 // gram of crude changes by less than the 10 %–20 % bed-height rounding.
 func TestLinearInMass(t *testing.T) {
+	t.Parallel()
 	sc := loadScenario(t, ordinary)
 	coef := testCoefficients()
 	a, b := Run(sc, coef, testSite(), 0.02), Run(sc, coef, testSite(), 2)
@@ -130,6 +133,7 @@ func TestLinearInMass(t *testing.T) {
 
 // Warnings come as data: ΔRf below 0.05, product Rf outside 0.15–0.45.
 func TestWarnings(t *testing.T) {
+	t.Parallel()
 	y := strings.Replace(strings.Replace(ordinary, "product_rf: 0.30", "product_rf: 0.55", 1), "impurity_rf: 0.45", "impurity_rf: 0.58", 1)
 	u := Run(loadScenario(t, y), testCoefficients(), testSite(), 0.01)
 	var texts []string
@@ -146,6 +150,7 @@ func TestWarnings(t *testing.T) {
 
 // Halogenated eluents make a halogenated waste stream.
 func TestHalogenatedWaste(t *testing.T) {
+	t.Parallel()
 	y := strings.Replace(ordinary, "{n-heptane: 0.7, ethyl acetate: 0.3}", "{dichloromethane: 0.95, methanol: 0.05}", 1)
 	u := Run(loadScenario(t, y), testCoefficients(), testSite(), 0.01)
 	if u.Waste[0].Class != usage.Halogenated {

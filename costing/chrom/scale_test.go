@@ -21,6 +21,7 @@ func caseYAML(productRf, impurityRf, purity, nearest float64, extra string) stri
 //     10²–10³ theoretical plates (from memory; flash beds are short and run
 //     far above the optimum velocity).
 func TestPlateHeightPublished(t *testing.T) {
+	t.Parallel()
 	hmin := math.Inf(1)
 	for nu := 0.5; nu < 50; nu += 0.05 {
 		hmin = math.Min(hmin, KnoxPlateHeight(nu, 1, 2, 0.05))
@@ -49,6 +50,7 @@ func TestPlateHeightPublished(t *testing.T) {
 // The two rules part by more than 2× here (theory, capacity-bounded, about
 // 23 : 1 against the table's 59 : 1), which must be a warning.
 func TestEasySeparationWithinPractice(t *testing.T) {
+	t.Parallel()
 	sc := loadScenario(t, caseYAML(0.40, 0.10, 0.95, 0.04, ""))
 	coef := testCoefficients()
 	for _, m := range []float64{1e-4, 0.01, 1} {
@@ -82,6 +84,7 @@ func TestEasySeparationWithinPractice(t *testing.T) {
 // several hundred for the hardest"; Still's table gives 59 and 147 at its
 // two classes), each with at least half the product recovered at 98 %.
 func TestSeparationsAcrossScale(t *testing.T) {
+	t.Parallel()
 	coef := testCoefficients()
 	cases := []struct {
 		name     string
@@ -116,6 +119,7 @@ func TestSeparationsAcrossScale(t *testing.T) {
 // recovers more than ΔRf 0.08, and for each the recovery falls as the load
 // rises.
 func TestRecoveryFollowsSeparationAndLoad(t *testing.T) {
+	t.Parallel()
 	coef := testCoefficients()
 	rec := func(p, i, load float64) float64 {
 		a := analyse(loadScenario(t, caseYAML(p, i, 0.90, 0.05, "")), coef)
@@ -144,6 +148,7 @@ func TestRecoveryFollowsSeparationAndLoad(t *testing.T) {
 // A separation the bed cannot resolve is not feasible, with the reason and
 // the ΔRf that would do (issue: product Rf 0.350 against 0.345).
 func TestUnresolvableIsNotFeasible(t *testing.T) {
+	t.Parallel()
 	sc := loadScenario(t, caseYAML(0.350, 0.345, 0.90, 0.05, ""))
 	u := Run(sc, testCoefficients(), testSite(), 0.01)
 	if u.Feasible {
@@ -162,6 +167,7 @@ func TestUnresolvableIsNotFeasible(t *testing.T) {
 // is collected; EU List of Waste 07 05 03* applies to halogenated solvent
 // streams only).
 func TestDryLoadSolventIsItsOwnStream(t *testing.T) {
+	t.Parallel()
 	sc := loadScenario(t, caseYAML(0.30, 0.42, 0.82, 0.10, "  loading: dry\n  loading_solvent: dichloromethane\n"))
 	u := Run(sc, testCoefficients(), testSite(), 5)
 	var dry, spent, wet *usage.Stream
@@ -199,6 +205,7 @@ func TestDryLoadSolventIsItsOwnStream(t *testing.T) {
 // faster than a bench one) and the runs are counted in working days; more
 // than one chemist's week is a warning.
 func TestTenKilogramsOnProcessEquipment(t *testing.T) {
+	t.Parallel()
 	sc := loadScenario(t, caseYAML(0.30, 0.42, 0.82, 0.10, ""))
 	u := Run(sc, testCoefficients(), testSite(), 10)
 	if d := figure(t, u, "column_diameter"); d <= 0.3 {
@@ -222,6 +229,7 @@ func TestTenKilogramsOnProcessEquipment(t *testing.T) {
 // largest in several runs beyond it; a site listing cartridges gets a
 // cartridge candidate with its use charged per cartridge.
 func TestCartridges(t *testing.T) {
+	t.Parallel()
 	carts := []SiteCartridge{{Name: "40 g", Silica: 0.04, MaxLoad: 0.004, Flow: 40e-6 / 60, UseItem: "use 40"}, {Name: "330 g", Silica: 0.33, MaxLoad: 0.033, Flow: 200e-6 / 60, UseItem: "use 330"}}
 	if i, n := ChooseCartridge(0.1, 0.002, carts); i != 1 || n != 1 {
 		t.Errorf("0.1 kg silica: cartridge %d × %d", i, n)
@@ -246,6 +254,7 @@ func TestCartridges(t *testing.T) {
 // A site with nothing to run a column on gives a usage that is not
 // feasible, never a panic.
 func TestEmptySite(t *testing.T) {
+	t.Parallel()
 	sc := loadScenario(t, caseYAML(0.30, 0.42, 0.82, 0.10, ""))
 	for _, s := range []Site{{}, {Columns: testSite().Columns}, {Evaporators: testSite().Evaporators}} {
 		if u := Run(sc, testCoefficients(), s, 0.01); u.Feasible || u.Reason == "" {

@@ -18,6 +18,7 @@ const (
 // silica : sample ≈ 60 : 1 (ΔRf ≥ 0.2) and ≈ 150 : 1 (ΔRf ≥ 0.1). Tolerance 5 %: the table's rows do not scale exactly with
 // d² (the 40 mm row lists 600 mg, not 640 mg).
 func TestStillImpliedRatios(t *testing.T) {
+	t.Parallel()
 	easy, hard := StillSilicaRatios(testBedHeight, testBedDensity)
 	if math.Abs(easy/60-1) > 0.05 {
 		t.Errorf("ΔRf ≥ 0.2: silica : sample = %.1f, want about 60", easy)
@@ -55,6 +56,7 @@ func TestStillImpliedRatios(t *testing.T) {
 //     hand-packing overhead the model does not have, so it is only checked
 //     to lie below the table value and above a third of it.
 func TestStillTableReproduced(t *testing.T) {
+	t.Parallel()
 	coef := testCoefficients()
 	cal := Calibrate(testBedHeight, testBedDensity)
 	for _, row := range StillTable {
@@ -101,6 +103,7 @@ func TestStillTableReproduced(t *testing.T) {
 // 10 %-impurity crude. Above ΔRf 0.2 the table gives no further credit (its
 // column is "ΔRf ≥ 0.2"), so only theory may go below it there.
 func TestRoutesAgreeAcrossRange(t *testing.T) {
+	t.Parallel()
 	cal := Calibrate(testBedHeight, testBedDensity)
 	t.Logf("calibration: q_s = %.4f g/g, max error %.1f %%, rms %.1f %%", cal.Qs, cal.MaxError*100, cal.RMSLog*100)
 	if cal.MaxError > 0.15 {
@@ -129,6 +132,7 @@ func TestRoutesAgreeAcrossRange(t *testing.T) {
 // vanishes as α → 1; with equal amounts at α = 2, hand computation:
 // (1 + 1)·1/(2·3) = 1/3.
 func TestTouchingLoad(t *testing.T) {
+	t.Parallel()
 	if got := TouchingLoad(2, 1); math.Abs(got-1.0/3) > 1e-12 {
 		t.Errorf("Lf(α=2, r=1) = %g, want 1/3", got)
 	}
@@ -159,6 +163,7 @@ func TestTouchingLoad(t *testing.T) {
 // interparticle porosity is 1 − 0.5·(1/2.2 + 0.75) = 0.398, within the
 // 0.35–0.45 usual for packed beds (common practice, no source).
 func TestColumnVolumePerGram(t *testing.T) {
+	t.Parallel()
 	got := ColumnVolumePerMass(500, 2200) * 1000 // mL/g
 	if math.Abs(got-1.5455) > 0.001 {
 		t.Errorf("V0 = %.4f mL/g, want 1.5455", got)
@@ -177,6 +182,7 @@ func TestColumnVolumePerGram(t *testing.T) {
 // above the largest; the silica packed never falls short of what is needed
 // and the bed stays between the shortest and tallest allowed.
 func TestChooseColumn(t *testing.T) {
+	t.Parallel()
 	ds := []SiteColumn{{Diameter: 0.02}, {Diameter: 0.04}, {Diameter: 0.1}}
 	for _, need := range []float64{0.001, 0.02, 0.5, 0.6, 5, 50} {
 		c, _ := ChooseColumn(need, 0.10, 0.20, testBedDensity, ds)

@@ -10,6 +10,7 @@ import (
 // abstract; common practice); an Rf of 0.35 elutes at 2.857 CV and an Rf of
 // 0.5 at 2 CV (hand computation from those relations).
 func TestTLCRelations(t *testing.T) {
+	t.Parallel()
 	cases := []struct {
 		rf, k, cv float64
 	}{
@@ -36,6 +37,7 @@ func TestTLCRelations(t *testing.T) {
 // with the higher Rf has the smaller k and the smaller CV (common practice,
 // no source). Selectivity and the difference in elution volume do not depend on the order of arguments.
 func TestElutionOrderAndSelectivity(t *testing.T) {
+	t.Parallel()
 	upper, lower := 0.45, 0.30
 	if !(ElutionCV(upper) < ElutionCV(lower)) {
 		t.Fatalf("upper spot must elute first")

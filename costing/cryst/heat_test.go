@@ -12,6 +12,7 @@ func relErr(got, want float64) float64 { return math.Abs(got/want - 1) }
 // of cooling for a well-stirred batch; standard heat transfer, from
 // memory), with hand numbers.
 func TestJacketTimeAgainstIntegration(t *testing.T) {
+	t.Parallel()
 	// 10 kg of water, c_p = 4184 J/(kg·K) (about 4.18 kJ/(kg·K) near 25 °C,
 	// IAPWS-95, from memory), U = 200 W/(m²·K), A = 0.25 m²; from 80 °C to
 	// 20 °C with the jacket at 10 °C.
@@ -55,6 +56,7 @@ func TestJacketTimeAgainstIntegration(t *testing.T) {
 // the time ∝ V^(1/3): eight times the volume takes exactly twice as long
 // (derived from the closed form of JacketTime).
 func TestCoolingTimeScalesAsCubeRoot(t *testing.T) {
+	t.Parallel()
 	rhoCp := 789 * 2440.0 // ethanol, J/(m³·K): 0.789 g/mL × 112.3 J/(mol·K)/46.07 g/mol (CRC Handbook of Chemistry and Physics, from memory)
 	tm := func(V float64) float64 {
 		return JacketTime(rhoCp*V, 200, WettedArea(AreaFactorCylinder, V), 348.15, 273.15, 263.15)
@@ -73,6 +75,7 @@ func TestCoolingTimeScalesAsCubeRoot(t *testing.T) {
 // Shape factors against the geometry of a sphere and of a cylinder with
 // height equal to diameter (derived, exact to rounding).
 func TestAreaFactors(t *testing.T) {
+	t.Parallel()
 	V := 1e-3 // 1 L
 	D := math.Cbrt(6 * V / math.Pi)
 	if a := math.Pi * D * D / math.Pow(V, 2.0/3); relErr(AreaFactorSphere, a) > 1e-12 || math.Abs(AreaFactorSphere-4.836) > 1e-3 {
@@ -85,6 +88,7 @@ func TestAreaFactors(t *testing.T) {
 }
 
 func TestEffectiveHeatCapacity(t *testing.T) {
+	t.Parallel()
 	// 1000 J/K batch releasing 50 kJ over a 50 K drop behaves like 2000 J/K.
 	if c := EffectiveHeatCapacity(1000, 50e3, -50); c != 2000 {
 		t.Errorf("C_eff = %v", c)

@@ -31,6 +31,7 @@ func basePass(sHot, sCold, excess float64) Pass {
 // 1.3 g/mL) and c_w the wash's product concentration, so the tolerance is
 // that bound: about 0.1–0.3 % here.
 func TestBenzoicAcidRecovery(t *testing.T) {
+	t.Parallel()
 	const sCold, sHot = 3.4, 68.0
 	for _, c := range []struct {
 		excess, washLoss float64
@@ -64,6 +65,7 @@ func TestBenzoicAcidRecovery(t *testing.T) {
 // dissolves in 185 mL of water (5.4 g/L at about 25 °C) and in 20 mL of
 // boiling water (50 g/L). Hand: 1 − 1.1·5.4/50 = 0.881 before washing.
 func TestAcetanilideRecovery(t *testing.T) {
+	t.Parallel()
 	p := basePass(50, 5.4, 0.10)
 	p.WashLoss, p.WashLossGiven = 0, true
 	r := p.Run(Feed{Product: 0.005})
@@ -76,6 +78,7 @@ func TestAcetanilideRecovery(t *testing.T) {
 // bound the mother liquor sets: 1 − (product in the filtrate)/(product in).
 // Identity checks (derived); tolerance 1e-12 relative (rounding).
 func TestMassBalanceCloses(t *testing.T) {
+	t.Parallel()
 	cases := []struct {
 		name string
 		p    Pass
@@ -115,6 +118,7 @@ func TestMassBalanceCloses(t *testing.T) {
 
 // When the liquor keeps everything, nothing crystallises and the pass says so.
 func TestNothingCrystallises(t *testing.T) {
+	t.Parallel()
 	r := basePass(20, 19, 0.1).Run(Feed{Product: 1, Impurity: 0.1})
 	if r.Crystallised > 0 || r.Out.Total() != 0 || r.MassBalanceError() > 1e-12 {
 		t.Errorf("%+v", r)
@@ -132,6 +136,7 @@ func TestNothingCrystallises(t *testing.T) {
 //
 //	k = ⌈ ln(r_target / r_0) / ln((1 − f)/y) ⌉,  r = I/P
 func TestPurifyPassesByPurgeFactor(t *testing.T) {
+	t.Parallel()
 	p := basePass(160, 15, 0.1)
 	p.ByPurge, p.Purge = true, 0.8
 	p.WashCakeVolumes, p.Saturation = 0, 0
@@ -161,6 +166,7 @@ func TestPurifyPassesByPurgeFactor(t *testing.T) {
 // a = (1+e)·S_imp,cold/S_hot and b = (1+e)·S_cold/S_hot, which grows
 // when r > a/b = S_imp,cold/S_cold).
 func TestPurifyStallsOnCoCrystallisation(t *testing.T) {
+	t.Parallel()
 	p := basePass(160, 15, 0.1)
 	p.ImpHot, p.ImpCold = 100, 1 // S_imp,cold/S_cold = 0.067 < 0.15/0.85
 	o := Purify(p, Feed{Product: 0.85, Impurity: 0.15}, 0.99, 4)
@@ -180,6 +186,7 @@ func TestPurifyStallsOnCoCrystallisation(t *testing.T) {
 }
 
 func TestSecondCrop(t *testing.T) {
+	t.Parallel()
 	// 1 L of liquor at 15 g/L with 5 g of impurity, concentrated to 30 %:
 	// the crop is 15 − 0.3·15 = 10.5 g of product (derived), with
 	// 10.5·0.03/0.97 g of impurity at 97 % purity.
@@ -198,6 +205,7 @@ func TestSecondCrop(t *testing.T) {
 }
 
 func TestChooseVessel(t *testing.T) {
+	t.Parallel()
 	fl, re := DefaultFlasksM3, DefaultReactorsM3
 	cases := []struct {
 		liquid  float64

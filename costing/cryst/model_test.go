@@ -58,6 +58,7 @@ crystallization:
 // plus the small retained-liquor term (see TestBenzoicAcidRecovery), and
 // it lies in the plausible range below the 95 % ceiling.
 func TestRunBenzoicAcid(t *testing.T) {
+	t.Parallel()
 	sc := load(t, benzoicYAML)
 	u := Run(sc, source.NewSet(Defaults()), 0.005)
 	if !u.Feasible {
@@ -91,6 +92,7 @@ func TestRunBenzoicAcid(t *testing.T) {
 // (common practice, no source: teaching and process recrystallizations of
 // one pass). Three published systems, each with the model's defaults.
 func TestTypicalRecovery(t *testing.T) {
+	t.Parallel()
 	// Naphthalene from methanol, Ward, H. L. J. Phys. Chem. 1926, 30, 1316
 	// (IUPAC-NIST Solubility Database, confirmed): x = 0.0107 at 274.0 K and
 	// 0.052 at 317.1 K, converted to g/L of methanol with ρ = 0.791 g/mL
@@ -169,6 +171,7 @@ crystallization:
 `
 
 func TestRunBookkeepingCloses(t *testing.T) {
+	t.Parallel()
 	sc := load(t, multiYAML)
 	coef := source.NewSet(Defaults())
 	for _, m := range []float64{0.05, 5, 500} {
@@ -232,6 +235,7 @@ func TestRunBookkeepingCloses(t *testing.T) {
 // An impurity that exceeds its own solubility at the isolation temperature
 // co-crystallises; the model must say the target is not reachable and why.
 func TestRunNotReachable(t *testing.T) {
+	t.Parallel()
 	y := strings.NewReplacer(`{"0 C": "8 g/L", "70 C": "150 g/L"}`, `{"0 C": "0.5 g/L", "70 C": "150 g/L"}`,
 		"  second_crop: {concentrate_to: \"40 %\", purity: 0.999}\n", "").Replace(multiYAML)
 	u := Run(load(t, y), source.NewSet(Defaults()), 0.05)
@@ -256,6 +260,7 @@ func TestRunNotReachable(t *testing.T) {
 // grows as V^(1/3) within one vessel type, large batches split into
 // several, and no figure or demand is NaN or infinite.
 func TestRunAcrossScale(t *testing.T) {
+	t.Parallel()
 	sc := load(t, multiYAML)
 	coef := source.NewSet(Defaults())
 	var oneTime []usage.Demand
@@ -318,6 +323,7 @@ func TestRunAcrossScale(t *testing.T) {
 // The ideal-solubility route runs end to end, and the model's S(hot) is
 // the Schröder–van Laar value for the product in the liquid.
 func TestRunIdealEstimate(t *testing.T) {
+	t.Parallel()
 	// Naphthalene data as in the solubility tests (Lee & Warner 1935;
 	// Yaws et al.; both confirmed); ethanol as the solvent is invented.
 	y := `name: ideal
@@ -360,6 +366,7 @@ crystallization:
 // Every coefficient is keyed under the method, converts to its display
 // unit and names a source or practice.
 func TestDefaults(t *testing.T) {
+	t.Parallel()
 	s := source.NewSet(Defaults()) // panics on a duplicate key
 	for _, c := range s.Sorted() {
 		if !strings.HasPrefix(c.Key, Method+".") || c.Method != Method {
@@ -414,6 +421,7 @@ func FuzzRun(f *testing.F) {
 // A setting that makes the physics meaningless gives Feasible=false with
 // the setting named, not a NaN or a panic.
 func TestRunRefusesBadSettings(t *testing.T) {
+	t.Parallel()
 	sc := load(t, benzoicYAML)
 	for _, c := range []struct {
 		key string

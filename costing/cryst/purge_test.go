@@ -18,6 +18,7 @@ import (
 // crystals take up 0.1 × (1 − 0.088^0.05) = 0.1 × (1 − 0.885572) =
 // 0.011443 kg (derived).
 func TestDoernerHoskinsUptake(t *testing.T) {
+	t.Parallel()
 	p := basePass(150, 12, 0.10)
 	p.Inclusion, p.Saturation, p.WashCakeVolumes = 0, 0, 0 // uptake alone
 	in := Feed{Product: 1, Impurity: 0.1}
@@ -53,6 +54,7 @@ func TestDoernerHoskinsUptake(t *testing.T) {
 // occluded liquor rises with the cooling rate (Mullin, Crystallization,
 // 4th ed., 2001, ch. 6, from memory: faster growth, more inclusions).
 func TestInclusionLowersTheCeiling(t *testing.T) {
+	t.Parallel()
 	p := basePass(150, 12, 0.10)
 	in := Feed{Product: 1, Impurity: 0.1}
 	prev := 1.0
@@ -102,6 +104,7 @@ func purgeCase(lambda, target string) string {
 // the reason, without a purge factor; a harder impurity (λ = 0.15 against
 // 0.02) needs more passes and loses more product.
 func TestPurgeLimits(t *testing.T) {
+	t.Parallel()
 	coef := source.NewSet(Defaults())
 	u := Run(load(t, purgeCase("0.8", "0.995")), coef, 0.01)
 	if u.Feasible {

@@ -17,6 +17,7 @@ import (
 // t = 1.5e-3·1e10·125·0.25/(2·2e5) + 1.5e-3·1e10·0.5/2e5
 // = 1171.875 + 37.5 = 1209.375 s (derived).
 func TestCakeFiltrationAgainstDarcy(t *testing.T) {
+	t.Parallel()
 	V, A, dp, mu, alpha, c, Rm := 0.5, 1.0, 2e5, 1.5e-3, 1e10, 125.0, 1e10
 	got := CakeFiltrationTime(V, A, dp, mu, alpha, c, Rm)
 	if math.Abs(got-1209.375) > 1e-6 {
@@ -59,6 +60,7 @@ func TestCakeFiltrationAgainstDarcy(t *testing.T) {
 // dried to 0.5 % LOD (0.4 kg left) at 1 kg/(m²·h) over 1 m² takes
 // 17.6 h (hand computation); a cake already drier takes no time.
 func TestDryingTime(t *testing.T) {
+	t.Parallel()
 	if got := DryingTime(18, 80, 0.005, 1.0/3600, 1) / 3600; math.Abs(got-17.6) > 1e-9 {
 		t.Errorf("%g h, hand 17.6 h", got)
 	}
@@ -71,6 +73,7 @@ func TestDryingTime(t *testing.T) {
 // cylinder factor) takes 20 min + 4.61 h, a 500 mL flask (0.0305 m²)
 // 20 min + 1.8 min (hand computation with the defaults).
 func TestCleaningScales(t *testing.T) {
+	t.Parallel()
 	s := source.NewSet(Defaults())
 	t0, k := s.Get(KeyCleanTime), s.Get(KeyCleanPerArea)
 	big := CleaningTime(t0, k, WettedArea(AreaFactorCylinder, 1)) / 3600
@@ -87,6 +90,7 @@ func TestCleaningScales(t *testing.T) {
 // source). At the bench one chemist's few hours. Filtration and drying
 // grow with the batch (a deeper cake on a filter sized with the reactor).
 func TestHoursScale(t *testing.T) {
+	t.Parallel()
 	sc := load(t, demoLikeYAML)
 	coef := source.NewSet(Defaults())
 	var hands, filt, dry []float64
@@ -146,6 +150,7 @@ crystallization:
 // Every coefficient of the uptake and of the scaling times carries a
 // physical range that holds its default.
 func TestScaleDefaultsBounded(t *testing.T) {
+	t.Parallel()
 	for _, c := range scaleDefaults() {
 		if !c.Bounded() || !c.InRange(c.SI) || c.Lo > c.Hi {
 			t.Errorf("%s: default %g outside [%g, %g]", c.Key, c.SI, c.Lo, c.Hi)

@@ -32,6 +32,7 @@ func finite(t *testing.T, u usage.Usage) {
 // and so does the mass balance (crude = product cut + every waste stream
 // but the rinse). These are identities, checked to 1e-9.
 func TestRunBalances(t *testing.T) {
+	t.Parallel()
 	sc := load(t, heavyImpurity)
 	for _, m := range []float64{0.02, 2, 200} {
 		u := Run(sc, coefficients(), m)
@@ -88,6 +89,7 @@ func TestRunBalances(t *testing.T) {
 // and for a product left in the pot by a simple distillation (properties of
 // any distillation; no source needed beyond the equations).
 func TestPurityTargetProperties(t *testing.T) {
+	t.Parallel()
 	stripped := strings.NewReplacer(`boiling_point: "235 C"`, `boiling_point: "150 C"`, "column_stages: 8", "column_stages: 0").Replace(heavyImpurity)
 	distilled := strings.Replace(heavyImpurity, "column_stages: 8", "column_stages: 15", 1)
 	for name, y := range map[string]string{"product distilled over": distilled, "impurity stripped off": stripped} {
@@ -110,6 +112,7 @@ func TestPurityTargetProperties(t *testing.T) {
 
 // Each way the method can fail gives Feasible = false with its reason.
 func TestInfeasible(t *testing.T) {
+	t.Parallel()
 	rep := func(pairs ...string) string { return strings.NewReplacer(pairs...).Replace(heavyImpurity) }
 	cases := []struct {
 		name, yaml string
@@ -144,6 +147,7 @@ func TestInfeasible(t *testing.T) {
 // 80 °C 47.414 kPa (Source: IAPWS-IF97 saturation tables, from memory;
 // IF97 eq. 30 gives 19.9458 and 47.4147). Tolerance 0.3 % (Antoine fit).
 func TestOperatingPressureWater(t *testing.T) {
+	t.Parallel()
 	y := `name: t
 masses: ["1 kg"]
 crude: {purity: 0.9}
@@ -179,6 +183,7 @@ func mustNum(s string) float64 {
 // A user's setting overrides a default: without rinse solvent there is no
 // solvent demand and no rinse waste.
 func TestSettingOverride(t *testing.T) {
+	t.Parallel()
 	coef := coefficients()
 	if err := coef.Override(KeyRinse, units.Quantity{SI: 0, Dim: units.None}, "0"); err != nil {
 		t.Fatal(err)
@@ -208,6 +213,7 @@ func TestSettingOverride(t *testing.T) {
 // Cautions follow the scenario: vacuum glassware only under vacuum;
 // bumping, dryness and thermal stability always; peroxide formers by name.
 func TestCautions(t *testing.T) {
+	t.Parallel()
 	all := strings.Join(Cautions(load(t, heavyImpurity)), "\n")
 	for _, w := range []string{"implode", "Bumping", "Boiling chips do not work under vacuum", "Never distil to dryness", "DSC", "150 °C"} {
 		if !strings.Contains(all, w) {
@@ -237,6 +243,7 @@ func TestCautions(t *testing.T) {
 // figure or a demand; a feasible run meets its purity target and closes
 // its product balance. Common practice, no source: these are properties.
 func TestGeneratedInputs(t *testing.T) {
+	t.Parallel()
 	rng := rand.New(rand.NewPCG(1, 2))
 	n, feasible := 0, 0
 	for i := 0; i < 400; i++ {

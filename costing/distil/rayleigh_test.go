@@ -28,6 +28,7 @@ func rayleighNumeric(x0, x, alpha float64, n int) float64 {
 // W/W0 = (x/x0)·((1 − x0)/(1 − x))² = 0.5 · (0.5/0.75)² = 2/9 (Source:
 // hand computation from Rayleigh 1902's equation at constant α).
 func TestRayleigh(t *testing.T) {
+	t.Parallel()
 	if got := RayleighRatio(0.5, 0.25, 2); math.Abs(got-2.0/9) > 1e-12 {
 		t.Errorf("W/W0 = %.12f, want 2/9", got)
 	}
@@ -59,6 +60,7 @@ func TestRayleigh(t *testing.T) {
 // The batch closes its mass balances (total and light moles) in both
 // modes, meets the purity target, and keeps the minimum residue.
 func TestBatchBalances(t *testing.T) {
+	t.Parallel()
 	cases := []Batch{
 		{X0: 0.8, AlphaEq: 30, ProductLight: true, Target: 0.98, Forerun: 0.03, Holdup: 0.02, MinResidue: 0.05},
 		{X0: 0.8, AlphaEq: 2.5, ProductLight: true, Target: 0.9, Forerun: 0.03, Holdup: 0.01, MinResidue: 0.05},

@@ -19,6 +19,7 @@ import (
 // Molar masses: benzene C6H6 78.11, toluene C7H8 92.14 g/mol (IUPAC
 // standard atomic weights).
 func TestBenzeneTolueneShortcut(t *testing.T) {
+	t.Parallel()
 	const alpha, mB, mT = 2.5, 78.11, 92.14
 	xF, xD, xB := MoleFraction(0.40, mB, mT), MoleFraction(0.97, mB, mT), MoleFraction(0.02, mB, mT)
 	// The book's mole fractions to its three figures.
@@ -66,6 +67,7 @@ func TestBenzeneTolueneShortcut(t *testing.T) {
 // memory; Eduljee's fit is not meant for X → 0, where it gives 0.75).
 // Stages and reflux are inverses of each other.
 func TestGilliland(t *testing.T) {
+	t.Parallel()
 	if GillilandMolokanov(0) != 1 || GillilandMolokanov(1) != 0 {
 		t.Errorf("limits: Y(0) = %v, Y(1) = %v; want 1 and 0", GillilandMolokanov(0), GillilandMolokanov(1))
 	}
@@ -103,6 +105,7 @@ func TestGilliland(t *testing.T) {
 // made-up number), and α^N_min carries x_B to x_D: the total-reflux identity
 // x_D/(1−x_D) = α^N_min · x_B/(1−x_B).
 func TestFenskeIdentityAndRange(t *testing.T) {
+	t.Parallel()
 	n := Fenske(0.95, 0.05, 2.5)
 	// Hand computation: ln(19 × 19)/ln 2.5 = 5.8889/0.91629 = 6.4269.
 	if math.Abs(n-6.4269) > 0.0001 {

@@ -12,6 +12,7 @@ import (
 // with the wall area: the 100 L still's sphere of 1.042 m² takes 20 min +
 // 1.042 h (hand computation with the defaults, derived).
 func TestHoursScaleWithStill(t *testing.T) {
+	t.Parallel()
 	sc := load(t, heavyImpurity)
 	coef := coefficients()
 	small, big := Run(sc, coef, 0.02), Run(sc, coef, 200)

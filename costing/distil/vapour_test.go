@@ -13,6 +13,7 @@ import (
 // (the built-in Antoine sets follow IAPWS-IF97 to about 0.15 %, as the
 // solvent package's tests check).
 func TestWaterAtReducedPressure(t *testing.T) {
+	t.Parallel()
 	water := newSpecies(scenario.Compound{Name: "water", Solvent: "water", Data: builtin(t, "water"), MolarMass: builtin(t, "water").MolarMass(), HVapGiven: true}, 0, coefficients())
 	cases := []struct{ celsius, kPa float64 }{
 		{60, 19.946}, // Source: IAPWS-IF97 steam tables, saturation pressure 19.946 kPa at 60 °C (from memory; IF97 eq. 30 gives 19.9458, checked in package solvent's tests)
@@ -49,6 +50,7 @@ func TestWaterAtReducedPressure(t *testing.T) {
 // Tolerance 1.5 %: the handbook prints 3–4 figures and the Antoine fits
 // follow their data to about 1 %; boiling points to 0.5 K.
 func TestSolventsAtOperatingTemperatures(t *testing.T) {
+	t.Parallel()
 	// Source for each pressure: CRC Handbook of Chemistry and Physics,
 	// vapour pressure of organic compounds table (mmHg at the temperature;
 	// edition not checked, from memory).
@@ -101,6 +103,7 @@ func TestSolventsAtOperatingTemperatures(t *testing.T) {
 // the boiling point is too small (ΔHvap grows as T falls, Watson's
 // relation), so the pressure must come out high, by less than 10 %.
 func TestClausiusClapeyronCompound(t *testing.T) {
+	t.Parallel()
 	y := `name: t
 masses: ["1 g"]
 crude: {purity: 0.9}
@@ -140,6 +143,7 @@ distillation:
 // within 2 %, as
 // package solvent finds for ΔZ = 0.96.
 func TestEnthalpyEstimates(t *testing.T) {
+	t.Parallel()
 	y := `name: t
 masses: ["1 g"]
 crude: {purity: 0.9}
@@ -182,6 +186,7 @@ distillation:
 // toluene–n-heptane bubble point at 1 atm with these Antoine sets is
 // between 98.4 and 110.6 °C (pure boiling points, CRC from memory).
 func TestBubblePoint(t *testing.T) {
+	t.Parallel()
 	hep, tol := builtin(t, "n-heptane"), builtin(t, "toluene")
 	tb0 := BubblePoint(0, hep, tol, 101325)
 	tb1 := BubblePoint(1, hep, tol, 101325)

@@ -16,6 +16,7 @@ import (
 const header = "item,kind,size,throughput,max_load,hourly_rate,ownership,price,currency,service_life,source\n"
 
 func TestDefaultReadsAndCoversEveryKind(t *testing.T) {
+	t.Parallel()
 	d := Default()
 	for _, k := range Kinds {
 		if len(d.OfKind(k)) == 0 {
@@ -41,6 +42,7 @@ func TestDefaultReadsAndCoversEveryKind(t *testing.T) {
 }
 
 func TestReadReportsFileLineFieldAndWhatIsValid(t *testing.T) {
+	t.Parallel()
 	in := header +
 		"a,column,,,,,owned,,,,\n" + // line 2: size missing
 		"b,pump,1 L,,,,owned,,,,\n" + // line 3: unknown kind
@@ -78,6 +80,7 @@ func TestReadReportsFileLineFieldAndWhatIsValid(t *testing.T) {
 }
 
 func TestReadRefusesDuplicatesMixedCurrenciesAndEmptyTables(t *testing.T) {
+	t.Parallel()
 	in := header + "a,column,10 mm,,,5,owned,,EUR,,\nA,column,20 mm,,,,owned,,,,\nb,column,20 mm,,,5,owned,,USD,,\n"
 	_, err := Read(strings.NewReader(in), "eq.csv")
 	for _, w := range []string{`eq.csv:3: item: "A" is already listed on line 2`, "eq.csv:4: currency: USD here but EUR on line 2"} {
@@ -94,6 +97,7 @@ func TestReadRefusesDuplicatesMixedCurrenciesAndEmptyTables(t *testing.T) {
 }
 
 func TestWithPricesAddsChargesInTheSameCurrency(t *testing.T) {
+	t.Parallel()
 	pt, err := prices.Read(bytes.NewReader(templates.Prices), "prices.csv")
 	if err != nil {
 		t.Fatal(err)

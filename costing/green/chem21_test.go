@@ -13,6 +13,7 @@ import (
 // as reproduced in AI4Green's CHEM21_full.csv (read; confirmed), except
 // tetrahydrofuran (from memory).
 func TestCHEM21Classes(t *testing.T) {
+	t.Parallel()
 	for _, c := range []struct {
 		id   string
 		want GuideClass
@@ -47,6 +48,7 @@ func TestCHEM21Classes(t *testing.T) {
 // as reproduced by AI4Green, confirmed) — the rule itself is from memory,
 // so this is the check on it — and on published single cases.
 func TestDefaultRanking(t *testing.T) {
+	t.Parallel()
 	n := 0
 	for _, e := range Entries() {
 		if e.Mark != source.Confirmed {
@@ -68,6 +70,7 @@ func TestDefaultRanking(t *testing.T) {
 // TestEveryBuiltinHasClass guards that each built-in solvent has a CHEM21
 // ranking, found by ID and by CAS number.
 func TestEveryBuiltinHasClass(t *testing.T) {
+	t.Parallel()
 	for _, s := range solvent.Builtin().All() {
 		if _, ok := Class(s.ID); !ok {
 			t.Errorf("built-in solvent %q has no CHEM21 class", s.ID)
@@ -86,6 +89,7 @@ func TestEveryBuiltinHasClass(t *testing.T) {
 }
 
 func TestGreenSources(t *testing.T) {
+	t.Parallel()
 	seen := map[string]bool{}
 	for _, c := range Sources() {
 		if !strings.HasPrefix(c.Key, "green.chem21.") || c.Source == "" || c.Mark == "" {

@@ -70,6 +70,7 @@ func closedColumn(t *testing.T, b *solvent.Book) usage.Usage {
 // the definitions), with and without water, and the recycling convention.
 // Tolerance 1e-12 relative: the sums differ only by rounding.
 func TestIdentity(t *testing.T) {
+	t.Parallel()
 	b := solvent.Builtin()
 	u := closedColumn(t, b)
 	m, err := Compute(u, b)
@@ -123,6 +124,7 @@ func TestIdentity(t *testing.T) {
 // 5-50, pharmaceuticals 25->100 kg waste/kg product; confirmed in a
 // reproduction of the table) as an order-of-magnitude check.
 func TestSheldonRanges(t *testing.T) {
+	t.Parallel()
 	b := solvent.Builtin()
 	ea, hex, et := rho(t, b, "ethyl acetate"), rho(t, b, "n-hexane"), rho(t, b, "ethanol")
 
@@ -193,6 +195,7 @@ func TestSheldonRanges(t *testing.T) {
 // share 1259.7/1299.25 = 0.96956; with 0.1 kg product the solvent intensity
 // is 1.29925/0.1 = 12.9925 kg/kg.
 func TestHalogenatedShare(t *testing.T) {
+	t.Parallel()
 	b := solvent.Builtin()
 	u := usage.Usage{Method: "chromatography", CrudeKg: 0.12, ProductOutKg: 0.1, Demands: []usage.Demand{
 		{Item: "dichloromethane", Group: usage.Materials, Qty: 950e-6, Dim: units.Volume},
@@ -217,6 +220,7 @@ func TestHalogenatedShare(t *testing.T) {
 // TestComputeErrors checks that bad input gives an error naming the method
 // and the demand, never a silent default.
 func TestComputeErrors(t *testing.T) {
+	t.Parallel()
 	b := solvent.Builtin()
 	ok := func() usage.Usage { return closedColumn(t, b) }
 	cases := []struct {
@@ -263,6 +267,7 @@ func TestComputeErrors(t *testing.T) {
 // 0.72 kg of product with 3.6 g of impurity (99.5 %); the other 0.2764 kg
 // of solids and the ethanol are in the mother liquor.
 func TestIsolatedImpurity(t *testing.T) {
+	t.Parallel()
 	b := solvent.Builtin()
 	et := rho(t, b, "ethanol")
 	u := usage.New("crystallization", 1, 0.8)

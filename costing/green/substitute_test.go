@@ -29,6 +29,7 @@ func replaces(ss []Suggestion, ids ...string) bool {
 
 // TestSubstitutes checks suggestions against their sources.
 func TestSubstitutes(t *testing.T) {
+	t.Parallel()
 	// Source: CHEM21 table, substitution column: hexane → heptane (confirmed).
 	if !replaces(Substitutes("n-hexane", Chromatography), "n-heptane") {
 		t.Errorf("hexane: heptane not suggested")
@@ -66,6 +67,7 @@ func TestSubstitutes(t *testing.T) {
 // solvents, carries a source and a mark, and replaces a solvent by ones no
 // worse in the CHEM21 ranking, at least one of them better.
 func TestSubstitutesAreBetter(t *testing.T) {
+	t.Parallel()
 	book := solvent.Builtin()
 	for from, rules := range substitutions {
 		orig, ok := Class(from)
@@ -104,6 +106,7 @@ func TestSubstitutesAreBetter(t *testing.T) {
 }
 
 func TestParseUse(t *testing.T) {
+	t.Parallel()
 	for in, want := range map[string]Use{"Chromatography": Chromatography, "recrystallization": Crystallization, " distillation ": Distillation} {
 		if got, err := ParseUse(in); err != nil || got != want {
 			t.Errorf("ParseUse(%q) = %v, %v", in, got, err)

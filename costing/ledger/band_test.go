@@ -33,6 +33,7 @@ func bandTable(t *testing.T) *prices.Table {
 // Expected amounts are hand computations: quantity × the band's price,
 // rounded to the cent.
 func TestPriceBands(t *testing.T) {
+	t.Parallel()
 	tb := bandTable(t)
 	u := usage.Usage{Method: "m", Demands: []usage.Demand{
 		{Item: "n-heptane", Label: "eluent", Group: usage.Materials, Qty: 0.0803, Dim: units.Volume}, // 80.3 L
@@ -86,6 +87,7 @@ func TestPriceBands(t *testing.T) {
 // Old tables (no from column) price exactly as before: Purchases does not
 // change a single-line item's price.
 func TestPriceBandsOldTable(t *testing.T) {
+	t.Parallel()
 	tb := eurTable(t)
 	u := usage.Usage{Method: "m", Demands: []usage.Demand{demand("ethyl acetate", usage.Materials, 1000, "L")}}
 	for _, n := range []int{1, 1000} {

@@ -66,6 +66,7 @@ func demand(item string, g usage.Group, qty float64, unit string) usage.Demand {
 
 // TestPriceLines: one demand per case, priced against eurTable.
 func TestPriceLines(t *testing.T) {
+	t.Parallel()
 	tb := eurTable(t)
 	tests := []struct {
 		name   string
@@ -135,6 +136,7 @@ func TestPriceLines(t *testing.T) {
 // from memory), not half to even (IEEE 754 roundTiesToEven, which would
 // give 0.02 for 0.025 and 2 for 2.5).
 func TestRoundingTies(t *testing.T) {
+	t.Parallel()
 	eur := eurTable(t)
 	jpy := table(t, "JPY",
 		"ethyl acetate,L,1850,CUR,solvent,,",
@@ -204,6 +206,7 @@ func TestRoundingTies(t *testing.T) {
 // add up to 0.03. Rounding the unrounded sum instead, 3 × 0.0125 = 0.0375
 // → 0.04, would leave a budget a cent away from its own lines.
 func TestTotalIsSumOfRoundedLines(t *testing.T) {
+	t.Parallel()
 	tb := eurTable(t)
 	var ds []usage.Demand
 	for _, label := range []string{"column 1", "column 2", "column 3"} {
@@ -230,6 +233,7 @@ func TestTotalIsSumOfRoundedLines(t *testing.T) {
 
 // TestLedgerMixed: a small bill with every group, including a credit.
 func TestLedgerMixed(t *testing.T) {
+	t.Parallel()
 	tb := eurTable(t)
 	u := usage.Usage{Method: "flash chromatography", Demands: []usage.Demand{
 		demand("silica gel", usage.Materials, 350, "g"),      // 17.01 (above)
@@ -288,6 +292,7 @@ func TestLedgerMixed(t *testing.T) {
 }
 
 func TestDimensionMismatch(t *testing.T) {
+	t.Parallel()
 	tb := eurTable(t)
 	d := demand("silica gel", usage.Materials, 500, "mL")
 	d.Label = "stationary phase"
@@ -310,6 +315,7 @@ func TestDimensionMismatch(t *testing.T) {
 }
 
 func TestBadQuantities(t *testing.T) {
+	t.Parallel()
 	tb := eurTable(t)
 	tests := []struct {
 		name string
@@ -337,6 +343,7 @@ func TestBadQuantities(t *testing.T) {
 }
 
 func TestMissingPricesOneUsage(t *testing.T) {
+	t.Parallel()
 	tb := eurTable(t)
 	u := usage.Usage{Method: "flash chromatography", Demands: []usage.Demand{
 		{Item: "celite", Label: "filter pad", Group: usage.Materials, Qty: 0.01, Dim: units.Mass},
@@ -376,6 +383,7 @@ func TestMissingPricesOneUsage(t *testing.T) {
 // TestPriceAllMergesMissing: a sweep of two methods at two masses; each
 // missing item is named once with each of its uses once.
 func TestPriceAllMergesMissing(t *testing.T) {
+	t.Parallel()
 	tb := eurTable(t)
 	chrom := func(kg float64) usage.Usage {
 		return usage.Usage{Method: "flash chromatography", CrudeKg: kg, Demands: []usage.Demand{
@@ -443,6 +451,7 @@ func TestPriceAllMergesMissing(t *testing.T) {
 // TestPriceAllOtherErrors: a dimension mismatch repeated at every mass is
 // reported once, together with the missing prices.
 func TestPriceAllOtherErrors(t *testing.T) {
+	t.Parallel()
 	tb := eurTable(t)
 	mk := func(kg float64) usage.Usage {
 		return usage.Usage{Method: "distillation", CrudeKg: kg, Demands: []usage.Demand{
@@ -466,6 +475,7 @@ func TestPriceAllOtherErrors(t *testing.T) {
 }
 
 func TestNoTable(t *testing.T) {
+	t.Parallel()
 	if _, err := ledger.Price(usage.Usage{}, nil); err == nil {
 		t.Errorf("Price with no table")
 	}
@@ -475,6 +485,7 @@ func TestNoTable(t *testing.T) {
 }
 
 func TestEmptyUsage(t *testing.T) {
+	t.Parallel()
 	l, err := ledger.Price(usage.Usage{Method: "none"}, eurTable(t))
 	if err != nil || len(l.Lines) != 0 || !l.Total.IsZero() || l.Currency != "EUR" || l.Places != 2 {
 		t.Errorf("empty usage: %+v, %v", l, err)
@@ -486,6 +497,7 @@ func TestEmptyUsage(t *testing.T) {
 // (math/big), half away from zero as spreadsheets do (see
 // TestRoundingTies for the sources).
 func TestAgainstSpreadsheetRule(t *testing.T) {
+	t.Parallel()
 	tb := eurTable(t)
 	jpy := table(t, "JPY", "acetone,L,137,CUR,,,", "sand,kg,3,CUR,,,")
 	var n, ties int
@@ -544,6 +556,7 @@ func sheetRound(qty, price decimal.Decimal, places int32) decimal.Decimal {
 // (density at 20 °C: CRC Handbook of Chemistry and Physics, from memory)
 // is 1.804 kg; at 11.00 per kg that is 19.844, rounded 19.84.
 func TestLiquidPricedPerMass(t *testing.T) {
+	t.Parallel()
 	tb := table(t, "EUR", "EtOAc,kg,11.00,CUR,solvent,,")
 	names := func(n string) (string, float64, bool) {
 		if strings.EqualFold(n, "etoac") || n == "ethyl acetate" {

@@ -17,6 +17,7 @@ import (
 // 12.40 EUR/L is 15.50; 0.333 kg of silica at 48.60 is 16.1838 → 16.18;
 // 2.5 h at 55.00 is 137.50; total 169.18 (hand computation).
 func TestRatesMatchLedger(t *testing.T) {
+	t.Parallel()
 	tb := eurTable(t)
 	r := ledger.NewRates(tb)
 	u := usage.Usage{Method: "m", Demands: []usage.Demand{
@@ -65,6 +66,7 @@ func TestRatesMatchLedger(t *testing.T) {
 // 1000.00; 250 L falls in the band from 200 L at 6.00, 1500.00 (hand
 // computation; prices invented for the test).
 func TestRatesBands(t *testing.T) {
+	t.Parallel()
 	csv := "item,unit,price,currency,category,source,date,from\n" +
 		"ethanol,L,10.00,EUR,solvent,,,\n" +
 		"ethanol,L,6.00,EUR,solvent,,,200 L\n"

@@ -3,6 +3,7 @@ package prices
 import "testing"
 
 func TestMinorUnits(t *testing.T) {
+	t.Parallel()
 	// Source for every row: ISO 4217:2015 list one, minor-unit column,
 	// confirmed against a public reproduction of list one
 	// (moneyphp/iso-currencies, resources/current.php).
@@ -43,6 +44,7 @@ func TestMinorUnits(t *testing.T) {
 }
 
 func TestValidCode(t *testing.T) {
+	t.Parallel()
 	// ISO 4217 alphabetic codes are three upper-case letters (ISO
 	// 4217:2015, from memory).
 	for _, s := range []string{"EUR", "USD", "JPY", "XTS"} {

@@ -6,6 +6,7 @@ import (
 )
 
 func TestFind(t *testing.T) {
+	t.Parallel()
 	// Items invented for the test (common practice, no source).
 	tb, err := Read(strings.NewReader(header+
 		"silica gel,kg,48.60,EUR,,,\n"+
@@ -44,6 +45,7 @@ func TestFind(t *testing.T) {
 // nameKey must agree with strings.EqualFold, which Find uses, so that Read
 // refuses exactly the duplicates Find could confuse.
 func TestNameKeyAgreesWithEqualFold(t *testing.T) {
+	t.Parallel()
 	pairs := [][2]string{
 		{"silica gel", "SILICA GEL"},
 		{"Kelvin", "\u212Aelvin"}, // KELVIN SIGN folds to k (Unicode CaseFolding.txt; from memory)

@@ -22,6 +22,7 @@ import (
 const header = "item,unit,price,currency,category,source,date\n"
 
 func TestReadGood(t *testing.T) {
+	t.Parallel()
 	type want struct {
 		name, unit, price, cur string
 		dim                    units.Dim
@@ -121,6 +122,7 @@ type wantProblem struct {
 }
 
 func TestReadBad(t *testing.T) {
+	t.Parallel()
 	tests := []struct {
 		name string
 		in   string
@@ -256,6 +258,7 @@ func checkProblems(t *testing.T, err error, want []wantProblem) {
 // lines reports all seven in one error, in line order, whole-table
 // problems last.
 func TestReadAllProblemsAtOnce(t *testing.T) {
+	t.Parallel()
 	in := header +
 		"silica gel,kg,48.60,EUR,consumable,quote,2025-01-15\n" + // line 2: good
 		"ethyl acetate,L,\"12,5\",EUR,solvent,,\n" + //              line 3: price
@@ -282,6 +285,7 @@ func TestReadAllProblemsAtOnce(t *testing.T) {
 // A reader that fails is reported with the file name, and is not taken
 // for a problem in the table's content.
 func TestReadIOError(t *testing.T) {
+	t.Parallel()
 	boom := errors.New("disk unplugged")
 	_, err := Read(failingReader{boom}, "prices.csv")
 	if !errors.Is(err, boom) || errors.Is(err, ErrInvalid) || !strings.HasPrefix(err.Error(), "prices.csv: ") {
@@ -294,6 +298,7 @@ type failingReader struct{ err error }
 func (f failingReader) Read([]byte) (int, error) { return 0, f.err }
 
 func TestErrorFormat(t *testing.T) {
+	t.Parallel()
 	// The format of the example in the package documentation (common
 	// practice: file:line: as compilers and grep print it).
 	e := &Error{File: "prices.csv", Line: 12, Field: "price", Msg: `"12,5" is not a number; write a decimal such as 12.50`}
@@ -312,6 +317,7 @@ func TestErrorFormat(t *testing.T) {
 // Price bands: several lines of one item, each from a purchase; the checks
 // that keep every purchase priced once.
 func TestReadBands(t *testing.T) {
+	t.Parallel()
 	const h = "item,unit,price,currency,category,source,date,from\n"
 	tb, err := Read(strings.NewReader(h+
 		"n-heptane,L,12.00,EUR,,,,\n"+

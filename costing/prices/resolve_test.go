@@ -19,6 +19,7 @@ func solventNames(name string) (string, float64, bool) {
 }
 
 func TestResolveAliasesAndDensity(t *testing.T) {
+	t.Parallel()
 	csv := "item,unit,price,currency,category,source,date\n" +
 		"heptane,L,12.00,EUR,solvent,,\n" +
 		"EtOAc,kg,11.00,EUR,solvent,,\n" +
@@ -47,6 +48,7 @@ func TestResolveAliasesAndDensity(t *testing.T) {
 
 // Two lines for one solvent under two of its names are refused with both lines named.
 func TestResolveTwoNamesOneSolvent(t *testing.T) {
+	t.Parallel()
 	csv := "item,unit,price,currency,category,source,date\n" +
 		"heptane,L,12.00,EUR,solvent,,\n" +
 		"n-heptane,L,13.00,EUR,solvent,,\n"

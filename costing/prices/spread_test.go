@@ -10,6 +10,7 @@ import (
 // a share of 100 % or more, or a range, is refused with line and field.
 // (Prices invented for the test.)
 func TestSpreadColumn(t *testing.T) {
+	t.Parallel()
 	in := "item,unit,price,currency,category,source,date,spread\n" +
 		"silica gel,kg,48.60,EUR,consumable,quote,2025-01-15,5 %\n" +
 		"ethanol,L,8.00,EUR,solvent,quote,2025-01-15,0.3\n" +

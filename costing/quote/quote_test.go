@@ -8,6 +8,7 @@ import (
 
 // Messages quote at most Max characters of a user's text, escaped.
 func TestExcerpt(t *testing.T) {
+	t.Parallel()
 	cases := []struct{ in, want string }{
 		{"silica gel", `"silica gel"`},
 		{"\x1b[2J", `"\x1b[2J"`},
@@ -24,6 +25,7 @@ func TestExcerpt(t *testing.T) {
 }
 
 func TestArgs(t *testing.T) {
+	t.Parallel()
 	long := strings.Repeat("x", 100)
 	args := []any{long, 5, long, long}
 	Args("%s has %d%% and %q, %q", args)

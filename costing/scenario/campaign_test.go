@@ -6,6 +6,7 @@ import (
 )
 
 func TestLoadCampaign(t *testing.T) {
+	t.Parallel()
 	s, err := Load(strings.NewReader(good+`campaign:
   product: "5 kg"
   batch_mass: "500 g"
@@ -31,6 +32,7 @@ func TestLoadCampaign(t *testing.T) {
 }
 
 func TestLoadCampaignBad(t *testing.T) {
+	t.Parallel()
 	cases := []struct {
 		name, yaml string
 		want       []string

@@ -35,6 +35,7 @@ crystallization:
 `
 
 func TestLoadCrystallization(t *testing.T) {
+	t.Parallel()
 	s, err := Load(strings.NewReader(crystGood), "good.yaml")
 	if err != nil {
 		t.Fatal(err)
@@ -95,6 +96,7 @@ func TestLoadCrystallization(t *testing.T) {
 // A solvent/anti-solvent pair, an ideal-solubility estimate for the
 // product and a purge factor for the impurity.
 func TestLoadCrystallizationIdealAntiSolvent(t *testing.T) {
+	t.Parallel()
 	y := strings.NewReplacer(
 		"  solvent: ethanol\n", "  solvent: ethanol\n  anti_solvent: water\n  anti_solvent_fraction: \"30 %\"\n",
 		`    solubility: {"0 C": "15 g/L", "75 C": "160 g/L"}
@@ -143,6 +145,7 @@ func TestLoadCrystallizationIdealAntiSolvent(t *testing.T) {
 // Bad input: each case must name the file, the line, the field and what
 // is valid.
 func TestLoadCrystallizationBad(t *testing.T) {
+	t.Parallel()
 	replace := func(old, new string) string {
 		if !strings.Contains(crystGood, old) {
 			t.Fatalf("fixture lacks %q", old)
@@ -229,6 +232,7 @@ func TestLoadCrystallizationBad(t *testing.T) {
 }
 
 func TestSolventsNil(t *testing.T) {
+	t.Parallel()
 	var c *Crystallization
 	if c.Solvents() != nil {
 		t.Error("nil crystallization lists no solvents")

@@ -27,6 +27,7 @@ distillation:
 `
 
 func TestDistillationGood(t *testing.T) {
+	t.Parallel()
 	s, err := Load(strings.NewReader(goodDistil), "d.yaml")
 	if err != nil {
 		t.Fatal(err)
@@ -90,6 +91,7 @@ func TestDistillationGood(t *testing.T) {
 
 // Bad input: each case names the file, the line, the field and what is valid.
 func TestDistillationBad(t *testing.T) {
+	t.Parallel()
 	rep := func(old, new string) string {
 		if !strings.Contains(goodDistil, old) {
 			t.Fatalf("fixture lacks %q", old)

@@ -26,6 +26,7 @@ settings:
 `
 
 func TestLoadGood(t *testing.T) {
+	t.Parallel()
 	s, err := Load(strings.NewReader(good), "good.yaml")
 	if err != nil {
 		t.Fatal(err)
@@ -57,6 +58,7 @@ func TestLoadGood(t *testing.T) {
 
 // The starter scenario shipped in templates reads cleanly.
 func TestTemplateScenario(t *testing.T) {
+	t.Parallel()
 	data, err := os.ReadFile("../../templates/scenario.yaml")
 	if err != nil {
 		t.Fatal(err)
@@ -68,6 +70,7 @@ func TestTemplateScenario(t *testing.T) {
 
 // Bad input: each case must name the file, the line, the field and what is valid.
 func TestLoadBad(t *testing.T) {
+	t.Parallel()
 	replace := func(old, new string) string {
 		if !strings.Contains(good, old) {
 			t.Fatalf("test fixture lacks %q", old)
@@ -108,6 +111,7 @@ func TestLoadBad(t *testing.T) {
 
 // Every problem is reported at once.
 func TestAllProblemsAtOnce(t *testing.T) {
+	t.Parallel()
 	y := strings.NewReplacer("product_rf: 0.30", "product_rf: 2", `"250 mg"`, `"0 g"`, "purity: 0.85", "purity: 7").Replace(good)
 	_, err := Load(strings.NewReader(y), "bad.yaml")
 	var ps Problems

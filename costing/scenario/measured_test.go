@@ -32,6 +32,7 @@ settings:
 // alone get the default spread of their kind; the nominal value is what
 // the models see.
 func TestMeasuredRanges(t *testing.T) {
+	t.Parallel()
 	s, err := Load(strings.NewReader(rangedYAML), "r.yaml")
 	if err != nil {
 		t.Fatal(err)
@@ -76,6 +77,7 @@ func TestMeasuredRanges(t *testing.T) {
 // A drawn copy changes only the copy: the purity's followers move with it,
 // a solubility point refits the van 't Hoff line, the original is intact.
 func TestScenarioWith(t *testing.T) {
+	t.Parallel()
 	s, err := Load(strings.NewReader(rangedYAML), "r.yaml")
 	if err != nil {
 		t.Fatal(err)
@@ -112,6 +114,7 @@ func TestScenarioWith(t *testing.T) {
 // Ranges that cannot hold are refused with file, line and field; a range
 // on a field that is not a measured value says which fields take one.
 func TestMeasuredRangesRefused(t *testing.T) {
+	t.Parallel()
 	for _, c := range []struct{ from, to, want string }{
 		{`purity: "85 ± 3 %"`, `purity: "0.9–1.1"`, "crude.purity"},
 		{`product_rf: "0.27–0.33"`, `product_rf: "0.3 ± 0.4"`, "chromatography.product_rf"},
@@ -149,6 +152,7 @@ distillation:
 // 0 °C = 273.15 K, ITS-90 convention); "262 C" alone gets the default ±3 K;
 // a drawn copy carries the drawn boiling point.
 func TestBoilingPointRange(t *testing.T) {
+	t.Parallel()
 	s, err := Load(strings.NewReader(distilYAML), "d.yaml")
 	if err != nil {
 		t.Fatal(err)
@@ -188,6 +192,7 @@ func TestBoilingPointRange(t *testing.T) {
 // "0.27–0.33" is used as 0.3 and drawn from 0.27 to 0.33; 0.45 written
 // alone is drawn over the default ±0.03 (Spreads).
 func TestMeasuredOnInputs(t *testing.T) {
+	t.Parallel()
 	s, err := Load(strings.NewReader(rangedYAML), "r.yaml")
 	if err != nil {
 		t.Fatal(err)

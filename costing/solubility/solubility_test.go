@@ -27,6 +27,7 @@ func relErr(got, want float64) float64 { return math.Abs(got/want - 1) }
 // nearly ideal. Tolerances: the Schröder–van Laar equation neglects ΔCp
 // and the systems deviate slightly from Raoult's law, so a few per cent.
 func TestIdealSolubilityNaphthalene(t *testing.T) {
+	t.Parallel()
 	cases := []struct {
 		name string
 		T    float64
@@ -78,6 +79,7 @@ func TestIdealSolubilityNaphthalene(t *testing.T) {
 // Mole fraction to mass per volume of solvent, checked against a hand
 // conversion of the evaluated naphthalene–benzene value.
 func TestMassPerVolume(t *testing.T) {
+	t.Parallel()
 	// Benzene: ρ = 876.5 kg/m³ at 20 °C (CRC Handbook, from memory);
 	// M = 78.11 g/mol (C6H6, derived from standard atomic weights).
 	n := MolarDensity([]float64{1}, []float64{876.5}, []float64{0.078114})
@@ -109,6 +111,7 @@ func TestMassPerVolume(t *testing.T) {
 // The van 't Hoff fit reproduces its input points and interpolates a
 // tabulated value it was not given.
 func TestVantHoffFit(t *testing.T) {
+	t.Parallel()
 	// Two points pass exactly. Source: benzoic acid in water, 3.4 g/L at
 	// 25 °C (Merck Index, 12th ed., quoted in a public note on benzoic acid
 	// solubility — confirmed at second hand) and 68.0 g/L at 95 °C (Merck
@@ -160,6 +163,7 @@ func TestVantHoffFit(t *testing.T) {
 }
 
 func TestFitRefusesBadPoints(t *testing.T) {
+	t.Parallel()
 	for _, pts := range [][]Point{
 		nil,
 		{{300, 1}},
@@ -174,6 +178,7 @@ func TestFitRefusesBadPoints(t *testing.T) {
 }
 
 func TestCurve(t *testing.T) {
+	t.Parallel()
 	v, _ := Fit([]Point{{298.15, 3.4}, {368.15, 68.0}})
 	c := Curve{Fit: &v}
 	if !c.Measured() || !c.Defined() {

@@ -9,6 +9,7 @@ import (
 )
 
 func TestFind(t *testing.T) {
+	t.Parallel()
 	book := Builtin()
 	// Abbreviations as used in the laboratory (common practice, no source).
 	cases := map[string]string{
@@ -68,6 +69,7 @@ func custom() Solvent {
 }
 
 func TestAddValidation(t *testing.T) {
+	t.Parallel()
 	cases := []struct {
 		name  string
 		edit  func(*Solvent)
@@ -151,6 +153,7 @@ func TestAddValidation(t *testing.T) {
 }
 
 func TestAddAndReplace(t *testing.T) {
+	t.Parallel()
 	book := Builtin()
 	n := book.Len()
 	if err := book.Add(custom()); err != nil {
@@ -193,6 +196,7 @@ func TestAddAndReplace(t *testing.T) {
 
 // Builtin gives independent copies; values handed out cannot change a Book.
 func TestBuiltinIsolation(t *testing.T) {
+	t.Parallel()
 	a, b := Builtin(), Builtin()
 	if err := a.Add(custom()); err != nil {
 		t.Fatal(err)

@@ -12,6 +12,7 @@ import (
 // rather than 35.453, H 1.0080 rather than 1.00794) shift molar masses by
 // up to about 1e-4 relative from the values printed in older handbooks.
 func TestMolarMassFromFormula(t *testing.T) {
+	t.Parallel()
 	cases := []struct {
 		formula string
 		want    float64 // g/mol
@@ -56,6 +57,7 @@ func TestMolarMassFromFormula(t *testing.T) {
 // tables (from memory); tolerance 0.01 percentage points, the rounding of
 // the printed value.
 func TestMassFraction(t *testing.T) {
+	t.Parallel()
 	comp, err := ParseFormula("C7H8")
 	if err != nil {
 		t.Fatal(err)
@@ -73,6 +75,7 @@ func TestMassFraction(t *testing.T) {
 }
 
 func TestParseFormulaErrors(t *testing.T) {
+	t.Parallel()
 	cases := []struct {
 		in   string
 		want []string // substrings of the message
@@ -111,6 +114,7 @@ func TestParseFormulaErrors(t *testing.T) {
 // Hill order: C, H, then the rest alphabetically (Hill, E. A. J. Am. Chem.
 // Soc. 1900, 22, 478; from memory).
 func TestHill(t *testing.T) {
+	t.Parallel()
 	cases := map[string]string{
 		"CH3(CH2)4CH3": "C6H14",
 		"ClCH2Cl":      "CH2Cl2",

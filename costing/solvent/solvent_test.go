@@ -17,6 +17,7 @@ import (
 // and differ by up to 0.3 K); molar mass 2e-4 relative (abridged atomic
 // weights).
 func TestHandbookProperties(t *testing.T) {
+	t.Parallel()
 	cases := []struct {
 		id      string
 		density float64 // g/mL at 20 °C
@@ -60,6 +61,7 @@ func TestHandbookProperties(t *testing.T) {
 }
 
 func TestSpecificQuantities(t *testing.T) {
+	t.Parallel()
 	w := mustFind(t, "water")
 	// Source: IAPWS-IF97 steam tables, latent heat 2256.4 kJ/kg at 100 °C
 	// (from memory); tolerance 0.2 % (the molar value is rounded to 4 digits).
@@ -92,6 +94,7 @@ func TestSpecificQuantities(t *testing.T) {
 
 // Hazard flags against outside classifications.
 func TestHazardFlags(t *testing.T) {
+	t.Parallel()
 	book := Builtin()
 	// Source: 40 CFR 261.21(a)(1), ignitable below 60 °C flash point
 	// (confirmed); water, dichloromethane and chloroform have no flash
@@ -132,6 +135,7 @@ func TestHazardFlags(t *testing.T) {
 // The built-in table: at least 18 solvents, all valid, the common names
 // and abbreviations chemists use, and every value with a source and a known mark.
 func TestBuiltinTable(t *testing.T) {
+	t.Parallel()
 	book := Builtin()
 	if book.Len() < 18 {
 		t.Fatalf("%d built-in solvents, want at least 18", book.Len())
@@ -167,6 +171,7 @@ func TestBuiltinTable(t *testing.T) {
 // on a duplicate), display units of the right dimension, and display values
 // that convert back to the SI value.
 func TestCoefficients(t *testing.T) {
+	t.Parallel()
 	var all [][]source.Coefficient
 	for _, s := range Builtin().All() {
 		cs := s.Coefficients()

@@ -50,6 +50,7 @@ func mustFind(t *testing.T, name string) Solvent {
 
 // The oracle reproduces the release's verification values to 9 digits.
 func TestIF97Oracle(t *testing.T) {
+	t.Parallel()
 	// Source: IAPWS R7-97(2012), Table 35 (psat at 300, 500, 600 K) and
 	// Table 36 (Tsat at 0.1, 1, 10 MPa) (from memory).
 	for _, c := range []struct{ T, p float64 }{
@@ -73,6 +74,7 @@ func TestIF97Oracle(t *testing.T) {
 // their ranges and the wider set within 0.5 % from 273 to 473 K (checked
 // when the table was built); the tolerance is 0.5 %.
 func TestWaterVaporPressureIAPWS(t *testing.T) {
+	t.Parallel()
 	water := mustFind(t, "water")
 	cases := []struct {
 		celsius float64
@@ -103,6 +105,7 @@ func TestWaterVaporPressureIAPWS(t *testing.T) {
 // Boiling point of water at reduced pressure (vacuum distillation).
 // Tolerance 0.1 K: about 0.15 % in pressure at these temperatures.
 func TestWaterBoilingPointReducedPressure(t *testing.T) {
+	t.Parallel()
 	water := mustFind(t, "water")
 	cases := []struct {
 		kPa, celsius float64
@@ -129,6 +132,7 @@ func TestWaterBoilingPointReducedPressure(t *testing.T) {
 // the same 0.5 K. The boiling points are handbook values (sources in
 // builtin.go).
 func TestNormalBoilingPointFromAntoine(t *testing.T) {
+	t.Parallel()
 	n := 0
 	for _, s := range Builtin().All() {
 		if len(s.Antoine) == 0 {
@@ -159,6 +163,7 @@ func TestNormalBoilingPointFromAntoine(t *testing.T) {
 // handbook prints three significant figures and the Antoine fits agree with
 // their source data to about 1 %.
 func TestVaporPressureAt25C(t *testing.T) {
+	t.Parallel()
 	// Source for every value: CRC Handbook of Chemistry and Physics, "Vapor
 	// pressure of fluids at temperatures below 300 K" / vapour pressure at
 	// 25 °C (edition not checked, from memory).
@@ -198,6 +203,7 @@ func TestVaporPressureAt25C(t *testing.T) {
 // stated ±10 % for non-associating liquids, and at least 10 % low for
 // hydrogen-bonded ones, as the rule's known failure predicts.
 func TestTroutonRule(t *testing.T) {
+	t.Parallel()
 	// Tabulated ΔHvap and Tb are the built-in values (sources in
 	// builtin.go: CRC Handbook and Smith, Van Ness & Abbott Table B.2).
 	for _, id := range []string{"n-hexane", "toluene", "cyclohexane", "diethyl ether", "n-heptane"} {
@@ -221,6 +227,7 @@ func TestTroutonRule(t *testing.T) {
 }
 
 func TestClausiusClapeyron(t *testing.T) {
+	t.Parallel()
 	// Identity: P = 101325 Pa exactly at T = Tb, whatever ΔHvap.
 	for _, c := range []struct{ Tb, h float64 }{{383.75, 33180}, {373.124, 40650}, {312.85, 28060}} {
 		if p := ClausiusClapeyron(c.Tb, c.Tb, c.h); math.Abs(p-StandardPressure) > 1e-9 {
@@ -262,6 +269,7 @@ func TestClausiusClapeyron(t *testing.T) {
 // confirmed or handbook ΔHvap at the normal boiling point. This is the
 // method behind the derived 2-MeTHF value; 2 % tolerance as claimed there.
 func TestClapeyronHVap(t *testing.T) {
+	t.Parallel()
 	for _, id := range []string{"toluene", "diethyl ether", "tetrahydrofuran"} {
 		s := mustFind(t, id)
 		i, in := s.antoineFor(s.BoilingPoint.V)
@@ -278,6 +286,7 @@ func TestClapeyronHVap(t *testing.T) {
 // VaporPressure and BoilingPointAt are inverses for every built-in solvent
 // from 1 kPa to 200 kPa, in and out of the fitted ranges.
 func TestVaporPressureRoundTrip(t *testing.T) {
+	t.Parallel()
 	for _, s := range Builtin().All() {
 		for _, p := range []float64{1e3, 5e3, 2e4, 5e4, StandardPressure, 2e5} {
 			T, _ := s.BoilingPointAt(p)
@@ -299,6 +308,7 @@ func TestVaporPressureRoundTrip(t *testing.T) {
 }
 
 func TestRangeFlagAndFallback(t *testing.T) {
+	t.Parallel()
 	dcm := mustFind(t, "dichloromethane")
 	if _, in := dcm.VaporPressure(298.15); !in {
 		t.Error("DCM at 25 °C should be inside its Antoine range (235-333 K)")
@@ -334,6 +344,7 @@ func TestRangeFlagAndFallback(t *testing.T) {
 // Raoult's law); heptane–toluene is near ideal (common practice, no
 // source), so an equimolar mixture boils between 98.4 °C and 110.6 °C.
 func TestBubblePointMixture(t *testing.T) {
+	t.Parallel()
 	b := Builtin()
 	hep, _ := b.Find("n-heptane")
 	tol, _ := b.Find("toluene")

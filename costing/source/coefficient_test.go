@@ -20,6 +20,7 @@ func set() Set {
 // is marked as set in the scenario; a wrong dimension or key is refused
 // with what is valid.
 func TestOverride(t *testing.T) {
+	t.Parallel()
 	s := set()
 	orig := s.Clone()
 	q, _, _ := units.Parse("12 cm")
@@ -46,6 +47,7 @@ func TestOverride(t *testing.T) {
 }
 
 func TestNewSetRefusesDuplicates(t *testing.T) {
+	t.Parallel()
 	defer func() {
 		if recover() == nil {
 			t.Error("duplicate keys must be a programming error")
@@ -59,6 +61,7 @@ func TestNewSetRefusesDuplicates(t *testing.T) {
 // alone; a Put on it does not leak back; Clone is independent; Lookup of
 // an unknown key reports false.
 func TestWithValuesIsIndependent(t *testing.T) {
+	t.Parallel()
 	s := set()
 	vals := s.Values()
 	for i := range vals {

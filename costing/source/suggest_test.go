@@ -9,6 +9,7 @@ import (
 // sitting is 3 (two substitutions and an insertion), flaw → lawn is 2,
 // a string to itself 0, to the empty string its length.
 func TestEditDistance(t *testing.T) {
+	t.Parallel()
 	for _, c := range []struct {
 		a, b string
 		want int
@@ -21,6 +22,7 @@ func TestEditDistance(t *testing.T) {
 
 // A misspelt key gets the nearest key and its method's keys, not every key.
 func TestSuggest(t *testing.T) {
+	t.Parallel()
 	s := set()
 	msg := s.suggest("x.bed_hieght")
 	if !strings.Contains(msg, `did you mean "x.bed_height"?`) || !strings.Contains(msg, "valid settings of x:") {

@@ -13,6 +13,7 @@ import (
 // 1 Torr = 101 325/760 Pa, 1 mmHg = 133.322 387 415 Pa, 1 kWh = 3.6 MJ,
 // 1 cal (thermochemical) = 4.184 J.
 func TestParse(t *testing.T) {
+	t.Parallel()
 	cases := []struct {
 		in  string
 		si  float64
@@ -59,6 +60,7 @@ func TestParse(t *testing.T) {
 }
 
 func TestParseErrors(t *testing.T) {
+	t.Parallel()
 	cases := []struct{ in, want string }{
 		{"20", "has no unit"},
 		{"g", "does not start with a number"},
@@ -82,6 +84,7 @@ func TestParseErrors(t *testing.T) {
 
 // Round trip: To(From(v)) = v for every unit in the table.
 func TestRoundTrip(t *testing.T) {
+	t.Parallel()
 	for name := range table {
 		si, err := From(12.5, name)
 		if err != nil {

@@ -11,6 +11,7 @@ import (
 // "15 ± 3 g/L" all mean 12 to 18 g/L (15 ± 3 kg/m³ in SI); a temperature
 // range shifts its nominal value but not its half-width.
 func TestParseRange(t *testing.T) {
+	t.Parallel()
 	for _, c := range []struct {
 		in         string
 		nom, half  float64
@@ -42,6 +43,7 @@ func TestParseRange(t *testing.T) {
 // Plain numbers and percentages: an Rf "0.30 ± 0.03" is 0.27 to 0.33; a
 // purity "85 ± 3 %" is 0.82 to 0.88.
 func TestParsePlainRange(t *testing.T) {
+	t.Parallel()
 	for _, c := range []struct {
 		in        string
 		nom, half float64
@@ -60,6 +62,7 @@ func TestParsePlainRange(t *testing.T) {
 
 // Ranges that cannot be meant are refused with the reason and an example.
 func TestParseRangeRefuses(t *testing.T) {
+	t.Parallel()
 	for _, in := range []string{"18–12 g/L", "15 ± 0 g/L", "15 ± -3 g/L", "15 ± g/L", "12–18", "± 3 g/L", "12–18 parsecs"} {
 		if _, _, err := ParseRange(in); err == nil || !errors.Is(err, ErrUnit) {
 			t.Errorf("%q: %v", in, err)

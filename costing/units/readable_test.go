@@ -6,6 +6,7 @@ import "testing"
 // Table 7: 1 kg = 1000 g, 1 L = 1000 mL, 1 m³ = 1000 L, 1 kWh = 1000 Wh)
 // and rounding to three significant figures (common practice).
 func TestReadable(t *testing.T) {
+	t.Parallel()
 	for _, c := range []struct {
 		v    float64
 		unit string

@@ -10,6 +10,7 @@ import (
 // Totals are sums (identities); NaN figures are never kept; composition
 // lists the largest component first, as shares of the stream's mass.
 func TestUsageHelpers(t *testing.T) {
+	t.Parallel()
 	u := New("m", 1, 0.8)
 	u.AddFigure("ok", "ok", 2, "")
 	u.AddFigure("nan", "nan", math.NaN(), "")
@@ -39,6 +40,7 @@ func TestUsageHelpers(t *testing.T) {
 // A handful of repeats is information; from usage.ManyRepeats (10, common
 // practice, no source) runs or batches the plan is impractical: a warning.
 func TestRepeatLevel(t *testing.T) {
+	t.Parallel()
 	for n, want := range map[int]Level{1: Info, 9: Info, 10: Warning, 148: Warning} {
 		if got := RepeatLevel(n); got != want {
 			t.Errorf("RepeatLevel(%d) = %s, want %s", n, got, want)

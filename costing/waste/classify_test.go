@@ -86,6 +86,7 @@ func wet(t *testing.T, b *solvent.Book, silicaKg float64, mL map[string]float64)
 // in the regulation text, F004/F005 from memory), 261.21(a)(1) and 261.24
 // Table 1 (read).
 func TestCodes(t *testing.T) {
+	t.Parallel()
 	b := testBook(t)
 	cases := []struct {
 		name   string
@@ -216,6 +217,7 @@ func checkClassification(t *testing.T, name string, c Classification) {
 // are copies of 1-butanol with the flash point set (test data); DMF (58 °C)
 // and DMSO (89 °C; safety data sheets, from memory) fall either side.
 func TestD001FlashLimit(t *testing.T) {
+	t.Parallel()
 	b := testBook(t)
 	base, _ := b.Find("1-butanol")
 	for _, c := range []struct {
@@ -253,6 +255,7 @@ func TestD001FlashLimit(t *testing.T) {
 // aqueous solution with "less than 24 percent alcohol by volume" is
 // excluded (read); 24.0 % is not less than 24 %.
 func TestAlcoholExclusion(t *testing.T) {
+	t.Parallel()
 	b := testBook(t)
 	for _, c := range []struct {
 		ethanolML float64
@@ -274,6 +277,7 @@ func TestAlcoholExclusion(t *testing.T) {
 // TestMixtureThreshold checks the "ten percent or more (by volume)" of 40
 // CFR 261.31(a) F002 (read) at the boundary.
 func TestMixtureThreshold(t *testing.T) {
+	t.Parallel()
 	b := testBook(t)
 	for _, c := range []struct {
 		dcmML float64
@@ -290,6 +294,7 @@ func TestMixtureThreshold(t *testing.T) {
 // composition (40 CFR 261.31(a): "containing, before use") and the stream
 // then by the mixture rule (261.3(a)(2), from memory).
 func TestBlends(t *testing.T) {
+	t.Parallel()
 	b := testBook(t)
 	// A neat heptane flush (500 mL) and a step of 20 % dichloromethane in
 	// heptane (400 mL) in one container: 80 mL in 900 mL is 8.9 % after use,
@@ -329,6 +334,7 @@ func TestBlends(t *testing.T) {
 // TestProblems checks that inputs that cannot be used are reported by name,
 // never silently dropped.
 func TestProblems(t *testing.T) {
+	t.Parallel()
 	b := testBook(t)
 	s := usage.Stream{Name: "spent eluent", Class: usage.NonHalogenated, Components: []usage.Component{
 		{Name: "ethyl acetate", Kg: 0.9, Solvent: true},
@@ -357,6 +363,7 @@ func TestProblems(t *testing.T) {
 }
 
 func TestParseSector(t *testing.T) {
+	t.Parallel()
 	for _, c := range []struct {
 		in   string
 		want Sector
@@ -374,6 +381,7 @@ func TestParseSector(t *testing.T) {
 // TestSources checks the Sources sheet lines: unique keys, a source and a
 // mark each, and a line for every code Classify can suggest.
 func TestSources(t *testing.T) {
+	t.Parallel()
 	list := Sources()
 	keys := map[string]source.Coefficient{}
 	for _, c := range list {

@@ -14,6 +14,7 @@ import (
 // Scottish Government's open-data reproduction of the list (ewc-coding
 // table). Every one is marked with an asterisk (hazardous) and confirmed.
 func TestEUEntriesAsPublished(t *testing.T) {
+	t.Parallel()
 	want := map[string]string{
 		"01": "aqueous washing liquids and mother liquors",
 		"03": "organic halogenated solvents, washing liquids and mother liquors",
@@ -42,6 +43,7 @@ func TestEUEntriesAsPublished(t *testing.T) {
 // reproductions (ecfr.io, compliancecosmos.org); F004 and F005 not found.
 // F003 is listed for ignitability only (hazard code (I)*).
 func TestUSListingMarks(t *testing.T) {
+	t.Parallel()
 	for code, want := range map[string]source.Mark{"F001": source.Confirmed, "F002": source.Confirmed, "F003": source.Confirmed,
 		"F004": source.FromMemory, "F005": source.FromMemory} {
 		for _, l := range listings {

@@ -44,6 +44,7 @@ func batch() usage.Usage {
 // One-time costs are charged once however many batches run: ten batches
 // cost 10 × 360.00 + 3100.00 = 6700.00, not 10 × 3460.00 = 34600.00.
 func TestChargeOnce(t *testing.T) {
+	t.Parallel()
 	c, err := Run(batch(), table(t), 10, decimal.Zero, DefaultShifts)
 	if err != nil {
 		t.Fatal(err)
@@ -77,6 +78,7 @@ func TestChargeOnce(t *testing.T) {
 
 // ⌈M / m⌉ batches, a target met exactly needing no extra one.
 func TestBatchesFor(t *testing.T) {
+	t.Parallel()
 	cases := []struct {
 		m, per float64
 		n      int
@@ -100,6 +102,7 @@ func TestBatchesFor(t *testing.T) {
 // (14·150 + 3000)/(14·75) = 4.857 ≤ 400/80 = 5.000; at 13,
 // (13·150 + 3000)/(13·75) = 5.077 > 5.000.
 func TestPayback(t *testing.T) {
+	t.Parallel()
 	d := func(s string) decimal.Decimal { return decimal.RequireFromString(s) }
 	stay := Cost{Batches: 1, ProductKg: 0.080, PerBatch: d("400.00")}
 	dev := Cost{Batches: 1, ProductKg: 0.075, PerBatch: d("150.00"), OneTime: d("3000.00")}
@@ -123,6 +126,7 @@ func TestPayback(t *testing.T) {
 }
 
 func TestRunErrors(t *testing.T) {
+	t.Parallel()
 	u := batch()
 	for _, c := range []struct {
 		n  int

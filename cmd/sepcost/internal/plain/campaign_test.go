@@ -16,6 +16,7 @@ import (
 // JSON and CSV carry the budget's figures as the report holds them (one
 // source of truth; the Budget sheet's formulas reproduce the same).
 func TestBudgetJSONAndCSV(t *testing.T) {
+	t.Parallel()
 	sc, err := scenario.Load(bytes.NewReader(templates.Scenario), "demo.yaml")
 	if err != nil {
 		t.Fatal(err)

@@ -6,6 +6,7 @@ import "testing"
 // an apostrophe so a spreadsheet shows them as text. Source: OWASP, "CSV
 // Injection" (from memory).
 func TestSafe(t *testing.T) {
+	t.Parallel()
 	cases := map[string]string{
 		"=HYPERLINK(\"x\")": "'=HYPERLINK(\"x\")",
 		"+1":                "'+1",

@@ -15,6 +15,7 @@ import (
 // minor units (two for EUR, ISO 4217), a band per method and mass, every
 // input drawn; a quantile that is not a number is null, not an error.
 func TestJSONUncertainty(t *testing.T) {
+	t.Parallel()
 	p, pt := demoPlan(t, templates.Scenario)
 	masses, _ := scale.LogSpace(1e-3, 5, 9)
 	r, err := scale.SweepWith(p, pt, masses, scale.Options{Draws: 200, Seed: 3, TargetKg: 0.02})

@@ -38,6 +38,7 @@ func demoPlan(t *testing.T, yaml []byte) (*costing.Plan, *prices.Table) {
 // more than a 500 mg batch and that chromatography needs dozens of runs
 // at 5 kg (usage.ManyRepeats).
 func TestTextAndJSONCarryEveryWarning(t *testing.T) {
+	t.Parallel()
 	p, pt := demoPlan(t, templates.Scenario)
 	est, err := scale.EstimateWith(p, pt, []float64{0.0005, 5}, scale.Options{TargetKg: 5, TargetWhy: "test"})
 	if err != nil {

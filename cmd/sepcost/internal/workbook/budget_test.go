@@ -25,6 +25,7 @@ import (
 // The demo's Budget sheet records every formula money cell, so the cached,
 // CalcCellValue and LibreOffice tests compare each with the budget.
 func TestBudgetCellsRecorded(t *testing.T) {
+	t.Parallel()
 	r := demoReport(t)
 	if r.Budget == nil {
 		t.Fatal("the demo has no budget")

@@ -18,6 +18,7 @@ import (
 // crystallization 1,717.63 and 26.31 per gram: the per-gram order is the
 // one that counts).
 func TestSummaryCheapestPerGram(t *testing.T) {
+	t.Parallel()
 	r := twoMethodReport()
 	disagree := -1
 	for i := range r.MassesKg {
@@ -112,6 +113,7 @@ func indexMethod(r *scale.Report, sheet string) int {
 // usage.ManyRepeats runs on), and its distillation carries the caution on
 // the pot's stability limit; "No notes." is not written over them.
 func TestSummaryShowsEveryWarning(t *testing.T) {
+	t.Parallel()
 	r := liquidDemoReport(t)
 	if len(r.Warnings) == 0 {
 		t.Fatal("the liquid demo raises no warnings; the test needs one")

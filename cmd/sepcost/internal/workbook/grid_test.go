@@ -12,6 +12,7 @@ import (
 // rounded both ways, ties to even), on a spread of magnitudes and signs,
 // on exact ties and on the example in its doc comment.
 func TestRound15(t *testing.T) {
+	t.Parallel()
 	oracle := func(v float64) float64 {
 		r, err := strconv.ParseFloat(strconv.FormatFloat(v, 'g', 15, 64), 64)
 		if err != nil {
@@ -47,6 +48,7 @@ func TestRound15(t *testing.T) {
 // (SI Brochure, 9th ed., 2019, section 5.4: m² for square metre, from
 // memory).
 func TestUnitLabel(t *testing.T) {
+	t.Parallel()
 	for in, want := range map[string]string{"W/(m^2·K)": "W/(m²·K)", "m3": "m³", "cm^2": "cm²", "kg": "kg", "mL/g": "mL/g"} {
 		if got := unitLabel(in); got != want {
 			t.Errorf("unitLabel(%q) = %q, want %q", in, got, want)

@@ -12,6 +12,7 @@ import (
 // the values the usage holds (the writer only writes), and the loading
 // chosen among the figures.
 func TestTradeOffTableOnMethodSheet(t *testing.T) {
+	t.Parallel()
 	r := demoReport(t)
 	u := r.Results[0][0].Usage
 	if u.Method != "chromatography" || len(u.Tables) == 0 {

@@ -188,6 +188,7 @@ func chartCount(t *testing.T, b []byte) int {
 // against mass on the Summary, plus Scale-up's for a sweep), the waste
 // forecast (waste by stream) and the year's plan (cost by method).
 func TestEveryWorkbookHasAChart(t *testing.T) {
+	t.Parallel()
 	r := demoReport(t)
 	b, _ := render(t, r, Options{})
 	if n := chartCount(t, b); n < 1 {

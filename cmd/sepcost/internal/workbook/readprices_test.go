@@ -83,6 +83,7 @@ func stripComments(b []byte) []byte {
 // The .xlsx twin of the example price table reads as the same items and
 // gives the same estimate of the demo, to the cent.
 func TestPriceWorkbookTwin(t *testing.T) {
+	t.Parallel()
 	book := priceBook(t, templates.Prices, "Solvents and more")
 	fromX, err := ReadPrices(bytes.NewReader(book), "site.xlsx", "Solvents and more")
 	if err != nil {
@@ -130,6 +131,7 @@ func TestPriceWorkbookTwin(t *testing.T) {
 // The sheet must exist; a problem in a cell is reported as the CSV's
 // would be, with the sheet and row as file and line; sizes are bounded.
 func TestPriceWorkbookProblems(t *testing.T) {
+	t.Parallel()
 	book := priceBook(t, templates.Prices, "Prices")
 	if _, err := ReadPrices(bytes.NewReader(book), "site.xlsx", "Solvent"); err == nil || !strings.Contains(err.Error(), `no sheet "Solvent"`) || !strings.Contains(err.Error(), `"Prices"`) {
 		t.Errorf("missing sheet: %v", err)
@@ -162,6 +164,7 @@ func TestPriceWorkbookProblems(t *testing.T) {
 // A sheet of more rows than a price list has is refused with the limit
 // named, before its rows are checked.
 func TestPriceWorkbookRowLimit(t *testing.T) {
+	t.Parallel()
 	f := excelize.NewFile()
 	sw, err := f.NewStreamWriter("Sheet1")
 	if err != nil {

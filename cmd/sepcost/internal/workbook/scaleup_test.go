@@ -108,6 +108,7 @@ func scaleUpCharts(t *testing.T, parts map[string]string) []string {
 // method is not feasible. Every plotted figure of these fixtures is
 // positive, so every Y axis must be logarithmic.
 func TestScaleUpChartsLogAxes(t *testing.T) {
+	t.Parallel()
 	for name, r := range map[string]*scale.Report{"with detail sheets": sweepReport(), "without": syntheticSweep(40, 2)} {
 		t.Run(name, func(t *testing.T) {
 			b, _ := render(t, r, Options{})
@@ -268,6 +269,7 @@ const prefixed = `<?xml version="1.0" encoding="UTF-8" standalone="yes"?>
 // first child of its scaling, the Y axis is left alone, the rewrite is
 // idempotent, and parts it cannot handle are refused with a reason.
 func TestLogXAxis(t *testing.T) {
+	t.Parallel()
 	raw := excelizeChart(t)
 	for _, ax := range valAxRe.FindAllStringSubmatch(string(raw), -1) {
 		pos := axPosRe.FindStringSubmatch(ax[1])[1]
@@ -337,6 +339,7 @@ func findAxis(x, pos string) string {
 // the method sheets; one more mass, and they give way to the Scale-up
 // table and a note on the Summary. An estimate always gets them.
 func TestDetailSheetsLimit(t *testing.T) {
+	t.Parallel()
 	for _, tc := range []struct {
 		n     int
 		sweep bool
@@ -372,6 +375,7 @@ func TestDetailSheetsLimit(t *testing.T) {
 // (a second oracle beside LibreOffice; DEVELOPERS.md, "Library notes"). Totals must equal the
 // ledger to the cent.
 func TestScaleUpTable(t *testing.T) {
+	t.Parallel()
 	r := syntheticSweep(30, 2)
 	b, lay := render(t, r, Options{})
 	f := open(t, b)
@@ -455,6 +459,7 @@ func TestScaleUpTable(t *testing.T) {
 // TestScaleUpNoNaN: figures that are not numbers give "n/a" or a gap on
 // the Scale-up sheet, never NaN or Inf, and no formula refers to them.
 func TestScaleUpNoNaN(t *testing.T) {
+	t.Parallel()
 	for _, n := range []int{6, 20} { // with and without detail sheets
 		r := syntheticSweep(n, 2)
 		res := &r.Results[3][0]
@@ -487,6 +492,7 @@ func TestScaleUpNoNaN(t *testing.T) {
 // break-even price cell of each flip after its own Prices row, and says so
 // when a sweep finds no crossover or has a single method.
 func TestSummaryDecision(t *testing.T) {
+	t.Parallel()
 	r := sweepReport()
 	r.Decision.Infeasible = map[string]string{"distillation": "no volatile product", "adsorption": "no adsorbent priced", "membrane": "no membrane data"}
 	b, _ := render(t, r, Options{})
@@ -552,6 +558,7 @@ func TestSummaryDecision(t *testing.T) {
 // TestScaleUpOmitCachedValues: the variant for recalculation has the
 // Scale-up formulas without values.
 func TestScaleUpOmitCachedValues(t *testing.T) {
+	t.Parallel()
 	r := syntheticSweep(20, 2)
 	b, lay := render(t, r, Options{OmitCachedValues: true})
 	f := open(t, b)
@@ -574,6 +581,7 @@ func TestScaleUpOmitCachedValues(t *testing.T) {
 // any mass (e.g. one the scenario does not describe) gets no series, so
 // the legend names only curves that are drawn.
 func TestScaleUpChartsLeaveOutMethodsNeverFeasible(t *testing.T) {
+	t.Parallel()
 	r := syntheticSweep(20, 2)
 	for i := range r.Results {
 		r.Results[i][1] = scale.Result{Usage: r.Results[i][1].Usage}
@@ -604,6 +612,7 @@ func TestScaleUpChartsLeaveOutMethodsNeverFeasible(t *testing.T) {
 // same label twice keeps both lines, in two columns, and its total still
 // recalculates to the ledger's.
 func TestScaleUpRepeatedLine(t *testing.T) {
+	t.Parallel()
 	r := syntheticSweep(MaxDetailMasses+2, 1)
 	l := &r.Results[5][0].Ledger
 	dup := l.Lines[0]

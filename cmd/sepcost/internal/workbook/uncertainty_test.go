@@ -45,6 +45,7 @@ func handAcross(r *scale.Report) *scale.Uncertainty {
 // correlation; the bands across the masses are written per mass; the
 // crossover interval is said in words.
 func TestUncertaintyValueOfInformation(t *testing.T) {
+	t.Parallel()
 	r := sweepReport()
 	r.Uncertainty = handAcross(r)
 	b, _ := render(t, r, Options{})
@@ -90,6 +91,7 @@ func TestUncertaintyValueOfInformation(t *testing.T) {
 // method from the Uncertainty sheet's table as four more series, each
 // named by its header cell and plotted against the same masses in g.
 func TestScaleUpBand(t *testing.T) {
+	t.Parallel()
 	r := sweepReport()
 	r.Uncertainty = handAcross(r)
 	b, _ := render(t, r, Options{})
@@ -160,6 +162,7 @@ func TestScaleUpBand(t *testing.T) {
 
 // Limits are shown to four significant figures (hand-rounded cases).
 func TestSig(t *testing.T) {
+	t.Parallel()
 	for _, c := range []struct{ v, want float64 }{{0.412557406503199, 0.4126}, {12.3787221, 12.38}, {1234567, 1235000}, {-0.000123456, -0.0001235}, {0, 0}} {
 		if got := sig(c.v, 4); math.Abs(got-c.want) > 1e-12*math.Abs(c.want) {
 			t.Errorf("sig(%g) = %g, want %g", c.v, got, c.want)

@@ -87,6 +87,7 @@ func parseNumbers(t *testing.T, s string) []int {
 // TestNumberList: footnote numbers ascending, runs of three or more as a
 // range (common practice, no source: how footnotes are cited in print).
 func TestNumberList(t *testing.T) {
+	t.Parallel()
 	for _, c := range []struct {
 		in   []int
 		want string
@@ -107,6 +108,7 @@ func TestNumberList(t *testing.T) {
 // Waste sheet and checks them against the regulations, and that every row
 // refers to rules printed below the table.
 func TestWasteCodes(t *testing.T) {
+	t.Parallel()
 	r := demoReport(t)
 	b, _ := render(t, r, Options{})
 	f := open(t, b)
@@ -270,6 +272,7 @@ func greenRow(t *testing.T, rows [][]string, mass, method string) []string {
 // TestGreenMetricsByHand checks the Waste sheet's green metrics of a case
 // worked by hand from handbook data.
 func TestGreenMetricsByHand(t *testing.T) {
+	t.Parallel()
 	b, _ := render(t, handGreenReport(t), Options{})
 	f := open(t, b)
 	rows := sheetRows(t, f, sheetWaste)
@@ -318,6 +321,7 @@ func TestGreenMetricsByHand(t *testing.T) {
 // Sheldon, Green Chem. 2007, 9, 1273): the streams and the metrics come to
 // the sheet by separate paths.
 func TestGreenMetricsAgreeWithStreams(t *testing.T) {
+	t.Parallel()
 	r := demoReport(t)
 	b, _ := render(t, r, Options{})
 	f := open(t, b)
@@ -362,6 +366,7 @@ func TestGreenMetricsAgreeWithStreams(t *testing.T) {
 // TestSolventSuggestions: a solvent's CHEM21 class and suggested
 // substitutions are printed as suggestions, with their sources.
 func TestSolventSuggestions(t *testing.T) {
+	t.Parallel()
 	r := twoMethodReport()
 	dcm, _ := green.Class("dichloromethane")
 	r.Greenness = []scale.SolventGreenness{
@@ -417,6 +422,7 @@ func handUncertainty() *scale.Uncertainty {
 // Waste, Uncertainty, Sources), its bands, the reading of a tie and the
 // spreads drawn with their statement of provenance.
 func TestUncertaintySheet(t *testing.T) {
+	t.Parallel()
 	r := twoMethodReport()
 	r.Uncertainty = handUncertainty()
 	b, _ := render(t, r, Options{})
@@ -490,6 +496,7 @@ func TestUncertaintySheet(t *testing.T) {
 // TestUncertaintyWins: a method cheapest in at least four draws of five
 // is a clear win; a method never feasible shows words, not numbers.
 func TestUncertaintyWins(t *testing.T) {
+	t.Parallel()
 	r := sweepReport()
 	r.Uncertainty = &scale.Uncertainty{TargetKg: 0.020, Draws: 50, Seed: 1, Bands: []scale.Band{
 		{Method: "chromatography", P10: 45, P50: 51.5, P90: 60, Feasible: 1, Cheapest: 1},
@@ -519,6 +526,7 @@ func TestUncertaintyWins(t *testing.T) {
 // excelize.MaxRowHeight and Excel's limit (Microsoft, "Excel
 // specifications and limits", from memory).
 func TestRowHeightLimit(t *testing.T) {
+	t.Parallel()
 	r := fixtureReport()
 	r.Coefficients[0].Source = strings.Repeat("a long explanation ", 2000)
 	b, _ := render(t, r, Options{})
@@ -545,6 +553,7 @@ func TestRowHeightLimit(t *testing.T) {
 // TestNoNaNInNewSheets: NaN and infinite green metrics and quantiles are
 // written as "n/a" (DEVELOPERS.md, "Library notes").
 func TestNoNaNInNewSheets(t *testing.T) {
+	t.Parallel()
 	r := twoMethodReport()
 	r.Results[1][0].Metrics = &green.Metrics{EFactor: math.NaN(), PMI: math.Inf(1), ProductKg: 0.01472, IsolatedKg: 0.01472}
 	r.Uncertainty = &scale.Uncertainty{TargetKg: 0.020, Draws: 10, Seed: 1, Bands: []scale.Band{
@@ -577,6 +586,7 @@ func TestNoNaNInNewSheets(t *testing.T) {
 // The marks the Uncertainty sheet describes are those scale.Spread sets:
 // a mark added there without words here would be listed by its bare name.
 func TestMarkMeaningsCoverSpread(t *testing.T) {
+	t.Parallel()
 	described := map[source.Mark]bool{}
 	for _, m := range markMeanings {
 		described[m.mark] = true

@@ -146,6 +146,7 @@ func onlySheets(d string, names []string) string {
 // the rule it follows (DEVELOPERS.md, "Money"): amount = qty × unit price rounded half
 // away from zero to the cent, total = sum of the rounded amounts.
 func TestFixtureIsHandComputed(t *testing.T) {
+	t.Parallel()
 	r := twoMethodReport()
 	// Source: hand computation in fixture_test.go, EUR.
 	wantTotals := map[string]string{
@@ -209,6 +210,7 @@ func formulaCells(t *testing.T, b []byte, f *excelize.File) map[string][]string 
 // money value with the ledger, exactly, as decimal strings; and checks that
 // no money formula escapes the comparison.
 func TestCachedValuesEqualLedger(t *testing.T) {
+	t.Parallel()
 	for name, r := range map[string]*scale.Report{"fixture": fixtureReport(), "two methods": twoMethodReport(),
 		"sweep": sweepReport(), "sweep of many masses": syntheticSweep(MaxDetailMasses+8, 2)} {
 		t.Run(name, func(t *testing.T) {
@@ -278,6 +280,7 @@ func TestCachedValuesEqualLedger(t *testing.T) {
 // TestTotalsFoundByLabel finds the TOTAL row by its label, without the
 // writer's own list of cells, and compares it with the hand totals.
 func TestTotalsFoundByLabel(t *testing.T) {
+	t.Parallel()
 	b, _ := render(t, twoMethodReport(), Options{})
 	f := open(t, b)
 	// Source: hand computation in fixture_test.go, EUR.
@@ -322,6 +325,7 @@ func TestTotalsFoundByLabel(t *testing.T) {
 // TestCalcCellValue recalculates every money cell with excelize's own
 // formula engine, a second oracle beside LibreOffice (DEVELOPERS.md, "Library notes").
 func TestCalcCellValue(t *testing.T) {
+	t.Parallel()
 	r := twoMethodReport()
 	b, lay := render(t, r, Options{})
 	f := open(t, b)
@@ -442,6 +446,7 @@ func TestLibreOfficeRecalculation(t *testing.T) {
 }
 
 func TestDeterministic(t *testing.T) {
+	t.Parallel()
 	a, _ := render(t, twoMethodReport(), Options{})
 	b, _ := render(t, twoMethodReport(), Options{})
 	if dump(t, a) != dump(t, b) {
@@ -461,6 +466,7 @@ var sumRange = regexp.MustCompile(`([A-Z]+)(\d+):([A-Z]+)(\d+)`)
 // TestNoNaN: a report with NaN and infinite values writes "n/a", never NaN
 // or Inf, and no SUM runs over an "n/a" cell (DEVELOPERS.md, "Library notes").
 func TestNoNaN(t *testing.T) {
+	t.Parallel()
 	r := fixtureReport()
 	u := &r.Results[1][0].Usage
 	u.Figures[0].SI = math.NaN()
@@ -497,6 +503,7 @@ func TestNoNaN(t *testing.T) {
 }
 
 func TestSheetsAndMarks(t *testing.T) {
+	t.Parallel()
 	r := twoMethodReport()
 	b, _ := render(t, r, Options{})
 	f := open(t, b)
@@ -580,6 +587,7 @@ func TestSheetsAndMarks(t *testing.T) {
 }
 
 func TestBadReports(t *testing.T) {
+	t.Parallel()
 	for _, tc := range []struct {
 		name   string
 		edit   func(r *scale.Report) *scale.Report
