@@ -46,6 +46,7 @@ type badCase struct {
 // the folder is left exactly as it was (no file written, changed or
 // removed, no temporary file left).
 func TestBadInput(t *testing.T) {
+	t.Parallel()
 	sc := map[string]string{"s.yaml": caseScenario, "prices.csv": string(templates.Prices)}
 	with := func(extra map[string]string) map[string]string {
 		out := map[string]string{}

@@ -20,6 +20,7 @@ func runCLI(t *testing.T, args ...string) (string, string, error) {
 
 // Every command answers --help with its usage and exit code 0.
 func TestHelpEveryCommand(t *testing.T) {
+	t.Parallel()
 	root := newRootCommand()
 	names := []string{""}
 	for _, c := range root.Commands() {
@@ -38,6 +39,7 @@ func TestHelpEveryCommand(t *testing.T) {
 }
 
 func TestUsageErrorsExit2(t *testing.T) {
+	t.Parallel()
 	for _, args := range [][]string{
 		{"estimate"},
 		{"nosuchcommand"},
@@ -55,6 +57,7 @@ func TestUsageErrorsExit2(t *testing.T) {
 // init writes both files, estimate reads them; outputs are never
 // overwritten without --force, and a refused file is left untouched.
 func TestInitEstimateAndOverwrite(t *testing.T) {
+	t.Parallel()
 	dir := t.TempDir()
 	out, _, err := runCLI(t, "init", filepath.Join(dir, "case"))
 	if err != nil {
@@ -126,6 +129,7 @@ func TestInitEstimateAndOverwrite(t *testing.T) {
 }
 
 func TestCheck(t *testing.T) {
+	t.Parallel()
 	dir := t.TempDir()
 	if _, _, err := runCLI(t, "init", dir); err != nil {
 		t.Fatal(err)
@@ -158,6 +162,7 @@ func TestCheck(t *testing.T) {
 
 // Missing prices are listed together, each with a line to add.
 func TestMissingPrices(t *testing.T) {
+	t.Parallel()
 	dir := t.TempDir()
 	if _, _, err := runCLI(t, "init", dir); err != nil {
 		t.Fatal(err)
@@ -179,6 +184,7 @@ func TestMissingPrices(t *testing.T) {
 }
 
 func TestMissingFiles(t *testing.T) {
+	t.Parallel()
 	_, _, err := runCLI(t, "estimate", "no/such/scenario.yaml", "--prices", "x.csv")
 	if err == nil || !strings.Contains(err.Error(), "no/such/scenario.yaml") {
 		t.Errorf("missing scenario: %v", err)
@@ -186,6 +192,7 @@ func TestMissingFiles(t *testing.T) {
 }
 
 func TestSolventsCommand(t *testing.T) {
+	t.Parallel()
 	out, _, err := runCLI(t, "solvents")
 	if err != nil {
 		t.Fatal(err)
@@ -238,6 +245,7 @@ func TestFormatAndExtensionAgree(t *testing.T) {
 // --prices-sheet names a sheet of an .xlsx price table; given with a CSV
 // table it is a usage error rather than silently ignored.
 func TestPricesSheetNeedsWorkbook(t *testing.T) {
+	t.Parallel()
 	dir := t.TempDir()
 	if _, _, err := runCLI(t, "init", filepath.Join(dir, "case")); err != nil {
 		t.Fatal(err)

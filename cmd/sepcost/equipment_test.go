@@ -12,6 +12,7 @@ import (
 // the scenario or from --equipment, refuses a bad one with file, line and
 // column, and refuses rates in another currency than the prices.
 func TestEquipmentTable(t *testing.T) {
+	t.Parallel()
 	dir := t.TempDir()
 	if _, _, err := runCLI(t, "init", dir); err != nil {
 		t.Fatal(err)

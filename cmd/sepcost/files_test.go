@@ -129,6 +129,7 @@ func (failWriter) Write([]byte) (int, error) { return 0, syscall.ENOSPC }
 // A report lost on the way to stdout is a failure (exit 1), not a success;
 // /dev/full is tried too where it exists.
 func TestStdoutWriteError(t *testing.T) {
+	t.Parallel()
 	dir := t.TempDir()
 	sc := writeCase(t, dir)
 	for _, args := range [][]string{
@@ -155,6 +156,7 @@ func TestStdoutWriteError(t *testing.T) {
 // sequence: ESC [ 2 J (ECMA-48, erase in display) in a scenario name is
 // shown as the escape \x1b.
 func TestTerminalEscapes(t *testing.T) {
+	t.Parallel()
 	dir := t.TempDir()
 	sc := writeCase(t, dir)
 	named := strings.Replace(caseScenario, "name: bad-input case", `name: "\e[2J\e]0;owned\a case\u202e"`, 1)
@@ -181,6 +183,7 @@ func TestTerminalEscapes(t *testing.T) {
 // case differs from the name the models ask for ("Silica gel", "ANISOLE")
 // is found by the price lookup and accepted by the workbook writer too.
 func TestPriceNamesAnyCase(t *testing.T) {
+	t.Parallel()
 	dir := t.TempDir()
 	sc := writeCase(t, dir)
 	pr := strings.Replace(string(templates.Prices), "\nsilica gel,", "\nSilica gel,", 1)

@@ -16,6 +16,7 @@ import (
 // This test reads the import lines of every non-test Go file and fails when
 // a lower package starts to depend on a higher one (DEVELOPERS.md, "Architecture and data flow").
 func TestLayering(t *testing.T) {
+	t.Parallel()
 	root := filepath.Join("..", "..")
 	const mod = "sepcost/"
 	// The method models come from the registry; beside them, the

@@ -9,6 +9,7 @@ import (
 
 // Bad sweep input is a usage error (exit 2) with a clear message.
 func TestSweepBadInput(t *testing.T) {
+	t.Parallel()
 	dir := t.TempDir()
 	if _, _, err := runCLI(t, "init", dir); err != nil {
 		t.Fatal(err)
@@ -36,6 +37,7 @@ func TestSweepBadInput(t *testing.T) {
 
 // The sweep CSV has one row per mass and method.
 func TestSweepCSV(t *testing.T) {
+	t.Parallel()
 	dir := t.TempDir()
 	if _, _, err := runCLI(t, "init", dir); err != nil {
 		t.Fatal(err)

@@ -11,6 +11,7 @@ import (
 // the scenario's target_mass. The starter scenario's target_mass is 2 kg
 // (templates/scenario.yaml).
 func TestTargetMass(t *testing.T) {
+	t.Parallel()
 	dir := t.TempDir()
 	if _, _, err := runCLI(t, "init", filepath.Join(dir, "case")); err != nil {
 		t.Fatal(err)

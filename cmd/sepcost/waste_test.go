@@ -15,6 +15,7 @@ import (
 // with "=" is written as text, not as a formula (OWASP "CSV Injection"
 // guidance, from memory).
 func TestWasteCSV(t *testing.T) {
+	t.Parallel()
 	dir := t.TempDir()
 	if _, _, err := runCLI(t, "init", dir); err != nil {
 		t.Fatal(err)
@@ -61,6 +62,7 @@ func TestWasteCSV(t *testing.T) {
 }
 
 func TestPortfolioCommand(t *testing.T) {
+	t.Parallel()
 	dir := t.TempDir()
 	if _, _, err := runCLI(t, "init", dir); err != nil {
 		t.Fatal(err)
