@@ -6,7 +6,6 @@ import (
 	"io"
 	"math"
 	"strconv"
-	"strings"
 	"text/tabwriter"
 
 	"sepcost/costing"
@@ -47,7 +46,7 @@ func sweepTable(ew *errWriter, r *scale.Report) error {
 	fmt.Fprintf(tw, "crude\tmethod\tcost/g %s\ttotal %s\tsolvent L\twaste kg\thours\tE-factor\tequipment\t\n", r.Prices.Currency, r.Prices.Currency)
 	notAssessed := map[string]string{}
 	for _, row := range r.Rows() {
-		if !row.Feasible && strings.HasPrefix(row.Reason, costing.NotAssessed) {
+		if costing.StatusOf(row.Feasible, row.Reason) == costing.StatusNotAssessed {
 			notAssessed[row.Method] = row.Reason
 			continue
 		}

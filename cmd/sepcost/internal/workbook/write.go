@@ -399,8 +399,5 @@ func priceRef(i int) string { return sheetRef(sheetPrices, absName(priceCol, i+2
 // notFeasible words a method's reason for having no numbers: "not
 // assessed: ..." stands as it is, any other reason reads "not feasible: ...".
 func notFeasible(reason string) string {
-	if strings.HasPrefix(reason, costing.NotAssessed) {
-		return reason
-	}
-	return "not feasible: " + reason
+	return costing.StatusOf(false, reason).Words() + ": " + costing.Detail(reason)
 }
