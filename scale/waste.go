@@ -49,7 +49,7 @@ func wasteRows(p *costing.Plan, masses []float64, methods []string, results [][]
 			if !res.Usage.Feasible {
 				continue
 			}
-			for _, s := range res.Usage.Waste {
+			for k, s := range res.Usage.Waste {
 				row := WasteRow{CrudeKg: m, Method: name, Mass: i, Col: j, Stream: s, Kg: s.Kg(), Litres: s.VolumeM3 * 1000}
 				key := classKey(name, s)
 				c, ok := memo[key]
@@ -63,7 +63,7 @@ func wasteRows(p *costing.Plan, masses []float64, methods []string, results [][]
 				}
 				row.Classification = c
 				for _, l := range res.Ledger.Lines {
-					if l.Demand.Group == usage.Disposal && l.Demand.Label == s.DisposalLabel() {
+					if l.Demand.Group == usage.Disposal && l.Demand.Stream == k+1 {
 						row.Disposal = row.Disposal.Add(l.Amount)
 						row.HasDisposal = true
 					}

@@ -73,8 +73,12 @@ func mergeRerun(u, v *usage.Usage) {
 			}
 		}
 	}
+	streams := len(u.Waste) // the re-run's streams follow the first run's
 	for _, d := range v.Demands {
 		d.Label = "re-run: " + d.Label
+		if d.Stream > 0 {
+			d.Stream += streams
+		}
 		u.Demands = append(u.Demands, d)
 	}
 	for _, s := range v.Waste {

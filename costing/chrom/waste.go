@@ -135,9 +135,7 @@ func (p *runPlan) demands(u *usage.Usage, sc *scenario.Scenario, coef source.Set
 	d(ItemLabour, "hands-on time", usage.Labour, attended*3600, units.Time)
 	d(ItemElectricity, "evaporator bath and chiller", usage.Energy, evaporationElectricity(coef, heat), units.Energy)
 	addDemandsOfEquipment(u, p.e, p.ev, p.colHours*3600, p.evapHours*3600)
-	for _, s := range u.Waste {
-		d(s.Class.DisposalItem(), s.DisposalLabel(), usage.Disposal, s.Kg(), units.Mass)
-	}
+	u.AddDisposals()
 	d(ItemProduct, "product lost (mixed fractions, retained on silica)", usage.ProductLoss, lost, units.Mass)
 	if len(recovered) > 0 {
 		for _, id := range recovered.IDs() {

@@ -142,9 +142,7 @@ func (m *Model) demands(u *usage.Usage, o *outcome) {
 	_, attended := u.Hours()
 	d(ItemLabour, "hands-on time", usage.Labour, attended*3600, units.Time)
 	d(ItemElectricity, "heating, chiller and drying", usage.Energy, o.electric, units.Energy)
-	for _, s := range u.Waste {
-		d(s.Class.DisposalItem(), s.DisposalLabel(), usage.Disposal, s.Kg(), units.Mass)
-	}
+	u.AddDisposals()
 	d(ItemProduct, "product left in mother liquors and washes", usage.ProductLoss, u.ProductInKg-u.ProductOutKg, units.Mass)
 	d(ItemLabour, "solvent screening and development (one-time)", usage.OneTime, m.p.screeningTime, units.Time)
 	d(ItemProduct, "crude used in screening, product content (one-time)", usage.OneTime, m.p.screeningMass*m.sc.Purity, units.Mass)

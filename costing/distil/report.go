@@ -182,8 +182,6 @@ func (m *Model) demands(u *usage.Usage, o *outcome) {
 	}
 	dm(ItemLabour, "hands-on time", usage.Labour, attended*3600, units.Time)
 	dm(ItemElectricity, "heater, condenser chiller and vacuum pump", usage.Energy, o.electric, units.Energy)
-	for _, w := range u.Waste {
-		dm(w.Class.DisposalItem(), w.DisposalLabel(), usage.Disposal, w.Kg(), units.Mass)
-	}
+	u.AddDisposals()
 	dm(ItemProduct, "product lost (fore-run, tails, hold-up, cold trap)", usage.ProductLoss, u.ProductInKg-u.ProductOutKg, units.Mass)
 }

@@ -53,6 +53,9 @@ type Demand struct {
 	// prepacked cartridges), so that it enters the mass balance; 0 if
 	// unknown or not material.
 	Kg float64
+	// Stream is, for a disposal demand, 1 + the index in Usage.Waste of
+	// the stream it pays for (AddDisposals); 0 for any other demand.
+	Stream int
 }
 
 // WasteClass is a disposal class, priced per kilogram.
@@ -228,6 +231,16 @@ func (u *Usage) AddCountedDemand(item, label string, g Group, count, kg float64)
 // kept, so that the ledger refuses it loudly rather than a cost going missing.
 func (u *Usage) AddDemand(item, label string, g Group, qty float64, dim units.Dim) {
 	u.Demands = append(u.Demands, Demand{Item: item, Label: label, Group: g, Qty: qty, Dim: dim})
+}
+
+// AddDisposals adds one disposal demand per waste stream, in stream order:
+// the stream's mass priced by its class's disposal item, linked to the
+// stream by Demand.Stream.
+func (u *Usage) AddDisposals() {
+	for i, s := range u.Waste {
+		u.Demands = append(u.Demands, Demand{Item: s.Class.DisposalItem(), Label: s.DisposalLabel(), Group: Disposal,
+			Qty: s.Kg(), Dim: units.Mass, Stream: i + 1})
+	}
 }
 
 // IsolatedKg is the mass isolated as product, with the impurity it
