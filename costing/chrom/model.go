@@ -114,7 +114,7 @@ func (md *Model) Candidates(crudeKg float64) []usage.Usage {
 func (a analysis) header(sc *scenario.Scenario, coef source.Set, crudeKg float64) usage.Usage {
 	ch := sc.Chromatography
 	u := usage.New(Method, crudeKg, crudeKg*sc.Purity)
-	fig, note := u.AddFigure, u.Notef
+	fig := u.AddFigure
 	fig("k_product", "retention factor k of the product", RetentionFactor(ch.ProductRf), "")
 	u.MarkDetail("k_product") // the method sheet and JSON only
 	fig("cv_product", "product elutes at (column volumes)", ElutionCV(ch.ProductRf), "")
@@ -126,25 +126,7 @@ func (a analysis) header(sc *scenario.Scenario, coef source.Set, crudeKg float64
 	fig("ratio_table", "silica : crude by Still's table", a.ratioTable, "")
 	fig("ratio_ceiling", "silica : crude at the practical ceiling", a.ratioCeil, "")
 	fig("ratio_rule", "silica : crude the rule gives, bounded by the ceiling", a.ratioRule, "")
-	if a.first {
-		note(usage.Info, "The product runs above the nearest impurity (Rf %.2f vs %.2f) and elutes first.", ch.ProductRf, ch.ImpurityRf)
-	} else {
-		note(usage.Info, "The product runs below the nearest impurity (Rf %.2f vs %.2f) and elutes after it.", ch.ProductRf, ch.ImpurityRf)
-	}
-	if a.dRf < 0.05 {
-		note(usage.Warning, "ΔRf %.3f is below 0.05: one flash pass is unlikely to separate; look for a better eluent first.", a.dRf)
-	} else if a.dRf < StillHardDeltaRf {
-		note(usage.Warning, "ΔRf %.3f is below the 0.1 of Still's table: the table's loading is extrapolated.", a.dRf)
-	}
-	if ch.ProductRf < 0.15 || ch.ProductRf > 0.45 {
-		note(usage.Warning, "Product Rf %.2f is outside about 0.15–0.45, the range the loading models are calibrated for (Still et al. 1978 aim at 0.35).", ch.ProductRf)
-	}
-	theory := math.Max(a.ratioTheory, a.ratioCeil)
-	if f := theory / a.ratioTable; f > coef.Get(KeyRouteTolerance) || f < 1/coef.Get(KeyRouteTolerance) {
-		note(usage.Warning, "The two loading rules differ by a factor %.1f: elution theory (bounded by the ceiling) %.0f : 1, Still's table %.0f : 1; the silica is sized by %s.", math.Max(f, 1/f), theory, a.ratioTable, a.why)
-	} else {
-		note(usage.Info, "Silica sized by %s; elution theory %.0f : 1, Still's table %.0f : 1.", a.why, theory, a.ratioTable)
-	}
+	a.separationNotes(&u, ch, coef)
 	t := usage.Table{Key: "loading_tradeoff", Title: fmt.Sprintf("Loading against recovery at the purity asked (%.0f cm bed, %.0f plates)", coef.Get(KeyRefBed)*100, a.plates),
 		Columns: []string{"silica : crude", "crude per silica (%)", "product in the pure cut (%)", "product in mixed fractions (%)", "purity of the cut (%)", "usable (1 = yes)"}}
 	for _, r := range a.trade {
@@ -156,17 +138,6 @@ func (a analysis) header(sc *scenario.Scenario, coef source.Set, crudeKg float64
 	}
 	u.Tables = append(u.Tables, t)
 	return u
-}
-
-// infeasible says why no loading reaches the purity, and what ΔRf would.
-func (a analysis) infeasible(coef source.Set) string {
-	need := a.deltaRfNeeded(coef)
-	why := fmt.Sprintf("no loading up to %.0f : 1 silica : crude gives a cut of %.4g %% purity holding at least %.0f %% of the product: ΔRf %.3f on a bed of about %.0f theoretical plates",
-		coef.Get(KeyMaxRatio), a.target*100, coef.Get(KeyMinRecovery)*100, a.dRf, a.plates)
-	if math.IsNaN(need) {
-		return why + "; no eluent that keeps the product's Rf would do at this purity"
-	}
-	return why + fmt.Sprintf("; an eluent giving ΔRf ≥ %.3f would", need)
 }
 
 // equipmentFor lists the equipment options for one loading: the columns
