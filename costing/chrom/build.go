@@ -6,7 +6,6 @@ import (
 
 	"sepcost/costing/scenario"
 	"sepcost/costing/source"
-	"sepcost/costing/units"
 	"sepcost/costing/usage"
 )
 
@@ -87,22 +86,7 @@ func (p *runPlan) equipmentFigures(u *usage.Usage, coef source.Set) {
 	fig("silica_total", "silica used", e.silicaRun*p.runs, "g")
 	fig("load_factor", "load over the bed's capacity (crude / (q_s · silica))", p.crudeRun/(coef.Get(KeyQs)*e.silicaRun), "")
 	fig("column_volume", "column volume", p.v0, "mL")
-	if e.runs > 1 {
-		u.Notef(usage.RepeatLevel(e.runs), "The batch needs %.3g kg of silica, more than the largest %s holds: %d runs of %s of crude each.%s", u.CrudeKg*p.ratio, kindWord(e), e.runs, units.FormatMass(p.crudeRun), impractical(e.runs, kindWord(e)+" runs"))
-	}
-	if e.diameter > 0.3 && e.cartridge == nil {
-		u.Notef(usage.Caution, "A %.0f mm column runs %.0f L/min of flammable eluent: bond and earth the column, lines and receivers against static charge, stay within the column's pressure rating, and have the set-up reviewed under your site's process-safety rules.", e.diameter*1000, coef.Get(KeyFrontVelocity)*math.Pi*e.diameter*e.diameter/4*60000)
-	}
-	if r := e.silicaRun * p.runs / u.CrudeKg; r > 300 {
-		u.Notef(usage.Warning, "Silica : crude of %.0f : 1 is far above the usual 20–150 : 1; a better eluent, a longer column or another method will pay.", r)
-	}
-}
-
-func kindWord(e equip) string {
-	if e.cartridge != nil {
-		return "cartridge"
-	}
-	return "column"
+	p.equipmentNotes(u, coef)
 }
 
 // eluent adds up the eluent per run, by segment, in column volumes, and
@@ -205,8 +189,7 @@ func (p *runPlan) times(u *usage.Usage, sc *scenario.Scenario, coef source.Set, 
 	if p.dryLoad.Total() > 0 {
 		what += " and dry-load solvent"
 	}
-	u.Notef(usage.Info, "Evaporator: %s (%.3g L/h), the smallest the site lists that takes a run's %.3g L of %s within the %.1f h the working day leaves after the column work, or else the fastest.",
-		p.ev.Name, p.ev.Rate*3.6e6, evapRun*1000, what, left/3600)
+	p.evaporatorNote(u, evapRun, what, left)
 	p.evapHours = evapRun / p.ev.Rate * p.runs / 3600
 	elapsed, attended := u.Hours()
 	p.colHours = elapsed - p.evapHours
@@ -225,9 +208,7 @@ func (p *runPlan) workingDays(u *usage.Usage, coef source.Set, elapsed, attended
 	fig("runs_per_day", "runs per working day", math.Floor(day/perRun), "")
 	fig("working_days", "elapsed working days", elapsed/day, "")
 	fig("evaporation_hours", "evaporation hours", p.evapHours*3600, "h")
-	if attended > week || elapsed > week {
-		u.Notef(usage.Warning, "%d runs take %.0f h elapsed (%.1f working days of %.0f h), %.0f h of them at the bench: more than one chemist's working week of %.0f h; plan larger equipment, a second chemist or another method.", int(p.runs), elapsed, elapsed/day, day, attended, week)
-	}
+	p.weekNote(u, elapsed, attended, day, week)
 }
 
 // product splits the product into the pure cut, the mixed fractions and the
@@ -241,9 +222,7 @@ func (p *runPlan) product(u *usage.Usage, a analysis, coef source.Set) {
 	fig("mixed_share", "product in mixed fractions", eluted*p.cut.Mixed/u.ProductInKg, "%")
 	fig("retained_share", "product held on the silica", coef.Get(KeyRetainedLoss), "%")
 	fig("purity_reached", "purity of the pooled product fractions (product over product and nearest impurity)", p.cut.Purity, "%")
-	if p.cut.Recovery < 0.9 {
-		u.Notef(usage.Info, "The cut for %.4g %% purity keeps %.0f %% of the eluted product; the rest is in mixed fractions.", a.target*100, p.cut.Recovery*100)
-	}
+	p.cutNote(u, a)
 }
 
 // evaporationElectricity is the bath's and the chiller's electricity to

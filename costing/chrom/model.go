@@ -195,12 +195,3 @@ func addDemandsOfEquipment(u *usage.Usage, e equip, ev SiteEvaporator, colHours,
 		d(ev.HourItem, "evaporator time: "+ev.Name, usage.EquipmentUse, evapHours, units.Time)
 	}
 }
-
-// impractical adds, from usage.ManyRepeats repeats on, why the plan is
-// impractical as it stands.
-func impractical(n int, what string) string {
-	if n < usage.ManyRepeats {
-		return ""
-	}
-	return fmt.Sprintf(" %d %s are impractical as one batch: a larger column (process equipment) or another method would serve.", n, what)
-}
