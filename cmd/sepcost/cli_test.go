@@ -38,6 +38,9 @@ func TestHelpEveryCommand(t *testing.T) {
 	}
 }
 
+// Exit codes: 0 ok, 1 failure, 2 a mistake in the command line (the
+// usual convention of command-line tools, e.g. GNU grep's manual, "Exit
+// Status" — common practice).
 func TestUsageErrorsExit2(t *testing.T) {
 	t.Parallel()
 	for _, args := range [][]string{
@@ -46,6 +49,9 @@ func TestUsageErrorsExit2(t *testing.T) {
 		{"estimate", "x.yaml", "--mass", "20"},
 		{"estimate", "x.yaml", "--format", "pdf"},
 		{"demo", "--bogus"},
+		{"demo", "extra"},
+		{"solvents", "extra"},
+		{"init", "a", "b"},
 	} {
 		_, _, err := runCLI(t, args...)
 		if exitCode(err) != 2 {

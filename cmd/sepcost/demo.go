@@ -34,7 +34,7 @@ workbook, sepcost-demo.xlsx unless -o says otherwise, then prints a summary.
 With --liquid it runs a second demo, a liquid product (chromatography against
 distillation). Needs no files. ` + "`sepcost init`" + ` writes the same scenario
 and prices to edit.`,
-		Args: cobra.NoArgs,
+		Args: usageArgs(cobra.NoArgs),
 		RunE: func(cmd *cobra.Command, args []string) error {
 			return runDemo(cmd.Context(), opts, cmd.OutOrStdout(), cmd.ErrOrStderr())
 		},

@@ -26,7 +26,7 @@ func newInitCommand() *cobra.Command {
 example prices (prices.csv) and a site equipment table with example sizes,
 rates and prices (equipment.csv) into DIR (default: the current folder),
 creating DIR if needed. Existing files are left alone unless --force.`,
-		Args: cobra.MaximumNArgs(1),
+		Args: usageArgs(cobra.MaximumNArgs(1)),
 		RunE: func(cmd *cobra.Command, args []string) error {
 			opts.dir = "."
 			if len(args) == 1 {

@@ -58,7 +58,10 @@ func run(ctx context.Context, args []string, stdout, stderr io.Writer) error {
 	root.SetErr(stderr)
 	root.SetContext(ctx)
 	cmd, err := root.ExecuteC()
-	if err != nil && cmd != nil && isArgError(err) {
+	var u usageError
+	if err != nil && cmd == root && !errors.As(err, &u) {
+		// The root runs nothing: an error there is cobra's own about the
+		// command line (an unknown command).
 		return usageError{err}
 	}
 	if out.err != nil {
@@ -85,17 +88,12 @@ func oneFile(what, example string) cobra.PositionalArgs {
 	}
 }
 
-// isArgError recognises cobra's own argument and command errors.
-func isArgError(err error) bool {
-	var u usageError
-	if errors.As(err, &u) {
-		return false
-	}
-	msg := err.Error()
-	for _, p := range []string{"unknown command", "accepts ", "requires at least", "requires exactly", "unknown flag", "unknown shorthand", "invalid argument"} {
-		if strings.Contains(msg, p) {
-			return true
+// usageArgs makes a cobra argument check's error a usage error (exit 2).
+func usageArgs(check cobra.PositionalArgs) cobra.PositionalArgs {
+	return func(cmd *cobra.Command, args []string) error {
+		if err := check(cmd, args); err != nil {
+			return usageError{err}
 		}
+		return nil
 	}
-	return false
 }

@@ -17,7 +17,7 @@ of vaporization, liquid heat capacity, flash point, halogenated and
 peroxide-forming flags, and the range of the Antoine constants; with
 --sources, the source and certainty of every value. A scenario can add
 solvents or replace these under solvents:.`,
-		Args: cobra.NoArgs,
+		Args: usageArgs(cobra.NoArgs),
 		RunE: func(cmd *cobra.Command, args []string) error {
 			return plain.Solvents(cmd.OutOrStdout(), solvent.Builtin().All(), sources)
 		},
