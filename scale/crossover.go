@@ -163,23 +163,34 @@ func (s *decisionSearch) steps(lo, hi float64, plo, phi []point) error {
 		if plo[j].equipment == phi[j].equipment {
 			continue
 		}
-		a, b, pa, pb := lo, hi, plo, phi
+		// The bisection follows method j alone; the other methods are run
+		// only at the two masses it ends on (the models are pure functions
+		// of the mass, so the points are those a full run would give).
+		a, b := lo, hi
+		eqA := plo[j].equipment
+		var pa, pb []point = plo, phi
 		for b-a > CrossoverPrecision {
 			mid := (a + b) / 2
-			pm, err := s.at(mid)
+			pj, err := s.eval(j, math.Exp(mid))
 			if err != nil {
 				return err
 			}
-			if pm[j].equipment == pa[j].equipment {
-				a, pa = mid, pm
+			if pj.equipment == eqA {
+				a, pa = mid, nil
 			} else {
-				b, pb = mid, pm
+				b, pb = mid, nil
 			}
 		}
 		for _, side := range []struct {
 			m float64
 			p []point
 		}{{a, pa}, {b, pb}} {
+			if side.p == nil {
+				var err error
+				if side.p, err = s.at(side.m); err != nil {
+					return err
+				}
+			}
 			if cheapest(perGrams(side.p)) == w {
 				continue
 			}

@@ -306,6 +306,7 @@ type Portfolio struct {
 }
 
 // Loader turns a plan row's scenario path into a prepared plan.
+// BuildPortfolio calls it once per distinct path.
 type Loader func(path string) (*costing.Plan, error)
 
 // BuildPortfolio costs every plan row as a campaign of its runs: the
@@ -321,8 +322,20 @@ func BuildPortfolio(file string, rows []PlanRow, load Loader, t *prices.Table) (
 		cautions: map[string]bool{}, quarters: map[string]decimal.Decimal{}}
 	charged := map[string]bool{}
 	var errs []error
+	// Each scenario file is read and prepared once per run, however many
+	// rows name it; a file that fails fails on every row that names it.
+	type loaded struct {
+		p   *costing.Plan
+		err error
+	}
+	plans := map[string]loaded{}
 	for _, row := range rows {
-		p, err := load(row.Scenario)
+		l, ok := plans[row.Scenario]
+		if !ok {
+			l.p, l.err = load(row.Scenario)
+			plans[row.Scenario] = l
+		}
+		p, err := l.p, l.err
 		if err != nil {
 			errs = append(errs, &PlanError{File: file, Line: row.Line, Field: "scenario", Msg: err.Error()})
 			continue
