@@ -11,6 +11,7 @@ import (
 // analysis is what the TLC, the loading rules and the band model say about
 // one separation, before any equipment is chosen.
 type analysis struct {
+	sc          *scenario.Scenario
 	sep         Separation
 	dRf         float64
 	first       bool    // the product elutes first
@@ -42,7 +43,7 @@ var tradeSteps = []float64{0.5, 0.7, 1, 1.5, 2.25, 3.5, 5, 8}
 func analyse(sc *scenario.Scenario, coef source.Set) analysis {
 	ch := sc.Chromatography
 	get := coef.Get
-	a := analysis{sep: Separation{ProductRf: ch.ProductRf, ImpurityRf: ch.ImpurityRf, Product: sc.Purity, Impurity: sc.NearestImpurity}}
+	a := analysis{sc: sc, sep: Separation{ProductRf: ch.ProductRf, ImpurityRf: ch.ImpurityRf, Product: sc.Purity, Impurity: sc.NearestImpurity}}
 	// Rounded to 1e-9 so that Rf values written to two places (0.35 − 0.25)
 	// compare as the chemist wrote them, not as 0.0999999….
 	a.dRf = math.Round(math.Abs(ch.ProductRf-ch.ImpurityRf)*1e9) / 1e9
@@ -137,17 +138,27 @@ func usable(c Cut, coef source.Set) bool {
 // the largest silica : crude allowed, by bisection; NaN if even the widest
 // ΔRf the product's Rf leaves room for (at most 0.5) fails.
 func (a analysis) deltaRfNeeded(coef source.Set) float64 {
+	// The whole analysis is rerun with the impurity moved, so that the
+	// loading rule (which may ask more silica than allowed) and the band
+	// model both decide, as they do for the scenario itself.
 	ok := func(d float64) bool {
-		b := a
+		ch := *a.sc.Chromatography
 		if a.first {
-			b.sep.ImpurityRf = a.sep.ProductRf - d
+			ch.ImpurityRf = ch.ProductRf - d
 		} else {
-			b.sep.ImpurityRf = a.sep.ProductRf + d
+			ch.ImpurityRf = ch.ProductRf + d
 		}
-		if b.sep.ImpurityRf <= 0.01 || b.sep.ImpurityRf >= 0.99 {
+		if ch.ImpurityRf <= 0.01 || ch.ImpurityRf >= 0.99 {
 			return false
 		}
-		return usable(b.cutAt(1/coef.Get(KeyMaxRatio), a.plates), coef)
+		sc := *a.sc
+		sc.Chromatography = &ch
+		for _, r := range analyse(&sc, coef).trade {
+			if usable(r.cut, coef) {
+				return true
+			}
+		}
+		return false
 	}
 	lo, hi := a.dRf, 0.5
 	if a.first {

@@ -153,6 +153,21 @@ func TestUnresolvableIsNotFeasible(t *testing.T) {
 		if !strings.Contains(u.Reason, w) {
 			t.Errorf("reason lacks %q: %s", w, u.Reason)
 		}
+	} // The ΔRf named must be wider than the one that failed, and an eluent
+	// giving it (a little more, for the rounding to three places) must be
+	// feasible: the advice is only worth giving if it is true.
+	var need float64
+	if i := strings.Index(u.Reason, "ΔRf ≥ "); i < 0 {
+		t.Fatalf("no ΔRf needed in %s", u.Reason)
+	} else if _, err := fmt.Sscanf(u.Reason[i+len("ΔRf ≥ "):], "%g", &need); err != nil {
+		t.Fatal(err)
+	}
+	if need <= 0.005 {
+		t.Fatalf("ΔRf needed %g is not wider than the 0.005 that failed", need)
+	}
+	wider := loadScenario(t, caseYAML(0.350, 0.350-need-0.002, 0.90, 0.05, ""))
+	if w := Run(wider, testCoefficients(), testSite(), 0.01); !w.Feasible {
+		t.Errorf("an eluent giving ΔRf %.3f is still not feasible: %s", need+0.002, w.Reason)
 	}
 }
 

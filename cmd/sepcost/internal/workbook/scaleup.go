@@ -243,6 +243,7 @@ type lineID struct {
 	group       usage.Group
 	item, label string
 	rep         int
+	priceRow    int // a price band of its own is a column of its own
 }
 
 // quantityColumns gathers the ledger lines of every feasible result, in
@@ -272,7 +273,7 @@ func quantityColumns(r *scale.Report, m money) ([]*qtyCol, [][]int, error) {
 			list := make([]int, len(res.Ledger.Lines))
 			for n := range res.Ledger.Lines {
 				l := &res.Ledger.Lines[n]
-				id := lineID{l.Demand.Group, l.Demand.Item, l.Demand.Label, 0}
+				id := lineID{l.Demand.Group, l.Demand.Item, l.Demand.Label, 0, l.PriceRow}
 				for _, e := range res.Ledger.Lines[:n] {
 					if e.Demand.Group == id.group && e.Demand.Item == id.item && e.Demand.Label == id.label {
 						id.rep++
@@ -283,6 +284,9 @@ func quantityColumns(r *scale.Report, m money) ([]*qtyCol, [][]int, error) {
 					label := l.Demand.Label
 					if id.rep > 0 {
 						label = fmt.Sprintf("%s (%d)", label, id.rep+1)
+					}
+					if band := bandOf(r, l.PriceRow); band != "" {
+						label += " (price from " + band + ")"
 					}
 					q = &qtyCol{item: l.Demand.Item, label: label, unit: l.Unit, priceRow: l.PriceRow, col: len(order)}
 					cols[id] = q
@@ -326,16 +330,16 @@ func quantityColumns(r *scale.Report, m money) ([]*qtyCol, [][]int, error) {
 	return out, idx, nil
 }
 
-// sameLines reports whether two ledgers bill the same lines (group, item
-// and label) in the same order. The unit and the price row follow from the
-// item, which validate has checked against the price table.
+// sameLines reports whether two ledgers bill the same lines (group, item,
+// label and price row: a price band) in the same order. The unit follows
+// from the price row, which validate has checked against the price table.
 func sameLines(a, b *ledger.Ledger) bool {
 	if len(a.Lines) != len(b.Lines) {
 		return false
 	}
 	for n := range a.Lines {
 		x, y := &a.Lines[n].Demand, &b.Lines[n].Demand
-		if x.Item != y.Item || x.Label != y.Label || x.Group != y.Group {
+		if x.Item != y.Item || x.Label != y.Label || x.Group != y.Group || a.Lines[n].PriceRow != b.Lines[n].PriceRow {
 			return false
 		}
 	}
@@ -667,4 +671,13 @@ func scaleUpHead(sw *excelize.StreamWriter, st *styles, r *scale.Report, m money
 		return fmt.Errorf("workbook: sheet %s: %w", sheetScaleUp, err)
 	}
 	return nil
+}
+
+// bandOf is the purchase from which price row i applies ("200 L") when the
+// row is a band above the first of a banded item, else "".
+func bandOf(r *scale.Report, i int) string {
+	if r.Prices == nil || i < 0 || i >= len(r.Prices.Items) {
+		return ""
+	}
+	return r.Prices.Items[i].From
 }

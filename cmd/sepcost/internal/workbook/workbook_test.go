@@ -361,7 +361,9 @@ func TestLibreOfficeRecalculation(t *testing.T) {
 	reports := map[string]*scale.Report{"fixture": fixtureReport(), "two-methods": twoMethodReport(), "demo": demoReport(t), "demo-liquid": liquidDemoReport(t),
 		// Sweeps: Scale-up totals that refer to the method sheets, and
 		// (many masses) totals that are sums of ROUND terms on the prices.
-		"sweep": sweepReport(), "sweep-many": syntheticSweep(40, 2)}
+		"sweep": sweepReport(), "sweep-many": syntheticSweep(40, 2),
+		// A sweep of the demo across price bands.
+		"demo-sweep": demoSweepReport(t)}
 	type written struct {
 		cached []byte
 		lay    *layout
