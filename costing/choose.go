@@ -15,6 +15,13 @@ import (
 // kept (feasible candidates first); the kept usage says which it is, why,
 // and what the others cost.
 func (p *Plan) runPriced(j int, crudeKg float64, t *prices.Table) (usage.Usage, ledger.Ledger, error) {
+	u, l, err := p.choose(j, crudeKg, t)
+	u.Compact()
+	return u, l, err
+}
+
+// choose is runPriced before the kept usage is compacted.
+func (p *Plan) choose(j int, crudeKg float64, t *prices.Table) (usage.Usage, ledger.Ledger, error) {
 	m := p.Methods[j]
 	if m.Choices == nil {
 		u := m.Run(crudeKg)
