@@ -101,6 +101,23 @@ func (s *decisionSearch) at(lnm float64) ([]point, error) {
 	return ps, nil
 }
 
+// atWith is at with method j's point already known.
+func (s *decisionSearch) atWith(lnm float64, j int, pj point) ([]point, error) {
+	ps := make([]point, len(s.names))
+	for k := range s.names {
+		if k == j {
+			ps[k] = pj
+			continue
+		}
+		p, err := s.eval(k, math.Exp(lnm))
+		if err != nil {
+			return nil, err
+		}
+		ps[k] = p
+	}
+	return ps, nil
+}
+
 // findDecisionCrossovers scans the grid (grid[k][j]: method j at masses[k])
 // for neighbouring masses whose cheapest feasible method differs, and
 // bisects each interval on the model in ln m to CrossoverPrecision. Where
@@ -168,7 +185,8 @@ func (s *decisionSearch) steps(lo, hi float64, plo, phi []point) error {
 		// of the mass, so the points are those a full run would give).
 		a, b := lo, hi
 		eqA := plo[j].equipment
-		var pa, pb []point = plo, phi
+		pa, pb := plo, phi
+		var ja, jb point // method j where a or b was last moved to
 		for b-a > CrossoverPrecision {
 			mid := (a + b) / 2
 			pj, err := s.eval(j, math.Exp(mid))
@@ -176,18 +194,19 @@ func (s *decisionSearch) steps(lo, hi float64, plo, phi []point) error {
 				return err
 			}
 			if pj.equipment == eqA {
-				a, pa = mid, nil
+				a, pa, ja = mid, nil, pj
 			} else {
-				b, pb = mid, nil
+				b, pb, jb = mid, nil, pj
 			}
 		}
 		for _, side := range []struct {
-			m float64
-			p []point
-		}{{a, pa}, {b, pb}} {
+			m  float64
+			p  []point
+			pj point
+		}{{a, pa, ja}, {b, pb, jb}} {
 			if side.p == nil {
 				var err error
-				if side.p, err = s.at(side.m); err != nil {
+				if side.p, err = s.atWith(side.m, j, side.pj); err != nil {
 					return err
 				}
 			}
