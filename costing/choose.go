@@ -2,6 +2,7 @@ package costing
 
 import (
 	"fmt"
+	"math"
 	"sort"
 	"strings"
 
@@ -15,6 +16,13 @@ import (
 // kept (feasible candidates first); the kept usage says which it is, why,
 // and what the others cost.
 func (p *Plan) runPriced(j int, crudeKg float64, t *prices.Table) (usage.Usage, ledger.Ledger, error) {
+	u, l, err := p.choose(j, crudeKg, t)
+	u.Compact()
+	return u, l, err
+}
+
+// choose is runPriced before the kept usage is compacted.
+func (p *Plan) choose(j int, crudeKg float64, t *prices.Table) (usage.Usage, ledger.Ledger, error) {
 	m := p.Methods[j]
 	if m.Choices == nil {
 		u := m.Run(crudeKg)
@@ -22,13 +30,9 @@ func (p *Plan) runPriced(j int, crudeKg float64, t *prices.Table) (usage.Usage, 
 		return u, l, err
 	}
 	cands := m.Choices(crudeKg)
-	ps := make([]priced, 0, len(cands))
-	for _, u := range cands {
-		l, err := ledger.Price(u, t)
-		if err != nil {
-			return u, ledger.Ledger{}, err
-		}
-		ps = append(ps, priced{u, l, Result{Usage: u, Ledger: l}.PerGram()})
+	ps, err := p.priceCandidates(cands, t)
+	if err != nil {
+		return ps[len(ps)-1].u, ledger.Ledger{}, err
 	}
 	best := -1
 	for i, c := range ps {
@@ -50,6 +54,75 @@ type priced struct {
 	u       usage.Usage
 	l       ledger.Ledger
 	perGram float64
+}
+
+// shown is how many of the cheapest candidates describeChoices lists.
+const shown = 4
+
+// priceCandidates prices the candidates that can be the cheapest per gram
+// or among the shown cheapest, in decimal as every reported ledger is; the
+// others keep a NaN cost per gram and no ledger, which neither the choice
+// nor describeChoices can reach. It ranks them first with float rates
+// (ledger.Rates.TotalBound: the float total F and a bound B on its
+// distance from the decimal total). A candidate whose lowest possible
+// cost per gram, (F − B)/g, is above the shown-th lowest of the highest
+// possible ones, (F + B)/g, is dearer per gram in decimal than shown
+// candidates that are priced, so leaving it unpriced changes neither the
+// choice nor the list. Where the float rates cannot price every candidate
+// (an item missing, a volume priced per mass), every candidate is priced
+// in decimal, as are all when none is feasible. On error the last
+// candidate returned is the one that failed.
+func (p *Plan) priceCandidates(cands []usage.Usage, t *prices.Table) ([]priced, error) {
+	ps := make([]priced, len(cands))
+	lo := make([]float64, len(cands))
+	hi := make([]float64, 0, len(cands))
+	r := p.rates(t)
+	ranked := true
+	for i, u := range cands {
+		ps[i] = priced{u: u, perGram: math.NaN()}
+		f, b, err := r.TotalBound(u)
+		if err != nil {
+			ranked = false
+			break
+		}
+		lo[i] = math.Inf(1)
+		if u.Feasible && u.ProductOutKg > 0 {
+			g := u.ProductOutKg * 1000
+			lo[i] = (f - b) / g
+			hi = append(hi, (f+b)/g)
+		}
+	}
+	if len(hi) == 0 {
+		ranked = false
+	}
+	limit := math.Inf(1)
+	if ranked && len(hi) > shown {
+		sort.Float64s(hi)
+		limit = hi[shown-1]
+	}
+	for i := range ps {
+		c := &ps[i]
+		if ranked && lo[i] > limit {
+			continue
+		}
+		l, err := ledger.Price(c.u, t)
+		if err != nil {
+			return ps[:i+1], err
+		}
+		c.l, c.perGram = l, Result{Usage: c.u, Ledger: l}.PerGram()
+	}
+	return ps, nil
+}
+
+// rates is the float form of a price table (ledger.NewRates), made once
+// per table.
+func (p *Plan) rates(t *prices.Table) *ledger.Rates {
+	if v, ok := p.rateCache.Load(t); ok {
+		return v.(*ledger.Rates)
+	}
+	r := ledger.NewRates(t)
+	p.rateCache.Store(t, r)
+	return r
 }
 
 // describeChoices lists the four cheapest feasible candidates with their

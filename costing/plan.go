@@ -44,6 +44,7 @@ type Plan struct {
 	WasteSector waste.Sector
 
 	sitePrices sync.Map // *prices.Table → the same with the equipment's charges
+	rateCache  sync.Map // *prices.Table → its *ledger.Rates
 }
 
 // Options are what Prepare takes besides the scenario.

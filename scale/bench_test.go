@@ -1,20 +1,26 @@
 package scale
 
 import (
+	"bytes"
+	"fmt"
 	"math"
 	"math/rand/v2"
+	"os"
+	"strings"
 	"time"
 
 	"testing"
 
+	"sepcost/costing"
 	"sepcost/costing/ledger"
+	"sepcost/costing/scenario"
 	"sepcost/templates"
 )
 
-// BenchmarkSweep200: a 200-mass sweep over the three methods of the liquid
-// demo plus the solid demo's two (chromatography, crystallization,
-// distillation across the two), with crossovers found by bisection, without
-// the Monte Carlo draws.
+// BenchmarkSweep200: a 200-mass sweep of each demo, the solid one's two
+// methods (chromatography, crystallization) and the liquid one's two
+// (chromatography, distillation), with crossovers found by bisection,
+// without the Monte Carlo draws.
 func BenchmarkSweep200(b *testing.B) {
 	for _, c := range []struct {
 		name string
@@ -103,5 +109,60 @@ func BenchmarkValueOfInformation(b *testing.B) {
 func reportCPU(b *testing.B, start time.Duration) {
 	if b.N > 0 && start > 0 {
 		b.ReportMetric((cpuTime()-start).Seconds()/float64(b.N), "cpu-s/op")
+	}
+}
+
+// BenchmarkSweep200ThreeMethods: a 200-mass sweep of the solid demo with a
+// distillation section, the three methods with crossovers found by
+// bisection, no draws.
+func BenchmarkSweep200ThreeMethods(b *testing.B) {
+	yaml, err := os.ReadFile("testdata/solid-with-distillation.yaml")
+	if err != nil {
+		b.Fatal(err)
+	}
+	p, pt := plan(b, yaml)
+	masses, _ := LogSpace(1e-4, 10, 200)
+	b.ReportAllocs()
+	defer reportCPU(b, cpuTime())
+	for b.Loop() {
+		if _, err := SweepWith(p, pt, masses, Options{}); err != nil {
+			b.Fatal(err)
+		}
+	}
+}
+
+// BenchmarkPortfolio1000: a plan of 1,000 rows over the two demo
+// scenarios at ten masses, each scenario file read and prepared by the
+// loader as the portfolio command does.
+func BenchmarkPortfolio1000(b *testing.B) {
+	var sb strings.Builder
+	sb.WriteString("scenario,mass,runs\n")
+	masses := []string{"100 mg", "500 mg", "1 g", "5 g", "20 g", "100 g", "250 g", "1 kg", "2 kg", "5 kg"}
+	for i := range 1000 {
+		f := "solid.yaml"
+		if i%2 == 1 {
+			f = "liquid.yaml"
+		}
+		fmt.Fprintf(&sb, "%s,%s,%d\n", f, masses[i/2%len(masses)], 1+i%4)
+	}
+	rows, err := ReadPlan(strings.NewReader(sb.String()), "plan.csv")
+	if err != nil {
+		b.Fatal(err)
+	}
+	files := map[string][]byte{"solid.yaml": templates.Scenario, "liquid.yaml": templates.Liquid}
+	_, pt := plan(b, templates.Scenario)
+	load := func(path string) (*costing.Plan, error) {
+		sc, err := scenario.Load(bytes.NewReader(files[path]), path)
+		if err != nil {
+			return nil, err
+		}
+		return costing.Prepare(sc)
+	}
+	b.ReportAllocs()
+	defer reportCPU(b, cpuTime())
+	for b.Loop() {
+		if _, err := BuildPortfolio("plan.csv", rows, load, pt); err != nil {
+			b.Fatal(err)
+		}
 	}
 }

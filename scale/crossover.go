@@ -101,6 +101,23 @@ func (s *decisionSearch) at(lnm float64) ([]point, error) {
 	return ps, nil
 }
 
+// atWith is at with method j's point already known.
+func (s *decisionSearch) atWith(lnm float64, j int, pj point) ([]point, error) {
+	ps := make([]point, len(s.names))
+	for k := range s.names {
+		if k == j {
+			ps[k] = pj
+			continue
+		}
+		p, err := s.eval(k, math.Exp(lnm))
+		if err != nil {
+			return nil, err
+		}
+		ps[k] = p
+	}
+	return ps, nil
+}
+
 // findDecisionCrossovers scans the grid (grid[k][j]: method j at masses[k])
 // for neighbouring masses whose cheapest feasible method differs, and
 // bisects each interval on the model in ln m to CrossoverPrecision. Where
@@ -163,23 +180,36 @@ func (s *decisionSearch) steps(lo, hi float64, plo, phi []point) error {
 		if plo[j].equipment == phi[j].equipment {
 			continue
 		}
-		a, b, pa, pb := lo, hi, plo, phi
+		// The bisection follows method j alone; the other methods are run
+		// only at the two masses it ends on (the models are pure functions
+		// of the mass, so the points are those a full run would give).
+		a, b := lo, hi
+		eqA := plo[j].equipment
+		pa, pb := plo, phi
+		var ja, jb point // method j where a or b was last moved to
 		for b-a > CrossoverPrecision {
 			mid := (a + b) / 2
-			pm, err := s.at(mid)
+			pj, err := s.eval(j, math.Exp(mid))
 			if err != nil {
 				return err
 			}
-			if pm[j].equipment == pa[j].equipment {
-				a, pa = mid, pm
+			if pj.equipment == eqA {
+				a, pa, ja = mid, nil, pj
 			} else {
-				b, pb = mid, pm
+				b, pb, jb = mid, nil, pj
 			}
 		}
 		for _, side := range []struct {
-			m float64
-			p []point
-		}{{a, pa}, {b, pb}} {
+			m  float64
+			p  []point
+			pj point
+		}{{a, pa, ja}, {b, pb, jb}} {
+			if side.p == nil {
+				var err error
+				if side.p, err = s.atWith(side.m, j, side.pj); err != nil {
+					return err
+				}
+			}
 			if cheapest(perGrams(side.p)) == w {
 				continue
 			}

@@ -161,7 +161,7 @@ func TestOneCheapest(t *testing.T) {
 		if d.Winner != best {
 			t.Errorf("%g kg: the decision picks %s, lowest cost per gram is %s", m, d.Winner, best)
 		}
-		line, err := costRow(p, PlanRow{Line: 2, Scenario: "s.yaml", MassKg: m, Runs: 1}, pt, map[string]bool{})
+		line, err := costRow(p, PlanRow{Line: 2, Scenario: "s.yaml", MassKg: m, Runs: 1}, pt, map[string]bool{}, newRunMemo())
 		if err != nil {
 			t.Fatal(err)
 		}

@@ -22,6 +22,7 @@ import (
 	"sepcost/costing/scenario"
 	"sepcost/costing/units"
 	"sepcost/costing/usage"
+	"sepcost/costing/waste"
 	"sepcost/scale/campaign"
 )
 
@@ -293,6 +294,7 @@ type Portfolio struct {
 }
 
 // Loader turns a plan row's scenario path into a prepared plan.
+// BuildPortfolio calls it once per distinct path.
 type Loader func(path string) (*costing.Plan, error)
 
 // BuildPortfolio costs every plan row as a campaign of its runs: the
@@ -308,13 +310,26 @@ func BuildPortfolio(file string, rows []PlanRow, load Loader, t *prices.Table) (
 		cautions: map[string]bool{}, quarters: map[string]decimal.Decimal{}}
 	charged := map[string]bool{}
 	var errs []error
+	// Each scenario file is read and prepared once per run, however many
+	// rows name it; a file that fails fails on every row that names it.
+	type loaded struct {
+		p   *costing.Plan
+		err error
+	}
+	plans := map[string]loaded{}
+	runs := newRunMemo()
 	for _, row := range rows {
-		p, err := load(row.Scenario)
+		l, ok := plans[row.Scenario]
+		if !ok {
+			l.p, l.err = load(row.Scenario)
+			plans[row.Scenario] = l
+		}
+		p, err := l.p, l.err
 		if err != nil {
 			errs = append(errs, &PlanError{Of: ErrPlan, File: file, Line: row.Line, Field: "scenario", Msg: err.Error()})
 			continue
 		}
-		line, err := costRow(p, row, t, charged)
+		line, err := costRow(p, row, t, charged, runs)
 		if err != nil {
 			errs = append(errs, &PlanError{Of: ErrPlan, File: file, Line: row.Line, Msg: err.Error()})
 			continue
@@ -445,7 +460,7 @@ type rowCost struct {
 
 // costRow runs one plan row as a campaign of its runs. charged records the
 // scenario and method pairs whose one-time costs an earlier row bore.
-func costRow(p *costing.Plan, row PlanRow, t *prices.Table, charged map[string]bool) (PortfolioLine, error) {
+func costRow(p *costing.Plan, row PlanRow, t *prices.Table, charged map[string]bool, runs runMemo) (PortfolioLine, error) {
 	line := PortfolioLine{PlanRow: row, Title: p.Scenario.Name, Cautions: p.Cautions(), Quarter: Quarter(row.Date)}
 	names := p.MethodNames()
 	cands := make([]int, 0, len(names))
@@ -468,7 +483,7 @@ func costRow(p *costing.Plan, row PlanRow, t *prices.Table, charged map[string]b
 	var best *rowCost
 	var reasons []string
 	for _, j := range cands {
-		rc, reason, err := costMethod(p, j, row, t, row.Development == PerRow || (row.Development != Developed && !charged[key(j)]))
+		rc, reason, err := costMethod(p, j, row, t, row.Development == PerRow || (row.Development != Developed && !charged[key(j)]), runs)
 		if err != nil {
 			return line, err
 		}
@@ -486,7 +501,7 @@ func costRow(p *costing.Plan, row PlanRow, t *prices.Table, charged map[string]b
 		}
 		return line, fmt.Errorf("no method is feasible for %s at %s", p.Scenario.Name, units.FormatMass(row.MassKg))
 	}
-	res, err := p.RunOne(best.j, row.MassKg, t)
+	res, err := runs.one(p, best.j, row.MassKg, t)
 	if err != nil {
 		return line, err
 	}
@@ -497,22 +512,23 @@ func costRow(p *costing.Plan, row PlanRow, t *prices.Table, charged map[string]b
 	line.Method = names[best.j]
 	line.Result = res
 	line.PerBatch, line.OneTime, line.Total = best.c.PerBatch, best.oneTime, best.total
-	line.Waste = wasteRows(p, []float64{row.MassKg}, []string{line.Method}, [][]Result{{res}})
+	line.Waste = wasteRowsMemo(p, []float64{row.MassKg}, []string{line.Method}, [][]Result{{res}}, runs.classes(p))
 	return line, nil
 }
 
 // costMethod costs method j as the row's campaign; bears says whether the
 // row pays the method's one-time costs. A method that is not feasible
 // gives its reason instead.
-func costMethod(p *costing.Plan, j int, row PlanRow, t *prices.Table, bears bool) (*rowCost, string, error) {
+func costMethod(p *costing.Plan, j int, row PlanRow, t *prices.Table, bears bool, runs runMemo) (*rowCost, string, error) {
 	t, err := p.SitePrices(t)
 	if err != nil {
 		return nil, "", err
 	}
-	u, err := chosen(p, j, row.MassKg, t)
+	r, err := runs.one(p, j, row.MassKg, t)
 	if err != nil {
 		return nil, "", err
 	}
+	u := r.Usage
 	if !u.Feasible || u.ProductOutKg <= 0 {
 		return nil, u.Reason, nil
 	}
@@ -532,4 +548,48 @@ func costMethod(p *costing.Plan, j int, row PlanRow, t *prices.Table, bears bool
 		rc.perGram = c.PerBatch.Add(c.OneTime).InexactFloat64() / (u.ProductOutKg * 1000)
 	}
 	return rc, "", nil
+}
+
+// runMemo holds the methods already run in one portfolio, by plan, method
+// and batch mass: rows that repeat a scenario and mass (the same batch in
+// several quarters, or with another number of runs) reuse the run. The
+// models and the ledger are pure functions of those three and the price
+// table, which is one per portfolio. Results are shared between rows and
+// only read.
+type runMemo struct {
+	results map[runKey]costing.Result
+	waste   map[*costing.Plan]map[string]waste.Classification // by classKey
+}
+
+func newRunMemo() runMemo {
+	return runMemo{results: map[runKey]costing.Result{}, waste: map[*costing.Plan]map[string]waste.Classification{}}
+}
+
+// classes is the plan's waste classifications made so far.
+func (m runMemo) classes(p *costing.Plan) map[string]waste.Classification {
+	c, ok := m.waste[p]
+	if !ok {
+		c = map[string]waste.Classification{}
+		m.waste[p] = c
+	}
+	return c
+}
+
+type runKey struct {
+	p  *costing.Plan
+	j  int
+	kg float64
+}
+
+// one is p.RunOne(j, kg, t), run once per key.
+func (m runMemo) one(p *costing.Plan, j int, kg float64, t *prices.Table) (costing.Result, error) {
+	k := runKey{p, j, kg}
+	if r, ok := m.results[k]; ok {
+		return r, nil
+	}
+	r, err := p.RunOne(j, kg, t)
+	if err == nil {
+		m.results[k] = r
+	}
+	return r, err
 }

@@ -229,3 +229,30 @@ func TestPlanErrors(t *testing.T) {
 		t.Errorf("missing file error: %v", err)
 	}
 }
+
+// Each scenario file is loaded once per portfolio, however many rows name
+// it (a prepared plan is a pure function of the file).
+func TestPortfolioLoadsEachScenarioOnce(t *testing.T) {
+	plan := "scenario,mass,runs\nsolid.yaml,20 g,3\nsolid.yaml,2 kg,2\nliquid.yaml,2 kg,4\nsolid.yaml,1 g,5\nliquid.yaml,20 g,1\n"
+	rows, err := ReadPlan(strings.NewReader(plan), "plan.csv")
+	if err != nil {
+		t.Fatal(err)
+	}
+	base := loaderFor(t, map[string][]byte{"solid.yaml": templates.Scenario, "liquid.yaml": templates.Liquid})
+	calls := map[string]int{}
+	load := func(path string) (*costing.Plan, error) {
+		calls[path]++
+		return base(path)
+	}
+	_, pt := plan2(t)
+	pf, err := BuildPortfolio("plan.csv", rows, load, pt)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if len(pf.Lines) != 5 {
+		t.Fatalf("%d lines, want 5", len(pf.Lines))
+	}
+	if calls["solid.yaml"] != 1 || calls["liquid.yaml"] != 1 {
+		t.Errorf("loads per file %v, want one each", calls)
+	}
+}

@@ -38,11 +38,16 @@ type SolventGreenness struct {
 // chromatography the eluents as made up before use (gradient steps and the
 // TLC eluent) are the blends the mixture rules judge.
 func wasteRows(p *costing.Plan, masses []float64, methods []string, results [][]Result) []WasteRow {
+	return wasteRowsMemo(p, masses, methods, results, map[string]waste.Classification{})
+}
+
+// wasteRowsMemo is wasteRows with the classifications of the plan's
+// streams already made (by classKey), added to as it goes. The codes
+// depend on the stream's class and solvent make-up, which barely move
+// with mass; each distinct make-up is classified once.
+func wasteRowsMemo(p *costing.Plan, masses []float64, methods []string, results [][]Result, memo map[string]waste.Classification) []WasteRow {
 	sc := p.Scenario
 	var out []WasteRow
-	// The codes depend on the stream's class and solvent make-up, which
-	// barely move with mass; classify each distinct make-up once.
-	memo := map[string]waste.Classification{}
 	for i, m := range masses {
 		for j, name := range methods {
 			res := results[i][j]

@@ -2,9 +2,17 @@ package main
 
 import (
 	"context"
+	"fmt"
 	"io"
+	"os"
 	"path/filepath"
+	"runtime"
+	"runtime/metrics"
+	"strconv"
 	"testing"
+	"time"
+
+	"sepcost/templates"
 )
 
 // BenchmarkDemoWorkbook: the whole `sepcost demo` run, from the embedded
@@ -17,5 +25,65 @@ func BenchmarkDemoWorkbook(b *testing.B) {
 		if err := run(context.Background(), []string{"demo", "-o", out, "--force"}, io.Discard, io.Discard); err != nil {
 			b.Fatal(err)
 		}
+	}
+}
+
+// BenchmarkSweepMemory: `sepcost sweep` of the demo over 1,000 and 10,000
+// masses into a file of each format, reporting the peak of the heap's
+// objects (live and not yet collected, runtime/metrics sampled every
+// millisecond) as peak-heap-MB: the memory the sweep and its writer hold,
+// without the runtime's own overhead. Run with -benchtime 1x.
+func BenchmarkSweepMemory(b *testing.B) {
+	dir := b.TempDir()
+	sc, pr := filepath.Join(dir, "scenario.yaml"), filepath.Join(dir, "prices.csv")
+	if err := os.WriteFile(sc, templates.Scenario, 0o644); err != nil {
+		b.Fatal(err)
+	}
+	if err := os.WriteFile(pr, templates.Prices, 0o644); err != nil {
+		b.Fatal(err)
+	}
+	for _, n := range []int{1000, 10000} {
+		for _, format := range []string{"xlsx", "json", "csv"} {
+			b.Run(fmt.Sprintf("%s/masses=%d", format, n), func(b *testing.B) {
+				out := filepath.Join(dir, "sweep."+format)
+				args := []string{"sweep", sc, "--prices", pr, "--points", strconv.Itoa(n), "-o", out, "--force"}
+				peak := 0.0
+				for b.Loop() {
+					runtime.GC()
+					stop := samplePeakHeap()
+					if err := run(context.Background(), args, io.Discard, io.Discard); err != nil {
+						b.Fatal(err)
+					}
+					peak = max(peak, stop())
+				}
+				b.ReportMetric(peak/1e6, "peak-heap-MB")
+			})
+		}
+	}
+}
+
+// samplePeakHeap samples the bytes in heap objects every millisecond until
+// the returned function is called, which gives the largest seen.
+func samplePeakHeap() func() float64 {
+	s := []metrics.Sample{{Name: "/memory/classes/heap/objects:bytes"}}
+	done, result := make(chan struct{}), make(chan float64)
+	go func() {
+		peak := 0.0
+		t := time.NewTicker(time.Millisecond)
+		defer t.Stop()
+		for {
+			metrics.Read(s)
+			peak = max(peak, float64(s[0].Value.Uint64()))
+			select {
+			case <-done:
+				result <- peak
+				return
+			case <-t.C:
+			}
+		}
+	}()
+	return func() float64 {
+		close(done)
+		return <-result
 	}
 }

@@ -58,17 +58,33 @@ func loadPrices(path, sheet, scenarioPath string) (*prices.Table, error) {
 
 // render lays a report out in the chosen format.
 func render(r *scale.Report, f format) (*bytes.Buffer, error) {
-	return reportRenderers.render(f, r)
+	var buf bytes.Buffer
+	err := renderTo(&buf, r, f)
+	return &buf, err
+}
+
+// renderTo writes the report in a format to w.
+func renderTo(w io.Writer, r *scale.Report, f format) error {
+	return reportRenderers[f](w, r)
 }
 
 // deliver renders a report and writes it to the -o file (saying so on
 // stderr) or to stdout.
 func deliver(r *scale.Report, format format, out string, force bool, stdout, stderr io.Writer) error {
-	buf, err := render(r, format)
-	if err != nil {
+	if out == "" || out == "-" {
+		buf, err := render(r, format)
+		if err != nil {
+			return err
+		}
+		return writeOut(buf, out, force, stdout, stderr)
+	}
+	// To a file: rendered straight into it (a sweep of thousands of masses
+	// is never held whole in memory), placed only when rendering succeeds.
+	if err := writeFileFrom(out, force, func(w io.Writer) error { return renderTo(w, r, format) }); err != nil {
 		return err
 	}
-	return writeOut(buf, out, force, stdout, stderr)
+	fmt.Fprintf(stderr, "wrote %s\n", out)
+	return nil
 }
 
 // loadEquipment reads --equipment, or else equipment.csv beside the

@@ -1,6 +1,7 @@
 package main
 
 import (
+	"bufio"
 	"bytes"
 	"errors"
 	"fmt"
@@ -21,6 +22,16 @@ var ErrExists = errors.New("output file exists")
 // flags. A new file's mode follows the umask; a replaced file keeps its
 // mode.
 func writeFile(path string, data []byte, force bool) error {
+	return writeFileFrom(path, force, func(w io.Writer) error {
+		_, err := w.Write(data)
+		return err
+	})
+}
+
+// writeFileFrom is writeFile with the content written by write straight
+// into the temporary file, so that a large report is never held whole in
+// memory. The file is placed only when write succeeds.
+func writeFileFrom(path string, force bool, write func(io.Writer) error) error {
 	keep, err := checkTarget(path, force)
 	if err != nil {
 		return err
@@ -34,7 +45,11 @@ func writeFile(path string, data []byte, force bool) error {
 	if keep != nil {
 		cerr = tmp.Chmod(*keep)
 	}
-	_, werr := tmp.Write(data)
+	bw := bufio.NewWriterSize(tmp, 256<<10)
+	werr := write(bw)
+	if werr == nil {
+		werr = bw.Flush()
+	}
 	if werr == nil {
 		werr = tmp.Sync()
 	}

@@ -102,12 +102,13 @@ func CutFor(p, imp Band, first bool, target float64) Cut {
 		p, imp = p.mirror(), imp.mirror()
 	}
 	purity := func(x float64) (float64, float64) {
-		pr := p.Kg * p.share(x)
+		ps := p.share(x)
+		pr := p.Kg * ps
 		im := imp.Kg * imp.share(x)
 		if pr+im <= 0 {
 			return 1, 0
 		}
-		return pr / (pr + im), p.share(x)
+		return pr / (pr + im), ps
 	}
 	lo, hi := p.Front-6*p.Kinetic, p.End+6*p.Kinetic
 	const n = 48

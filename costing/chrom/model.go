@@ -38,11 +38,29 @@ type Model struct {
 	coef source.Set
 	site Site
 	a    analysis
+	// head is the header every candidate starts from (the separation's
+	// figures, notes and trade-off table, which do not depend on the
+	// mass), built once; start copies it for each candidate.
+	head usage.Usage
 }
 
 // NewModel analyses the separation once; coef must hold the calibration.
 func NewModel(sc *scenario.Scenario, coef source.Set, site Site) *Model {
-	return &Model{sc: sc, coef: coef, site: site, a: analyse(sc, coef)}
+	md := &Model{sc: sc, coef: coef, site: site, a: analyse(sc, coef)}
+	if sc.Chromatography != nil {
+		md.head = md.a.header(sc, coef, 0)
+	}
+	return md
+}
+
+// start is a candidate's usage at crudeKg: the header's figures, notes
+// and tables, copied so that the candidate can add to them.
+func (md *Model) start(crudeKg float64) usage.Usage {
+	u := usage.New(Method, crudeKg, crudeKg*md.sc.Purity)
+	u.Figures = append(u.Figures, md.head.Figures...)
+	u.Notes = append([]usage.Note(nil), md.head.Notes...)
+	u.Tables = append([]usage.Table(nil), md.head.Tables...)
+	return u
 }
 
 // Run is the package-level Run on a prepared model.
@@ -95,13 +113,13 @@ func (md *Model) Candidates(crudeKg float64) []usage.Usage {
 				continue
 			}
 			seen[key] = true
-			u := a.header(sc, coef, crudeKg)
+			u := md.start(crudeKg)
 			build(&u, a, sc, coef, site, e, row.ratio)
 			out = append(out, u)
 		}
 	}
 	if len(out) == 0 {
-		u := a.header(sc, coef, crudeKg)
+		u := md.start(crudeKg)
 		u.Feasible = false
 		u.Reason = a.infeasible(coef)
 		return []usage.Usage{u}

@@ -57,7 +57,7 @@ func (p *runPlan) wasteAndDemands(u *usage.Usage, sc *scenario.Scenario, coef so
 	lostMixed := (u.ProductInKg-u.ProductInKg*get(KeyRetainedLoss))*p.cut.Mixed - p.rerunP
 	lostSilica := u.ProductInKg * get(KeyRetainedLoss)
 	u.ImpurityOutKg = impurityInProduct
-	u.AddFigure("impurity_in_product", "nearest impurity in the isolated product", impurityInProduct, "g")
+	u.AddFigure(usage.FigImpurityInProduct, "nearest impurity in the isolated product", impurityInProduct, "g")
 	spent := solventStream("spent eluent and mixed fractions", liquid, book)
 	spent.Components = append(spent.Components,
 		usage.Component{Name: "impurities", Kg: u.CrudeKg - u.ProductInKg - impurityInProduct - p.rerunI},

@@ -75,6 +75,31 @@ func (r *Rates) Total(u usage.Usage) (float64, error) {
 	return total, nil
 }
 
+// TotalBound is Total with a bound on how far it may lie from the
+// decimal ledger's Total (Price) of the same usage: per line, one minor
+// unit (the line's rounding may go the other way), the unit price times
+// one step of QtyPlaces (the quantity's rounding may too), and the float
+// arithmetic's own error, far smaller (10⁻⁹ of the line):
+//
+//	|Total − Price(u).Total| ≤ Σ_lines (10^−m + |p|·10^−QtyPlaces + 10^−9·|amount|)
+func (r *Rates) TotalBound(u usage.Usage) (total, bound float64, err error) {
+	const qScale = 1e6 // 10^QtyPlaces
+	for _, d := range u.Demands {
+		i, ok := r.row(u, d.Item)
+		if !ok {
+			return 0, 0, fmt.Errorf("%w: %q", ErrMissingPrice, d.Item)
+		}
+		if r.table.Items[i].Per.Dim != d.Dim || math.IsNaN(d.Qty) || math.IsInf(d.Qty, 0) {
+			return 0, 0, fmt.Errorf("%w: %q (%s) cannot be priced per %s", ErrQuantity, d.Label, d.Item, r.table.Items[i].Unit)
+		}
+		qty := math.Round(d.Qty/r.factor[i]*qScale) / qScale
+		amount := math.Round(qty*r.price[i]*r.scale) / r.scale
+		total += amount
+		bound += 1/r.scale + math.Abs(r.price[i])/qScale + 1e-9*math.Abs(amount)
+	}
+	return total, bound, nil
+}
+
 // row is the price row of an item for this usage: its one line, or the
 // band its purchase (the usage's positive demands of it) falls in.
 func (r *Rates) row(u usage.Usage, item string) (int, bool) {

@@ -50,7 +50,41 @@ func (t *Table) FindFor(name string, qtySI float64) (int, bool) {
 
 // sameName compares item names as Find does.
 func sameName(a, b string) bool {
+	// Quick rejection on the first character when both are ASCII (after
+	// the ASCII spaces TrimSpace would remove): two ASCII letters fold
+	// together only as upper and lower case of one letter. Everything else
+	// goes the full way.
+	ca, cb := firstASCII(a), firstASCII(b)
+	if ca >= 0 && cb >= 0 && lowerASCII(byte(ca)) != lowerASCII(byte(cb)) {
+		return false
+	}
 	return strings.EqualFold(strings.TrimSpace(a), strings.TrimSpace(b))
+}
+
+// firstASCII is the first byte of s after ASCII white space when it is an
+// ASCII character other than white space, else -1 (empty, or a byte that
+// may start a multi-byte character, which may be Unicode white space).
+func firstASCII(s string) int {
+	for i := 0; i < len(s); i++ {
+		switch c := s[i]; c {
+		case ' ', '\t', '\n', '\v', '\f', '\r':
+			continue
+		default:
+			if c < 0x80 {
+				return int(c)
+			}
+			return -1
+		}
+	}
+	return -1
+}
+
+// lowerASCII is c in lower case when it is an ASCII capital letter.
+func lowerASCII(c byte) byte {
+	if 'A' <= c && c <= 'Z' {
+		return c + 'a' - 'A'
+	}
+	return c
 }
 
 // nameKey is the form in which Read compares item names for duplicates:

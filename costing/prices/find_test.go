@@ -61,3 +61,20 @@ func TestNameKeyAgreesWithEqualFold(t *testing.T) {
 		}
 	}
 }
+
+// sameName's quick rejection agrees with strings.EqualFold on trimmed
+// names, including the letters whose case folding leaves ASCII (the
+// Kelvin sign folds with k, the long s with s: Unicode CaseFolding.txt)
+// and Unicode white space that TrimSpace removes (U+00A0, U+0085).
+func TestSameNameAgreesWithEqualFold(t *testing.T) {
+	names := []string{"", " ", "silica gel", "Silica Gel ", "\tsilica gel", "\u00a0silica gel", "\u0085Silica gel",
+		"kieselguhr", "\u212aieselguhr", "sand", "\u017fand", "Sand", "1 kg", "ethyl acetate", "éthanol", "Éthanol"}
+	for _, a := range names {
+		for _, b := range names {
+			want := strings.EqualFold(strings.TrimSpace(a), strings.TrimSpace(b))
+			if got := sameName(a, b); got != want {
+				t.Errorf("sameName(%q, %q) = %v, strings.EqualFold says %v", a, b, got, want)
+			}
+		}
+	}
+}

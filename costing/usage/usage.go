@@ -207,6 +207,18 @@ func New(method string, crudeKg, productInKg float64) Usage {
 		Figures: make([]Figure, 0, 64), Demands: make([]Demand, 0, 16)}
 }
 
+// Compact gives the usage's figures and demands slices of their own
+// length: New reserves room for a model to add to, which a usage kept in
+// a report (thousands in a sweep) should not hold on to.
+func (u *Usage) Compact() {
+	if cap(u.Figures) > len(u.Figures) {
+		u.Figures = append([]Figure(nil), u.Figures...)
+	}
+	if cap(u.Demands) > len(u.Demands) {
+		u.Demands = append([]Demand(nil), u.Demands...)
+	}
+}
+
 // Notef adds a note.
 func (u *Usage) Notef(l Level, format string, a ...any) {
 	u.Notes = append(u.Notes, Note{Level: l, Text: fmt.Sprintf(format, a...)})

@@ -47,3 +47,22 @@ func TestRepeatLevel(t *testing.T) {
 		}
 	}
 }
+
+// Compact keeps every figure and demand, in order, in slices of their own
+// length, so that appending to the compacted usage cannot write into
+// memory another copy shares.
+func TestCompact(t *testing.T) {
+	u := New("m", 1, 0.8)
+	u.AddFigure("a", "first", 1, "")
+	u.AddFigure("b", "second", 2, "")
+	u.Demands = append(u.Demands, Demand{Item: "silica gel", Qty: 0.1})
+	before := u
+	u.Compact()
+	if len(u.Figures) != 2 || cap(u.Figures) != 2 || u.Figures[1].Key != "b" || len(u.Demands) != 1 || cap(u.Demands) != 1 || u.Demands[0].Item != "silica gel" {
+		t.Fatalf("compacted usage %+v", u)
+	}
+	u.AddFigure("c", "third", 3, "")
+	if len(before.Figures) != 2 || before.Figures[:3][2].Key == "c" {
+		t.Errorf("appending after Compact wrote into the uncompacted slice")
+	}
+}

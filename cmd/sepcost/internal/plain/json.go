@@ -1,7 +1,10 @@
 package plain
 
 import (
+	"bufio"
+	"bytes"
 	"encoding/json"
+	"errors"
 	"io"
 	"math"
 	"sort"
@@ -231,16 +234,6 @@ func JSON(w io.Writer, r *scale.Report) error {
 	if out.Cautions == nil {
 		out.Cautions = []string{}
 	}
-	for i, m := range r.MassesKg {
-		b := jsonBatch{CrudeKg: m}
-		if k := r.CheapestAt(i); k >= 0 {
-			b.Cheapest = r.Methods[k]
-		}
-		for j, name := range r.Methods {
-			b.Methods = append(b.Methods, jsonResult(name, r.Results[i][j]))
-		}
-		out.Batches = append(out.Batches, b)
-	}
 	out.Decision = decisionJSON(r.Decision)
 	if out.Decision != nil {
 		out.Decision.TargetFrom = r.TargetWhy
@@ -260,9 +253,62 @@ func JSON(w io.Writer, r *scale.Report) error {
 		out.Warnings = append(out.Warnings, jsonWarning{w.Method, string(w.Level), w.Text, w.MassesKg})
 	}
 	out.Campaign, out.Budget = campaignJSON(r)
-	enc := json.NewEncoder(w)
-	enc.SetIndent("", "  ")
-	return enc.Encode(out)
+	return streamJSON(w, out, len(r.MassesKg), func(i int) jsonBatch { return batchJSON(r, i) })
+}
+
+// batchJSON is the report's batch i.
+func batchJSON(r *scale.Report, i int) jsonBatch {
+	b := jsonBatch{CrudeKg: r.MassesKg[i]}
+	if k := r.CheapestAt(i); k >= 0 {
+		b.Cheapest = r.Methods[k]
+	}
+	for j, name := range r.Methods {
+		b.Methods = append(b.Methods, jsonResult(name, r.Results[i][j]))
+	}
+	return b
+}
+
+// batchesKey is where the batches go in the indented report: a line of
+// its own at the top level (a newline inside a JSON string is escaped, so
+// this text can only be the top-level key).
+const batchesKey = "\n  \"batches\": [],\n"
+
+// streamJSON writes out as json.Encoder with a two-space indent would,
+// byte for byte, with its n batches made one at a time by batch and
+// written as they are made, so that a sweep of thousands of masses is never
+// held whole as JSON.
+func streamJSON(w io.Writer, out jsonReport, n int, batch func(int) jsonBatch) error {
+	out.Batches = []jsonBatch{}
+	frame, err := json.MarshalIndent(out, "", "  ")
+	if err != nil {
+		return err
+	}
+	at := bytes.Index(frame, []byte(batchesKey))
+	if at < 0 {
+		return errors.New("json: the report has no batches key")
+	}
+	bw := bufio.NewWriterSize(w, 64<<10)
+	bw.Write(frame[:at])
+	if n == 0 {
+		bw.WriteString("\n  \"batches\": null,\n") // a nil slice, as the report without masses encodes
+	} else {
+		bw.WriteString("\n  \"batches\": [")
+		for i := range n {
+			data, err := json.MarshalIndent(batch(i), "    ", "  ")
+			if err != nil {
+				return err
+			}
+			if i > 0 {
+				bw.WriteByte(',')
+			}
+			bw.WriteString("\n    ")
+			bw.Write(data)
+		}
+		bw.WriteString("\n  ],\n")
+	}
+	bw.Write(frame[at+len(batchesKey):])
+	bw.WriteByte('\n')
+	return bw.Flush()
 }
 
 // jsonResult is one method at one mass.

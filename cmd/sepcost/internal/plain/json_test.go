@@ -15,6 +15,7 @@ import (
 	"sepcost/costing/units"
 	"sepcost/costing/usage"
 	"sepcost/scale"
+	"sepcost/templates"
 )
 
 var update = flag.Bool("update", false, "rewrite the golden files in testdata/golden")
@@ -150,4 +151,57 @@ func TestJSONContract(t *testing.T) {
 		}
 	}
 	walk(tree)
+}
+
+// The streamed JSON is byte for byte what encoding/json's Encoder with a
+// two-space indent writes for the whole report at once, for a sweep of
+// many masses with crossovers and for a report of no batches.
+func TestJSONStreamsAsEncoderWrites(t *testing.T) {
+	r := sweepReportOf(t, 40)
+	var got bytes.Buffer
+	if err := JSON(&got, r); err != nil {
+		t.Fatal(err)
+	}
+	whole := func(out jsonReport) []byte {
+		var want bytes.Buffer
+		enc := json.NewEncoder(&want)
+		enc.SetIndent("", "  ")
+		if err := enc.Encode(out); err != nil {
+			t.Fatal(err)
+		}
+		return want.Bytes()
+	}
+	var out jsonReport
+	if err := json.Unmarshal(got.Bytes(), &out); err != nil {
+		t.Fatal(err)
+	}
+	if len(out.Batches) != 40 {
+		t.Fatalf("%d batches, want 40", len(out.Batches))
+	}
+	if want := whole(out); !bytes.Equal(got.Bytes(), want) {
+		t.Errorf("streamed JSON differs from the whole encoding (%d bytes against %d)", got.Len(), len(want))
+	}
+	out.Batches = nil
+	var none bytes.Buffer
+	if err := streamJSON(&none, out, 0, nil); err != nil {
+		t.Fatal(err)
+	}
+	if want := whole(out); !bytes.Equal(none.Bytes(), want) {
+		t.Errorf("no batches: streamed\n%s\nwant\n%s", none.Bytes(), want)
+	}
+}
+
+// sweepReportOf is the solid demo swept over n masses from 100 mg to 10 kg.
+func sweepReportOf(t *testing.T, n int) *scale.Report {
+	t.Helper()
+	p, pt := demoPlan(t, templates.Scenario)
+	masses, err := scale.LogSpace(1e-4, 10, n)
+	if err != nil {
+		t.Fatal(err)
+	}
+	r, err := scale.SweepWith(p, pt, masses, scale.Options{})
+	if err != nil {
+		t.Fatal(err)
+	}
+	return r
 }

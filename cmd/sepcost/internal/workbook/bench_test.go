@@ -8,6 +8,12 @@ import (
 	"time"
 
 	"github.com/xuri/excelize/v2"
+
+	"sepcost/costing"
+	"sepcost/costing/prices"
+	"sepcost/costing/scenario"
+	"sepcost/scale"
+	"sepcost/templates"
 )
 
 // benchMasses are the sweep sizes of the benchmarks.
@@ -134,45 +140,121 @@ func BenchmarkStreamBaseline(b *testing.B) {
 			b.ReportAllocs()
 			cpu := cpuTime()
 			for b.Loop() {
-				f := excelize.NewFile()
-				for k := 0; k < maxStyle; k++ {
-					fmtCode := fmt.Sprintf("0.%0*d", k%6+1, 0)
-					if _, err := f.NewStyle(&excelize.Style{CustomNumFmt: &fmtCode}); err != nil {
-						b.Fatal(err)
-					}
-				}
-				for k, s := range sheets {
-					if k == 0 {
-						if err := f.SetSheetName("Sheet1", s.name); err != nil {
-							b.Fatal(err)
-						}
-					} else if _, err := f.NewSheet(s.name); err != nil {
-						b.Fatal(err)
-					}
-				}
-				for _, s := range sheets {
-					sw, err := f.NewStreamWriter(s.name)
-					if err != nil {
-						b.Fatal(err)
-					}
-					for row := 1; row <= s.last; row++ {
-						if vals, ok := s.rows[row]; ok {
-							if err := sw.SetRow(cellName(1, row), vals); err != nil {
-								b.Fatal(err)
-							}
-						}
-					}
-					if err := sw.Flush(); err != nil {
-						b.Fatal(err)
-					}
-				}
-				if err := f.Write(io.Discard); err != nil {
-					b.Fatal(err)
-				}
-				f.Close()
+				rawWrite(b, sheets, maxStyle)
 			}
 			reportCPU(b, cpu)
 			b.ReportMetric(float64(cells), "cells") // after the loop: b.Loop's timer reset drops metrics reported before it
 		})
 	}
+}
+
+// rawWrite is excelize alone writing the cells readCells read back: as
+// many number styles as the workbook has style ids, the sheets, each row
+// through the StreamWriter, and the file to io.Discard.
+func rawWrite(b testing.TB, sheets []baselineSheet, maxStyle int) {
+	f := excelize.NewFile()
+	defer f.Close()
+	for k := 0; k < maxStyle; k++ {
+		fmtCode := fmt.Sprintf("0.%0*d", k%6+1, 0)
+		if _, err := f.NewStyle(&excelize.Style{CustomNumFmt: &fmtCode}); err != nil {
+			b.Fatal(err)
+		}
+	}
+	for k, s := range sheets {
+		if k == 0 {
+			if err := f.SetSheetName("Sheet1", s.name); err != nil {
+				b.Fatal(err)
+			}
+		} else if _, err := f.NewSheet(s.name); err != nil {
+			b.Fatal(err)
+		}
+	}
+	for _, s := range sheets {
+		sw, err := f.NewStreamWriter(s.name)
+		if err != nil {
+			b.Fatal(err)
+		}
+		for row := 1; row <= s.last; row++ {
+			if vals, ok := s.rows[row]; ok {
+				if err := sw.SetRow(cellName(1, row), vals); err != nil {
+					b.Fatal(err)
+				}
+			}
+		}
+		if err := sw.Flush(); err != nil {
+			b.Fatal(err)
+		}
+	}
+	if err := f.Write(io.Discard); err != nil {
+		b.Fatal(err)
+	}
+}
+
+// BenchmarkWorkbookOverRaw pairs, in each iteration, the workbook of a
+// real report (the demo; the solid demo swept over 200 and 1,000 masses)
+// with excelize alone writing the same cells (rawWrite), and reports the
+// ratio of their clock times summed over the iterations as "ratio": the
+// machine's load falls on both alike. The target is at most 1.2.
+func BenchmarkWorkbookOverRaw(b *testing.B) {
+	cases := []struct {
+		name   string
+		report func(testing.TB) *scale.Report
+	}{
+		{"demo", func(t testing.TB) *scale.Report {
+			return demoReportOf(t, templates.Scenario, "built-in demo scenario")
+		}},
+		{"sweep200", func(t testing.TB) *scale.Report { return demoSweep(t, 200) }},
+		{"sweep1000", func(t testing.TB) *scale.Report { return demoSweep(t, 1000) }},
+	}
+	for _, c := range cases {
+		b.Run(c.name, func(b *testing.B) {
+			r := c.report(b)
+			var buf bytes.Buffer
+			if err := Write(&buf, r, Options{}); err != nil {
+				b.Fatal(err)
+			}
+			sheets, cells, maxStyle := readCells(b, buf.Bytes())
+			var ours, raw time.Duration
+			b.ReportAllocs()
+			for b.Loop() {
+				t0 := time.Now()
+				if err := Write(io.Discard, r, Options{}); err != nil {
+					b.Fatal(err)
+				}
+				t1 := time.Now()
+				rawWrite(b, sheets, maxStyle)
+				ours, raw = ours+t1.Sub(t0), raw+time.Since(t1)
+			}
+			b.ReportMetric(float64(ours)/float64(raw), "ratio")
+			b.ReportMetric(float64(ours.Microseconds())/float64(b.N)/1000, "workbook-ms/op")
+			b.ReportMetric(float64(raw.Microseconds())/float64(b.N)/1000, "raw-ms/op")
+			b.ReportMetric(float64(cells), "cells")
+		})
+	}
+}
+
+// demoSweep is the solid demo swept over n log-spaced masses from 100 mg
+// to 10 kg, as `sepcost sweep --points n` runs it.
+func demoSweep(t testing.TB, n int) *scale.Report {
+	sc, err := scenario.Load(bytes.NewReader(templates.Scenario), "demo")
+	if err != nil {
+		t.Fatal(err)
+	}
+	pt, err := prices.Read(bytes.NewReader(templates.Prices), "prices")
+	if err != nil {
+		t.Fatal(err)
+	}
+	p, err := costing.Prepare(sc)
+	if err != nil {
+		t.Fatal(err)
+	}
+	masses, err := scale.LogSpace(1e-4, 10, n)
+	if err != nil {
+		t.Fatal(err)
+	}
+	r, err := scale.SweepWith(p, pt, masses, scale.Options{})
+	if err != nil {
+		t.Fatal(err)
+	}
+	return r
 }

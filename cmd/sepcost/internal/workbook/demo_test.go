@@ -24,7 +24,7 @@ func liquidDemoReport(t *testing.T) *scale.Report {
 	return demoReportOf(t, templates.Liquid, "built-in liquid demo scenario")
 }
 
-func demoReportOf(t *testing.T, yaml []byte, name string) *scale.Report {
+func demoReportOf(t testing.TB, yaml []byte, name string) *scale.Report {
 	t.Helper()
 	return demoReportEdited(t, yaml, name, func(*scenario.Scenario) {})
 }
@@ -37,7 +37,7 @@ func batchDemoReport(t *testing.T) *scale.Report {
 }
 
 // demoReportEdited runs a demo scenario after edit has changed it.
-func demoReportEdited(t *testing.T, yaml []byte, name string, edit func(*scenario.Scenario)) *scale.Report {
+func demoReportEdited(t testing.TB, yaml []byte, name string, edit func(*scenario.Scenario)) *scale.Report {
 	t.Helper()
 	sc, err := scenario.Load(bytes.NewReader(yaml), name)
 	if err != nil {

@@ -26,6 +26,7 @@ type cell struct {
 	wrap    bool // wrapped text: sets the row height, counts at most maxWidth for the column
 	spill   bool // text that may run over empty neighbours: not used to fit widths
 	small   bool // wrapped text in the 9 pt font (wrapSmall): more characters to a line
+	used    bool // set by grid.set: the cell is written
 }
 
 type merge struct{ row, first, last int }
@@ -34,7 +35,7 @@ type merge struct{ row, first, last int }
 // can be fitted to the content before the StreamWriter writes it.
 type grid struct {
 	name       string
-	cells      map[int]map[int]cell // row → column → cell
+	cells      [][]cell // [row−1][column−1]; a row as long as its last cell set
 	maxRow     int
 	merges     []merge
 	freezeRows int
@@ -52,14 +53,20 @@ type grid struct {
 }
 
 func newGrid(name string) *grid {
-	return &grid{name: name, cells: map[int]map[int]cell{}, widths: map[int]float64{}, minWidths: map[int]float64{}, maxWidths: map[int]float64{}}
+	return &grid{name: name, widths: map[int]float64{}, minWidths: map[int]float64{}, maxWidths: map[int]float64{}}
 }
 
 func (g *grid) set(row, col int, c cell) {
-	if g.cells[row] == nil {
-		g.cells[row] = map[int]cell{}
+	for len(g.cells) < row {
+		g.cells = append(g.cells, nil)
 	}
-	g.cells[row][col] = c
+	r := g.cells[row-1]
+	if len(r) < col {
+		r = append(r, make([]cell, col-len(r))...)
+		g.cells[row-1] = r
+	}
+	c.used = true
+	r[col-1] = c
 	if row > g.maxRow {
 		g.maxRow = row
 	}
@@ -166,6 +173,9 @@ var pow10 = func() [23]float64 {
 
 // merged reports whether (row, col) lies in a merged range, and its width in columns.
 func (g *grid) merged(row, col int) (merge, bool) {
+	if len(g.merges) == 0 {
+		return merge{}, false
+	}
 	for _, m := range g.merges {
 		if m.row == row && m.first <= col && col <= m.last {
 			return m, true
@@ -178,8 +188,13 @@ func (g *grid) merged(row, col int) (merge, bool) {
 func (g *grid) fitWidths(st *styles) map[int]float64 {
 	need := map[int]int{}
 	maxCol := 0
-	for row, cols := range g.cells {
-		for col, c := range cols {
+	for i, cols := range g.cells {
+		row := i + 1
+		for k, c := range cols {
+			if !c.used {
+				continue
+			}
+			col := k + 1
 			if col > maxCol {
 				maxCol = col
 			}
@@ -245,19 +260,17 @@ func (g *grid) flush(f *excelize.File, st *styles, omit bool, title string) erro
 		}
 	}
 	for row := 1; row <= g.maxRow; row++ {
-		cols := g.cells[row]
-		if len(cols) == 0 {
+		if row > len(g.cells) || len(g.cells[row-1]) == 0 {
 			continue
 		}
-		last := 0
-		for c := range cols {
-			if c > last {
-				last = c
-			}
-		}
-		vals := make([]any, last)
+		cols := g.cells[row-1]
+		vals := make([]any, len(cols))
 		lines := 1
-		for col, c := range cols {
+		for k, c := range cols {
+			if !c.used {
+				continue
+			}
+			col := k + 1
 			if v, ok := c.value.(float64); ok && !finite(v) {
 				return fmt.Errorf("workbook: sheet %s: cell %s would hold %v; this is a bug in the writer", g.name, cellName(col, row), v)
 			}

@@ -4,7 +4,9 @@ import (
 	"math"
 	"math/rand/v2"
 	"strconv"
+	"strings"
 	"testing"
+	"unicode/utf8"
 )
 
 // TestRound15 compares round15 with the standard library's decimal
@@ -52,6 +54,57 @@ func TestUnitLabel(t *testing.T) {
 	for in, want := range map[string]string{"W/(m^2·K)": "W/(m²·K)", "m3": "m³", "cm^2": "cm²", "kg": "kg", "mL/g": "mL/g"} {
 		if got := unitLabel(in); got != want {
 			t.Errorf("unitLabel(%q) = %q, want %q", in, got, want)
+		}
+	}
+}
+
+// wrappedLines and textWidth count as the plain split into lines and
+// words does (strings.Split on newlines, strings.Fields on white space,
+// runes counted), on texts with several spaces, tabs, no-break spaces,
+// accented letters, long words and empty lines.
+func TestWrappedLinesAsSplit(t *testing.T) {
+	split := func(s string, width float64) int {
+		per := max(int(width)-1, 1)
+		lines := 0
+		for _, para := range strings.Split(s, "\n") {
+			n, used := 1, 0
+			for _, word := range strings.Fields(para) {
+				w := utf8.RuneCountInString(word)
+				switch {
+				case used == 0:
+					used = w
+				case used+1+w <= per:
+					used += 1 + w
+				default:
+					n++
+					used = w
+				}
+				for used > per {
+					n++
+					used -= per
+				}
+			}
+			lines += n
+		}
+		return lines
+	}
+	widest := func(s string) int {
+		w := 0
+		for _, l := range strings.Split(s, "\n") {
+			w = max(w, utf8.RuneCountInString(l))
+		}
+		return w
+	}
+	texts := []string{"", " ", "\n", "a", "one two  three\tfour", "Ethyl acetate\u00a0(EtOAc) at 3.50 € per litre\n\nsecond paragraph",
+		"averyveryveryverylongwordthatdoesnotfit and then some", "  leading and trailing  ", "é è ê ë\nà â\n", "x\ny\n\nz"}
+	for _, s := range texts {
+		for _, w := range []float64{0, 1, 2, 5, 8.5, 12, 40, 80} {
+			if got, want := wrappedLines(s, w), split(s, w); got != want {
+				t.Errorf("wrappedLines(%q, %g) = %d, splitting gives %d", s, w, got, want)
+			}
+		}
+		if got, want := textWidth(s), widest(s); got != want {
+			t.Errorf("textWidth(%q) = %d, want %d", s, got, want)
 		}
 	}
 }

@@ -66,12 +66,16 @@ func capitalize(s string) string {
 // textWidth is the length in characters of the longest line of s.
 func textWidth(s string) int {
 	w := 0
-	for _, line := range strings.Split(s, "\n") {
+	for {
+		line, rest, more := strings.Cut(s, "\n")
 		if n := utf8.RuneCountInString(line); n > w {
 			w = n
 		}
+		if !more {
+			return w
+		}
+		s = rest
 	}
-	return w
 }
 
 // wrappedLines estimates how many lines s takes when wrapped in a column
@@ -83,27 +87,51 @@ func wrappedLines(s string, width float64) int {
 		per = 1
 	}
 	lines := 0
-	for _, para := range strings.Split(s, "\n") {
-		n, used := 1, 0
-		for _, word := range strings.Fields(para) {
-			w := utf8.RuneCountInString(word)
-			switch {
-			case used == 0:
-				used = w
-			case used+1+w <= per:
-				used += 1 + w
-			default:
-				n++
-				used = w
-			}
-			for used > per {
-				n++
-				used -= per
-			}
+	for {
+		para, rest, more := strings.Cut(s, "\n")
+		lines += paraLines(para, per)
+		if !more {
+			return lines
 		}
-		lines += n
+		s = rest
 	}
-	return lines
+}
+
+// paraLines is the lines one paragraph takes at per characters a line,
+// its words separated by white space as strings.Fields separates them,
+// counted without cutting the paragraph into words.
+func paraLines(para string, per int) int {
+	n, used := 1, 0
+	w, inWord := 0, false
+	word := func() {
+		switch {
+		case used == 0:
+			used = w
+		case used+1+w <= per:
+			used += 1 + w
+		default:
+			n++
+			used = w
+		}
+		for used > per {
+			n++
+			used -= per
+		}
+	}
+	for _, r := range para {
+		if unicode.IsSpace(r) {
+			if inWord {
+				word()
+			}
+			w, inWord = 0, false
+			continue
+		}
+		w, inWord = w+1, true
+	}
+	if inWord {
+		word()
+	}
+	return n
 }
 
 // unitPowers writes the powers in a unit as a reader writes them: m^2 as

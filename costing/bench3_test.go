@@ -1,0 +1,81 @@
+package costing
+
+import (
+	"fmt"
+	"os"
+	"testing"
+
+	"sepcost/costing/prices"
+	"sepcost/costing/scenario"
+)
+
+// threeMethodPlan is the solid demo with a distillation section: a scenario
+// that describes all three methods.
+func threeMethodPlan(b testing.TB) (*Plan, *prices.Table) {
+	f, err := os.Open("../scale/testdata/solid-with-distillation.yaml")
+	if err != nil {
+		b.Fatal(err)
+	}
+	defer f.Close()
+	sc, err := scenario.Load(f, "solid-with-distillation.yaml")
+	if err != nil {
+		b.Fatal(err)
+	}
+	_, t := demoPlan(b)
+	p, err := Prepare(sc)
+	if err != nil {
+		b.Fatal(err)
+	}
+	if len(p.Methods) != 3 {
+		b.Fatalf("%d methods, want 3", len(p.Methods))
+	}
+	for _, m := range p.Methods {
+		if m.Run == nil {
+			b.Fatalf("%s is not described", m.Name)
+		}
+	}
+	return p, t
+}
+
+// BenchmarkOneMassThreeMethods: one batch mass (the scenario's target,
+// 2 kg) through chromatography, crystallization and distillation, each
+// model then its ledger and green metrics (Plan.RunOne); the sub-benchmarks
+// are each method alone.
+func BenchmarkOneMassThreeMethods(b *testing.B) {
+	p, t := threeMethodPlan(b)
+	st, err := p.SitePrices(t)
+	if err != nil {
+		b.Fatal(err)
+	}
+	m := p.Scenario.TargetKg
+	b.Run("all", func(b *testing.B) {
+		b.ReportAllocs()
+		for b.Loop() {
+			for j := range p.Methods {
+				if _, err := p.RunOne(j, m, st); err != nil {
+					b.Fatal(err)
+				}
+			}
+		}
+	})
+	for j, me := range p.Methods {
+		b.Run(fmt.Sprintf("%s/model", me.Name), func(b *testing.B) {
+			b.ReportAllocs()
+			for b.Loop() {
+				if me.Choices != nil {
+					me.Choices(m)
+				} else {
+					me.Run(m)
+				}
+			}
+		})
+		b.Run(fmt.Sprintf("%s/priced", me.Name), func(b *testing.B) {
+			b.ReportAllocs()
+			for b.Loop() {
+				if _, err := p.RunOne(j, m, st); err != nil {
+					b.Fatal(err)
+				}
+			}
+		})
+	}
+}
