@@ -115,25 +115,9 @@ func SampleAcross(p *costing.Plan, t *prices.Table, targetKg float64, masses []f
 	nominal := ledger.NewRates(t)
 	ms := append(append([]float64(nil), masses...), targetKg)
 	d := newDesign(p, t, usedPrices(p, t, ms...))
-	nJ, nM, nI := len(p.Methods), len(ms), len(d.inputs)
-	x := make([]float64, draws*nI)
-	perG := make([]float64, draws*nM*nJ)
-	if err := run(draws, progress, func(k int) error {
-		rng := rand.New(rand.NewPCG(seed, uint64(k)))
-		xk := x[k*nI : (k+1)*nI]
-		d.sample(rng, xk)
-		q, r := d.apply(p, nominal, xk)
-		for m, kg := range ms {
-			for j := range nJ {
-				v, err := q.PerGramLean(j, kg, r)
-				if err != nil {
-					return err
-				}
-				perG[(k*nM+m)*nJ+j] = v
-			}
-		}
-		return nil
-	}); err != nil {
+	nJ, nM := len(p.Methods), len(ms)
+	x, perG, err := d.drawAll(p, nominal, ms, draws, seed, progress)
+	if err != nil {
 		return nil, err
 	}
 	u := &Uncertainty{TargetKg: targetKg, Draws: draws, Seed: seed, Inputs: d.inputs, Currency: t.Currency,
@@ -155,6 +139,32 @@ func SampleAcross(p *costing.Plan, t *prices.Table, targetKg float64, masses []f
 	}
 	u.weighInputs(p, nominal, x, at(nM-1))
 	return u, nil
+}
+
+// drawAll makes the draws: for draw k, the row of inputs x[k·nI : (k+1)·nI]
+// and the cost per gram of method j at mass m, perG[(k·nM + m)·nJ + j]
+// (NaN when not feasible), nI inputs, nM masses, nJ methods.
+func (d *design) drawAll(p *costing.Plan, nominal *ledger.Rates, ms []float64, draws int, seed uint64, progress func(done int)) (x, perG []float64, err error) {
+	nJ, nM, nI := len(p.Methods), len(ms), len(d.inputs)
+	x = make([]float64, draws*nI)
+	perG = make([]float64, draws*nM*nJ)
+	err = run(draws, progress, func(k int) error {
+		rng := rand.New(rand.NewPCG(seed, uint64(k)))
+		xk := x[k*nI : (k+1)*nI]
+		d.sample(rng, xk)
+		q, r := d.apply(p, nominal, xk)
+		for m, kg := range ms {
+			for j := range nJ {
+				v, err := q.PerGramLean(j, kg, r)
+				if err != nil {
+					return err
+				}
+				perG[(k*nM+m)*nJ+j] = v
+			}
+		}
+		return nil
+	})
+	return x, perG, err
 }
 
 // run calls f for each draw on all cores; the first error stops nothing
