@@ -101,21 +101,27 @@ func CutFor(p, imp Band, first bool, target float64) Cut {
 	if !first { // mirror: the product elutes last
 		p, imp = p.mirror(), imp.mirror()
 	}
-	purity := func(x float64) (float64, float64) {
-		ps := p.share(x)
-		pr := p.Kg * ps
+	purity := func(x float64) (float64, float64) { return purityWith(p, x, imp.Kg*imp.share(x)) }
+	// reaches says whether the cut at x reaches the target: purity(x) ≥
+	// target. When the impurity eluted before x is so much that even all
+	// of the product could not dilute it to the target, the answer is no
+	// without the product's share: purity = pr/(pr + im) ≤ P/(P + im),
+	// P the product's mass, and the margin of 10⁻⁹ is far above the
+	// rounding of either side, so the answer is the one purity gives.
+	reaches := func(x float64) bool {
 		im := imp.Kg * imp.share(x)
-		if pr+im <= 0 {
-			return 1, 0
+		if im > 0 && p.Kg/(p.Kg+im) < target-1e-9 {
+			return false
 		}
-		return pr / (pr + im), ps
+		pu, _ := purityWith(p, x, im)
+		return pu >= target
 	}
 	lo, hi := p.Front-6*p.Kinetic, p.End+6*p.Kinetic
 	const n = 48
 	best := math.NaN()
 	for i := n; i >= 0; i-- {
 		x := lo + (hi-lo)*float64(i)/n
-		if pu, _ := purity(x); pu >= target {
+		if reaches(x) {
 			best = x
 			break
 		}
@@ -127,7 +133,7 @@ func CutFor(p, imp Band, first bool, target float64) Cut {
 		a, b := best, best+(hi-lo)/n
 		for i := 0; i < 30; i++ {
 			m := (a + b) / 2
-			if pu, _ := purity(m); pu >= target {
+			if reaches(m) {
 				a = m
 			} else {
 				b = m
@@ -138,6 +144,17 @@ func CutFor(p, imp Band, first bool, target float64) Cut {
 	pu, rec := purity(best)
 	mixedImp := math.Max(imp.share(hi)-imp.share(best), 0)
 	return Cut{Recovery: rec, Purity: pu, Mixed: 1 - rec, MixedImpurity: mixedImp, OK: rec > 0}
+}
+
+// purityWith is the purity of the product eluted before x with im kg of
+// impurity, and the product's share eluted.
+func purityWith(p Band, x, im float64) (float64, float64) {
+	ps := p.share(x)
+	pr := p.Kg * ps
+	if pr+im <= 0 {
+		return 1, 0
+	}
+	return pr / (pr + im), ps
 }
 
 // mirror reflects a band about zero (its elution volume negated), so that
