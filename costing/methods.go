@@ -30,8 +30,10 @@ type Entry struct {
 	// Build reads and checks the coefficients once and returns the model's
 	// run at a crude mass, kg; choices, when not nil, lists the candidate
 	// plans at a mass that only money can settle (the plan prices them and
-	// keeps the cheapest per gram). Called only when Described.
-	Build func(sc *scenario.Scenario, coef source.Set, eq *equipment.Table) (run func(float64) usage.Usage, choices func(float64) []usage.Usage)
+	// keeps the cheapest per gram). Called only when Described. quiet asks
+	// for usages made only to be costed (usage.Usage.Quiet): the same
+	// quantities, without the words a model may leave out.
+	Build func(sc *scenario.Scenario, coef source.Set, eq *equipment.Table, quiet bool) (run func(float64) usage.Usage, choices func(float64) []usage.Usage)
 	// Solvents lists the solvent ids the method's section names.
 	Solvents func(*scenario.Scenario) []string
 	// Cautions lists the method's safety cautions for the scenario.
@@ -49,7 +51,7 @@ var Registry = []Entry{
 	{Name: cryst.Method, Package: "costing/cryst", Use: green.Crystallization,
 		Defaults:  cryst.Defaults,
 		Described: func(sc *scenario.Scenario) bool { return sc.Crystallization != nil },
-		Build: func(sc *scenario.Scenario, coef source.Set, _ *equipment.Table) (func(float64) usage.Usage, func(float64) []usage.Usage) {
+		Build: func(sc *scenario.Scenario, coef source.Set, _ *equipment.Table, _ bool) (func(float64) usage.Usage, func(float64) []usage.Usage) {
 			return cryst.New(sc, coef).Run, nil
 		},
 		Solvents: func(sc *scenario.Scenario) []string { return sc.Crystallization.Solvents() },
@@ -57,7 +59,7 @@ var Registry = []Entry{
 	{Name: distil.Method, Package: "costing/distil", Use: green.Distillation,
 		Defaults:  distil.Defaults,
 		Described: func(sc *scenario.Scenario) bool { return sc.Distillation != nil },
-		Build: func(sc *scenario.Scenario, coef source.Set, _ *equipment.Table) (func(float64) usage.Usage, func(float64) []usage.Usage) {
+		Build: func(sc *scenario.Scenario, coef source.Set, _ *equipment.Table, _ bool) (func(float64) usage.Usage, func(float64) []usage.Usage) {
 			return distil.New(sc, coef).Run, nil
 		},
 		Solvents: func(sc *scenario.Scenario) []string { return sc.Distillation.Solvents() },

@@ -149,7 +149,7 @@ func PrepareWith(sc *scenario.Scenario, opt Options) (*Plan, error) {
 	if !described {
 		return nil, &scenario.Problem{Of: scenario.ErrInvalid, File: sc.File, Msg: "describes no purification method; add " + sectionList() + " (see `sepcost init`)"}
 	}
-	p := newPlan(sc, coef, eq)
+	p := newPlan(sc, coef, eq, false)
 	if sc.WasteSector.Text != "" {
 		sec, err := waste.ParseSector(sc.WasteSector.Text)
 		if err != nil {
@@ -164,12 +164,12 @@ func PrepareWith(sc *scenario.Scenario, opt Options) (*Plan, error) {
 // set. Each model reads and checks its coefficients once here, not at
 // every run. A method the scenario does not describe stays in the plan as
 // "not assessed", with the reason, so that no report silently drops it.
-func newPlan(sc *scenario.Scenario, coef source.Set, eq *equipment.Table) *Plan {
+func newPlan(sc *scenario.Scenario, coef source.Set, eq *equipment.Table, quiet bool) *Plan {
 	p := &Plan{Scenario: sc, Coef: coef, Equipment: eq}
 	for _, e := range Registry {
 		m := Method{Name: e.Name, Use: e.Use}
 		if e.Described(sc) {
-			m.Run, m.Choices = e.Build(sc, coef, eq)
+			m.Run, m.Choices = e.Build(sc, coef, eq, quiet)
 		} else {
 			m.Run = notAssessed(sc, e.Name)
 		}
@@ -185,7 +185,17 @@ func (p *Plan) WithCoefficients(coef source.Set) *Plan { return p.With(p.Scenari
 // With is the plan on a drawn scenario and coefficient set (a Monte Carlo
 // draw: scenario.Scenario.With, source.Set.WithValues).
 func (p *Plan) With(sc *scenario.Scenario, coef source.Set) *Plan {
-	q := newPlan(sc, coef, p.Equipment)
+	q := newPlan(sc, coef, p.Equipment, false)
+	q.WasteSector = p.WasteSector
+	return q
+}
+
+// Quiet is With for a plan whose usages are only costed, as a Monte
+// Carlo draw's are (PerGramLean): the models leave out their notes and
+// the words they need work to find (Entry.Build's quiet); every quantity
+// and cost is the one With gives (TestQuietPlanCostsTheSame).
+func (p *Plan) Quiet(sc *scenario.Scenario, coef source.Set) *Plan {
+	q := newPlan(sc, coef, p.Equipment, true)
 	q.WasteSector = p.WasteSector
 	return q
 }

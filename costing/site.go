@@ -14,7 +14,7 @@ import (
 // rule's loading on a column (no prices needed), choices every candidate
 // the plan prices. A site that lacks what a column needs makes every run
 // not feasible, with the reason.
-func chromMethod(sc *scenario.Scenario, coef source.Set, eq *equipment.Table) (run func(float64) usage.Usage, choices func(float64) []usage.Usage) {
+func chromMethod(sc *scenario.Scenario, coef source.Set, eq *equipment.Table, quiet bool) (run func(float64) usage.Usage, choices func(float64) []usage.Usage) {
 	site := chromSite(sc, eq)
 	if why := siteProblem(site, eq); why != "" {
 		run = func(m float64) usage.Usage {
@@ -22,7 +22,7 @@ func chromMethod(sc *scenario.Scenario, coef source.Set, eq *equipment.Table) (r
 		}
 		return run, func(m float64) []usage.Usage { return []usage.Usage{run(m)} }
 	}
-	model := chrom.NewModel(sc, coef, site)
+	model := chrom.NewModelWith(sc, coef, site, quiet)
 	return model.Run, model.Candidates
 }
 

@@ -356,7 +356,7 @@ func (d *design) apply(p *costing.Plan, r *ledger.Rates, x []float64) (*costing.
 			f[k] = x[i]
 		}
 	}
-	return p.With(sc, p.Coef.WithValues(cv)), r.Scaled(f)
+	return p.Quiet(sc, p.Coef.WithValues(cv)), r.Scaled(f)
 }
 
 // usedPrices lists the price rows the plan's methods ask for at the

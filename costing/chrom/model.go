@@ -42,13 +42,24 @@ type Model struct {
 	// figures, notes and trade-off table, which do not depend on the
 	// mass), built once; start copies it for each candidate.
 	head usage.Usage
+	// quiet makes usages that are only costed (usage.Usage.Quiet): no
+	// notes, no trade-off table, a short reason when nothing is feasible.
+	quiet bool
 }
 
 // NewModel analyses the separation once; coef must hold the calibration.
 func NewModel(sc *scenario.Scenario, coef source.Set, site Site) *Model {
-	md := &Model{sc: sc, coef: coef, site: site, a: analyse(sc, coef)}
+	return NewModelWith(sc, coef, site, false)
+}
+
+// NewModelWith is NewModel; quiet makes usages that are only costed
+// (usage.Usage.Quiet): their figures, demands, waste and cost are those
+// NewModel gives, without notes, the trade-off table or the worded
+// reason (and the ΔRf search behind it) when no loading is feasible.
+func NewModelWith(sc *scenario.Scenario, coef source.Set, site Site, quiet bool) *Model {
+	md := &Model{sc: sc, coef: coef, site: site, a: analyse(sc, coef), quiet: quiet}
 	if sc.Chromatography != nil {
-		md.head = md.a.header(sc, coef, 0)
+		md.head = md.a.header(sc, coef, quiet)
 	}
 	return md
 }
@@ -57,6 +68,7 @@ func NewModel(sc *scenario.Scenario, coef source.Set, site Site) *Model {
 // and tables, copied so that the candidate can add to them.
 func (md *Model) start(crudeKg float64) usage.Usage {
 	u := usage.New(Method, crudeKg, crudeKg*md.sc.Purity)
+	u.Quiet = md.quiet
 	u.Figures = append(u.Figures, md.head.Figures...)
 	u.Notes = append([]usage.Note(nil), md.head.Notes...)
 	u.Tables = append([]usage.Table(nil), md.head.Tables...)
@@ -121,17 +133,26 @@ func (md *Model) Candidates(crudeKg float64) []usage.Usage {
 	if len(out) == 0 {
 		u := md.start(crudeKg)
 		u.Feasible = false
-		u.Reason = a.infeasible(coef)
+		u.Reason = quietInfeasible
+		if !md.quiet {
+			u.Reason = a.infeasible(coef)
+		}
 		return []usage.Usage{u}
 	}
 	return out
 }
 
+// quietInfeasible is the reason a quiet model gives when no loading is
+// feasible (the worded one, with the ΔRf that would do, is NewModel's).
+const quietInfeasible = "no loading reaches the purity asked"
+
 // header starts a usage with the separation's figures, notes and the
-// trade-off table, the same for every candidate.
-func (a analysis) header(sc *scenario.Scenario, coef source.Set, crudeKg float64) usage.Usage {
+// trade-off table, the same for every candidate; quiet leaves out the
+// notes and the table.
+func (a analysis) header(sc *scenario.Scenario, coef source.Set, quiet bool) usage.Usage {
 	ch := sc.Chromatography
-	u := usage.New(Method, crudeKg, crudeKg*sc.Purity)
+	u := usage.New(Method, 0, 0)
+	u.Quiet = quiet
 	fig := u.AddFigure
 	fig("k_product", "retention factor k of the product", RetentionFactor(ch.ProductRf), "")
 	u.MarkDetail("k_product") // the method sheet and JSON only
@@ -145,6 +166,9 @@ func (a analysis) header(sc *scenario.Scenario, coef source.Set, crudeKg float64
 	fig("ratio_ceiling", "silica : crude at the practical ceiling", a.ratioCeil, "")
 	fig("ratio_rule", "silica : crude the rule gives, bounded by the ceiling", a.ratioRule, "")
 	a.separationNotes(&u, ch, coef)
+	if quiet {
+		return u
+	}
 	t := usage.Table{Key: "loading_tradeoff", Title: fmt.Sprintf("Loading against recovery at the purity asked (%.0f cm bed, %.0f plates)", coef.Get(KeyRefBed)*100, a.plates),
 		Columns: []string{"silica : crude", "crude per silica (%)", "product in the pure cut (%)", "product in mixed fractions (%)", "purity of the cut (%)", "usable (1 = yes)"}}
 	for _, r := range a.trade {

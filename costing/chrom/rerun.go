@@ -39,6 +39,7 @@ func (p *runPlan) rerun(u *usage.Usage, a analysis, sc *scenario.Scenario, coef 
 		return nil
 	}
 	v := usage.New(Method, crude2, mp)
+	v.Quiet = u.Quiet
 	build(&v, a2, &sc2, coef, site, *e2, p.ratio)
 	if !v.Feasible {
 		u.Notef(usage.Info, "The mixed fractions (%s of product) cannot be cut to the purity asked on a second run (%s): they are set aside.", units.FormatMass(mp), v.Reason)

@@ -190,6 +190,11 @@ type Usage struct {
 	Activities    []Activity
 	Notes         []Note
 	Tables        []Table // small tables a model shows beside its figures (e.g. a trade-off)
+	// Quiet, when set, drops notes as they are added (Notef writes
+	// nothing): a usage made only to be costed, as a Monte Carlo draw is,
+	// is never read for its words, and wording them is a good part of
+	// its cost. Figures, demands and waste are the same either way.
+	Quiet bool `json:"-"`
 }
 
 // Table is a small table of numbers a model shows on its method sheet.
@@ -221,6 +226,9 @@ func (u *Usage) Compact() {
 
 // Notef adds a note.
 func (u *Usage) Notef(l Level, format string, a ...any) {
+	if u.Quiet {
+		return
+	}
 	u.Notes = append(u.Notes, Note{Level: l, Text: fmt.Sprintf(format, a...)})
 }
 
