@@ -51,16 +51,20 @@ var Registry = []Entry{
 	{Name: cryst.Method, Package: "costing/cryst", Use: green.Crystallization,
 		Defaults:  cryst.Defaults,
 		Described: func(sc *scenario.Scenario) bool { return sc.Crystallization != nil },
-		Build: func(sc *scenario.Scenario, coef source.Set, _ *equipment.Table, _ bool) (func(float64) usage.Usage, func(float64) []usage.Usage) {
-			return cryst.New(sc, coef).Run, nil
+		Build: func(sc *scenario.Scenario, coef source.Set, _ *equipment.Table, quiet bool) (func(float64) usage.Usage, func(float64) []usage.Usage) {
+			m := cryst.New(sc, coef)
+			m.Quiet = quiet
+			return m.Run, nil
 		},
 		Solvents: func(sc *scenario.Scenario) []string { return sc.Crystallization.Solvents() },
 		Cautions: cryst.Cautions},
 	{Name: distil.Method, Package: "costing/distil", Use: green.Distillation,
 		Defaults:  distil.Defaults,
 		Described: func(sc *scenario.Scenario) bool { return sc.Distillation != nil },
-		Build: func(sc *scenario.Scenario, coef source.Set, _ *equipment.Table, _ bool) (func(float64) usage.Usage, func(float64) []usage.Usage) {
-			return distil.New(sc, coef).Run, nil
+		Build: func(sc *scenario.Scenario, coef source.Set, _ *equipment.Table, quiet bool) (func(float64) usage.Usage, func(float64) []usage.Usage) {
+			m := distil.New(sc, coef)
+			m.Quiet = quiet
+			return m.Run, nil
 		},
 		Solvents: func(sc *scenario.Scenario) []string { return sc.Distillation.Solvents() },
 		Cautions: distil.Cautions},

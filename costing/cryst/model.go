@@ -51,6 +51,9 @@ type Model struct {
 	p   params
 	liq liquid
 	bad string // why the coefficients make the model meaningless; "" when they do not
+	// Quiet makes usages that are only costed (usage.Usage.Quiet: no
+	// notes); every quantity is the same.
+	Quiet bool
 }
 
 // New reads the coefficients (the defaults with the user's settings) and
@@ -121,6 +124,7 @@ func Run(sc *scenario.Scenario, coef source.Set, crudeKg float64) usage.Usage {
 //     aqueous for water alone, else non-halogenated solvent).
 func (m *Model) Run(crudeKg float64) usage.Usage {
 	u := usage.New(Method, crudeKg, crudeKg*m.sc.Purity)
+	u.Quiet = m.Quiet
 	if m.bad != "" {
 		u.Feasible = false
 		u.Reason = m.bad

@@ -26,6 +26,9 @@ type Model struct {
 	coef source.Set
 	p    params
 	bad  string // why the coefficients make the model meaningless; "" when they do not
+	// Quiet makes usages that are only costed (usage.Usage.Quiet: no
+	// notes); every quantity is the same.
+	Quiet bool
 }
 
 // New reads the coefficients (the defaults with the user's settings) once.
@@ -49,6 +52,7 @@ func Run(sc *scenario.Scenario, coef source.Set, crudeKg float64) usage.Usage {
 // and demands, report.go and prose.go).
 func (m *Model) Run(crudeKg float64) usage.Usage {
 	u := usage.New(Method, crudeKg, 0)
+	u.Quiet = m.Quiet
 	if m.d == nil {
 		u.Feasible = false
 		u.Reason = "the scenario has no distillation section"
