@@ -1,7 +1,6 @@
 package scale
 
 import (
-	"bytes"
 	"math"
 	"strings"
 	"testing"
@@ -9,27 +8,15 @@ import (
 	"github.com/shopspring/decimal"
 
 	"sepcost/costing"
+	"sepcost/costing/costingtest"
 	"sepcost/costing/prices"
-	"sepcost/costing/scenario"
 	"sepcost/costing/usage"
 	"sepcost/templates"
 )
 
 func plan(t testing.TB, yaml []byte) (*costing.Plan, *prices.Table) {
 	t.Helper()
-	sc, err := scenario.Load(bytes.NewReader(yaml), "test.yaml")
-	if err != nil {
-		t.Fatal(err)
-	}
-	pt, err := prices.Read(bytes.NewReader(templates.Prices), "prices.csv")
-	if err != nil {
-		t.Fatal(err)
-	}
-	p, err := costing.Prepare(sc)
-	if err != nil {
-		t.Fatal(err)
-	}
-	return p, pt
+	return costingtest.Plan(t, yaml, "test.yaml")
 }
 
 // withPrice copies a table with one item's price changed.

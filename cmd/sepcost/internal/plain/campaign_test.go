@@ -6,9 +6,7 @@ import (
 	"encoding/json"
 	"testing"
 
-	"sepcost/costing"
-	"sepcost/costing/prices"
-	"sepcost/costing/scenario"
+	"sepcost/costing/costingtest"
 	"sepcost/scale"
 	"sepcost/templates"
 )
@@ -17,19 +15,8 @@ import (
 // source of truth; the Budget sheet's formulas reproduce the same).
 func TestBudgetJSONAndCSV(t *testing.T) {
 	t.Parallel()
-	sc, err := scenario.Load(bytes.NewReader(templates.Scenario), "demo.yaml")
-	if err != nil {
-		t.Fatal(err)
-	}
-	pt, err := prices.Read(bytes.NewReader(templates.Prices), "prices.csv")
-	if err != nil {
-		t.Fatal(err)
-	}
-	p, err := costing.Prepare(sc)
-	if err != nil {
-		t.Fatal(err)
-	}
-	r, err := scale.EstimateWith(p, pt, []float64{sc.TargetKg}, scale.Options{Draws: 20, Seed: 1})
+	p, pt := costingtest.Plan(t, templates.Scenario, "demo.yaml")
+	r, err := scale.EstimateWith(p, pt, []float64{p.Scenario.TargetKg}, scale.Options{Draws: 20, Seed: 1})
 	if err != nil {
 		t.Fatal(err)
 	}

@@ -7,8 +7,8 @@ import (
 	"testing"
 
 	"sepcost/costing"
+	"sepcost/costing/costingtest"
 	"sepcost/costing/prices"
-	"sepcost/costing/scenario"
 	"sepcost/costing/usage"
 	"sepcost/scale"
 	"sepcost/templates"
@@ -16,19 +16,7 @@ import (
 
 func demoPlan(t *testing.T, yaml []byte) (*costing.Plan, *prices.Table) {
 	t.Helper()
-	sc, err := scenario.Load(bytes.NewReader(yaml), "demo.yaml")
-	if err != nil {
-		t.Fatal(err)
-	}
-	pt, err := prices.Read(bytes.NewReader(templates.Prices), "prices.csv")
-	if err != nil {
-		t.Fatal(err)
-	}
-	p, err := costing.Prepare(sc)
-	if err != nil {
-		t.Fatal(err)
-	}
-	return p, pt
+	return costingtest.Plan(t, yaml, "demo.yaml")
 }
 
 // Every warning reaches the text summary, of an estimate (per mass) and

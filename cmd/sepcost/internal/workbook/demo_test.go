@@ -7,6 +7,7 @@ import (
 	"testing"
 
 	"sepcost/costing"
+	"sepcost/costing/costingtest"
 	"sepcost/costing/prices"
 	"sepcost/costing/scenario"
 	"sepcost/scale"
@@ -67,18 +68,7 @@ func demoReportEdited(t testing.TB, yaml []byte, name string, edit func(*scenari
 // price row at different masses, each band a quantity column of its own.
 func demoSweepReport(t *testing.T) *scale.Report {
 	t.Helper()
-	sc, err := scenario.Load(bytes.NewReader(templates.Scenario), "built-in demo scenario")
-	if err != nil {
-		t.Fatal(err)
-	}
-	pt, err := prices.Read(bytes.NewReader(templates.Prices), "built-in example prices")
-	if err != nil {
-		t.Fatal(err)
-	}
-	plan, err := costing.Prepare(sc)
-	if err != nil {
-		t.Fatal(err)
-	}
+	plan, pt := costingtest.Plan(t, templates.Scenario, "built-in demo scenario")
 	masses := make([]float64, 16)
 	for i := range masses {
 		masses[i] = 0.001 * math.Pow(5000, float64(i)/15)
