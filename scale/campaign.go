@@ -152,13 +152,13 @@ func (cr *CampaignReport) decide(cur string) {
 	w := order[0]
 	cr.Winner = w.Method
 	line := fmt.Sprintf("For the campaign (%s), %s costs %s %s in %s (%.2f %s per gram, one-time costs %s and capital %s charged once; at least %.1f working days, %.1f person-days)",
-		what, w.Method, w.Total.StringFixed(w.Ledger.Places), cur, plural(w.Batches, "batch", "batches"), w.PerGram, cur, w.OneTime.StringFixed(w.Ledger.Places), w.Capital.StringFixed(w.Ledger.Places), w.WorkingDays, w.PersonDays)
+		what, w.Method, units.Group(w.Total.StringFixed(w.Ledger.Places)), cur, plural(w.Batches, "batch", "batches"), w.PerGram, cur, units.Group(w.OneTime.StringFixed(w.Ledger.Places)), units.Group(w.Capital.StringFixed(w.Ledger.Places)), w.WorkingDays, w.PersonDays)
 	if len(order) > 1 {
 		r := order[1]
 		cr.RunnerUp = r.Method
 		cr.Margin = (r.PerGram - w.PerGram) / r.PerGram
 		cr.Tie = cr.Margin < TieMargin
-		line += fmt.Sprintf(" against %s %s by %s (%.2f %s per gram, %d batches)", r.Total.StringFixed(r.Ledger.Places), cur, r.Method, r.PerGram, cur, r.Batches)
+		line += fmt.Sprintf(" against %s %s by %s (%.2f %s per gram, %d batches)", units.Group(r.Total.StringFixed(r.Ledger.Places)), cur, r.Method, r.PerGram, cur, r.Batches)
 		if cr.Tie {
 			line += fmt.Sprintf(": within %.0f %%, a tie; choose on other grounds", TieMargin*100)
 		}

@@ -104,7 +104,7 @@ func Decide(p *costing.Plan, t *prices.Table, targetKg float64) (*Decision, erro
 	w := cands[0]
 	d.Winner, d.WinnerPerG = w.name, w.perG
 	if len(cands) == 1 {
-		d.Explanation = append(d.Explanation, fmt.Sprintf("At %s of crude, %s is the only feasible method: %.2f %s per gram of purified product (%s %s for the batch).", mass, w.name, w.perG, cur, w.res.Ledger.Total.StringFixed(w.res.Ledger.Places), cur))
+		d.Explanation = append(d.Explanation, fmt.Sprintf("At %s of crude, %s is the only feasible method: %.2f %s per gram of purified product (%s %s for the batch).", mass, w.name, w.perG, cur, units.Group(w.res.Ledger.Total.StringFixed(w.res.Ledger.Places)), cur))
 		return d, nil
 	}
 	r := cands[1]
@@ -114,7 +114,7 @@ func Decide(p *costing.Plan, t *prices.Table, targetKg float64) (*Decision, erro
 	if d.Tie {
 		d.Explanation = append(d.Explanation, fmt.Sprintf("At %s of crude, %s (%.2f %s/g) and %s (%.2f %s/g) are within %.0f %% of each other: a tie within the models' uncertainty; choose on other grounds (development time, equipment, risk).", mass, w.name, w.perG, cur, r.name, r.perG, cur, TieMargin*100))
 	} else {
-		d.Explanation = append(d.Explanation, fmt.Sprintf("At %s of crude, choose %s: %.2f %s per gram of purified product against %.2f %s/g by %s, %.0f %% cheaper (%s against %s %s for the batch).", mass, w.name, w.perG, cur, r.perG, cur, r.name, d.Margin*100, w.res.Ledger.Total.StringFixed(w.res.Ledger.Places), r.res.Ledger.Total.StringFixed(r.res.Ledger.Places), cur))
+		d.Explanation = append(d.Explanation, fmt.Sprintf("At %s of crude, choose %s: %.2f %s per gram of purified product against %.2f %s/g by %s, %.0f %% cheaper (%s against %s %s for the batch).", mass, w.name, w.perG, cur, r.perG, cur, r.name, d.Margin*100, units.Group(w.res.Ledger.Total.StringFixed(w.res.Ledger.Places)), units.Group(r.res.Ledger.Total.StringFixed(r.res.Ledger.Places)), cur))
 	}
 	// Break-even prices for the drivers of the two leading methods.
 	seen := map[string]bool{}
@@ -136,7 +136,7 @@ func Decide(p *costing.Plan, t *prices.Table, targetKg float64) (*Decision, erro
 		if !plausible(f) {
 			far = fmt.Sprintf(": more than a %g-fold change, beyond what a budget plans for", FlipRange)
 		}
-		d.Explanation = append(d.Explanation, fmt.Sprintf("The answer would flip to %s only if the price of %s %s %s %s per %s (now %s)%s.", r.name, dr.Item, dir, f.BreakEven.StringFixed(2), cur, f.Unit, f.Price.StringFixed(2), far))
+		d.Explanation = append(d.Explanation, fmt.Sprintf("The answer would flip to %s only if the price of %s %s %s %s per %s (now %s)%s.", r.name, dr.Item, dir, units.Group(f.BreakEven.StringFixed(2)), cur, f.Unit, units.Group(f.Price.StringFixed(2)), far))
 	}
 	plausibleFlips := 0
 	for _, f := range d.Flips {
