@@ -5,6 +5,8 @@ import (
 	"math"
 	"strconv"
 
+	"github.com/shopspring/decimal"
+
 	"sepcost/costing/units"
 	"sepcost/scale"
 )
@@ -130,8 +132,9 @@ func campaignText(ew *errWriter, r *scale.Report) {
 	ew.printf("\nCampaign (one-time costs charged once; working days at least, one batch after another):\n")
 	for _, k := range c.Costs {
 		p := k.Ledger.Places
+		fix := func(d decimal.Decimal) string { return units.Group(d.StringFixed(p)) }
 		ew.printf("  %s: %d × %s + one-time %s + capital %s = %s %s, %.2f %s/g; %.1f working days, %.1f person-days, %.0f equipment hours\n",
-			k.Method, k.Batches, k.PerBatch.StringFixed(p), k.OneTime.StringFixed(p), k.Capital.StringFixed(p), k.Total.StringFixed(p), k.Ledger.Currency, k.PerGram, k.Ledger.Currency,
+			k.Method, k.Batches, fix(k.PerBatch), fix(k.OneTime), fix(k.Capital), fix(k.Total), k.Ledger.Currency, k.PerGram, k.Ledger.Currency,
 			k.WorkingDays, k.PersonDays, k.OccupiedH)
 	}
 	b := r.Budget
@@ -144,12 +147,12 @@ func campaignText(ew *errWriter, r *scale.Report) {
 		v    interface{ StringFixed(int32) string }
 	}{{"capital", b.Capital}, {"consumables and energy", b.Consumables}, {"labour", b.Labour}, {"equipment occupancy", b.Equipment}, {"disposal", b.Disposal},
 		{"product lost (value)", b.ProductLost}, {"one-time development", b.OneTime}, {"subtotal", b.Subtotal}} {
-		ew.printf("  %-24s %12s\n", h.name, h.v.StringFixed(b.Places))
+		ew.printf("  %-24s %12s\n", h.name, units.Group(h.v.StringFixed(b.Places)))
 	}
 	share := "not sampled"
 	if b.ContingencyShare > 0 && !math.IsNaN(b.ContingencyShare) {
 		share = fmt.Sprintf("%.1f %% = P90/P50 − 1", b.ContingencyShare*100)
 	}
-	ew.printf("  %-24s %12s  (%s)\n", "contingency", b.Contingency.StringFixed(b.Places), share)
-	ew.printf("  %-24s %12s\n", "total request", b.Total.StringFixed(b.Places))
+	ew.printf("  %-24s %12s  (%s)\n", "contingency", units.Group(b.Contingency.StringFixed(b.Places)), share)
+	ew.printf("  %-24s %12s\n", "total request", units.Group(b.Total.StringFixed(b.Places)))
 }

@@ -4,9 +4,11 @@ import (
 	"bytes"
 	"encoding/csv"
 	"encoding/json"
+	"strings"
 	"testing"
 
 	"sepcost/costing/costingtest"
+	"sepcost/costing/units"
 	"sepcost/scale"
 	"sepcost/templates"
 )
@@ -67,6 +69,35 @@ func TestBudgetJSONAndCSV(t *testing.T) {
 		}
 		if got[name] != v {
 			t.Errorf("CSV budget %s = %q, want %s", name, got[name], v)
+		}
+	}
+}
+
+// The text's campaign and budget blocks write money as the rest of the
+// text does: to the minor unit with thousands separators (the demo's
+// campaign runs to thousands of euros).
+func TestCampaignTextGroupsMoney(t *testing.T) {
+	t.Parallel()
+	p, pt := costingtest.Plan(t, templates.Scenario, "demo.yaml")
+	r, err := scale.EstimateWith(p, pt, []float64{p.Scenario.TargetKg}, scale.Options{Draws: 20, Seed: 1})
+	if err != nil {
+		t.Fatal(err)
+	}
+	var out bytes.Buffer
+	if err := Text(&out, r); err != nil {
+		t.Fatal(err)
+	}
+	total := units.Group(r.Budget.Total.StringFixed(r.Budget.Places))
+	if !strings.Contains(total, ",") {
+		t.Fatalf("the demo's budget total %s is below a thousand: pick a larger case", total)
+	}
+	if !strings.Contains(out.String(), "total request") || !strings.Contains(out.String(), total) {
+		t.Errorf("text lacks the grouped budget total %s:\n%s", total, out.String())
+	}
+	for _, k := range r.Campaign.Costs {
+		want := units.Group(k.Total.StringFixed(k.Ledger.Places)) + " " + k.Ledger.Currency
+		if !strings.Contains(out.String(), "= "+want) {
+			t.Errorf("campaign line of %s lacks %q", k.Method, want)
 		}
 	}
 }
