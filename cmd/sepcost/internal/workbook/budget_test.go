@@ -224,7 +224,17 @@ func bandsDemoReport(t *testing.T) *scale.Report {
 // is the campaign's, line for line; else to a ledger on the Budget sheet.
 func TestCampaignRowsAreFormulas(t *testing.T) {
 	t.Parallel()
-	for name, r := range map[string]*scale.Report{"demo": demoReport(t), "demo at 20 g, 20 batches": bandsDemoReport(t)} {
+	// At 20 g × 5 batches chromatography is the budget's method and
+	// crystallization's row refers to its method sheet, one-time subtotal
+	// included.
+	five := demoReportEdited(t, templates.Scenario, "built-in demo scenario", func(sc *scenario.Scenario) {
+		sc.TargetKg = 0.02
+		sc.Campaign.Batches, sc.Campaign.ProductKg = 5, 0
+	})
+	if five.Budget.Method != "chromatography" {
+		t.Fatalf("at 20 g × 5 batches the budget is for %s; the case wants chromatography", five.Budget.Method)
+	}
+	for name, r := range map[string]*scale.Report{"demo": demoReport(t), "demo at 20 g, 20 batches": bandsDemoReport(t), "demo at 20 g, 5 batches": five} {
 		t.Run(name, func(t *testing.T) {
 			b, _ := render(t, r, Options{})
 			f := open(t, b)
