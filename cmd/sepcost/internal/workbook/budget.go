@@ -9,8 +9,10 @@ import (
 	"github.com/xuri/excelize/v2"
 
 	"sepcost/costing/equipment"
+	"sepcost/costing/ledger"
 	"sepcost/costing/usage"
 	"sepcost/scale"
+	"sepcost/scale/campaign"
 )
 
 // sheetBudget follows the Summary: the request a manager reads first.
@@ -71,7 +73,7 @@ func headingOf(g usage.Group) string {
 //	contingency      = ROUND(subtotal × max(P90/P50 − 1, 0), places)
 //
 // The cached values are the budget's own (scale.Budget).
-func buildBudget(g *grid, st *styles, r *scale.Report, m money, lay *layout) {
+func buildBudget(g *grid, st *styles, r *scale.Report, m money, outs []methodOut, lay *layout) {
 	b, c := r.Budget, r.Campaign
 	g.widths[bItem] = 40
 	g.maxWidths[bLabel] = 32 // ledger labels wrap, so the amounts above stay near their headings
@@ -131,8 +133,9 @@ func buildBudget(g *grid, st *styles, r *scale.Report, m money, lay *layout) {
 	g.text(bP90Row, 1, "P90 cost per gram of a batch", st.text)
 	g.num(bP90Row, 2, b.P90, st.perGram)
 	g.set(bP90Row+1, 1, cell{value: "The contingency is the cost above the median that one draw in ten exceeds (P90 − P50), a common way to size it (common practice). Price bands are those of the campaign's purchases; editing the number of batches does not move a line to another band.", style: st.note, spill: true})
-	budgetLedger(g, st, r, m, lay)
-	first, last, methods := budgetCampaigns(g, st, r, bLedgerHead+len(lines)+3)
+	ledgerBlock(g, st, r, m, lay, bLedgerHead, lines, b.CapitalItems, fmt.Sprintf("$B$%d", bBatchesRow), b.Batches)
+	end := campaignTable(g, st, r)
+	first, last, methods, end := campaignMapAndPayback(g, st, r, end+1)
 	if len(methods) > 0 {
 		g.extra = func(f *excelize.File, _ map[int]float64) error {
 			part, err := addChartTo(f, sheetBudget, cellName(len(methods)+3, first-2), paybackChart(first, last, methods))
@@ -141,7 +144,10 @@ func buildBudget(g *grid, st *styles, r *scale.Report, m money, lay *layout) {
 			}
 			return logXAxes(f, []string{part})
 		}
+		// Below the chart, which is suChartH px tall from first-2.
+		end = max(end, first-2+suChartH/20+1)
 	}
+	campaignMoney(g, st, r, m, outs, lay, end+2)
 }
 
 // capitalRow writes the capital heading: the sum of the purchase prices of
@@ -164,13 +170,13 @@ func capitalRow(g *grid, st *styles, r *scale.Report, row int) {
 }
 
 // capitalRate is the formula of the unit price of a ledger line that
-// charges an item bought for the campaign: its hourly rate on the
-// Equipment sheet, or nothing per use; ok is false for other lines.
-func capitalRate(r *scale.Report, item string) (string, bool) {
+// charges an item bought for the campaign (one of items): its hourly rate
+// on the Equipment sheet, or nothing per use; ok is false for other lines.
+func capitalRate(r *scale.Report, items []scale.CapitalItem, item string) (string, bool) {
 	if r.Equipment == nil {
 		return "", false
 	}
-	for _, c := range r.Budget.CapitalItems {
+	for _, c := range items {
 		name := r.Equipment.Items[c.Row].Name
 		switch item {
 		case equipment.HourItem(name):
@@ -182,22 +188,25 @@ func capitalRate(r *scale.Report, item string) (string, bool) {
 	return "", false
 }
 
-// budgetLedger writes one batch's ledger lines with their campaign amounts.
-func budgetLedger(g *grid, st *styles, r *scale.Report, m money, lay *layout) {
-	b := r.Budget
+// ledgerBlock writes, header at row head, one batch's ledger priced for
+// a campaign (the campaign's price bands, items bought for it charged at
+// their hourly rate): per line the unit price (Prices or Equipment sheet),
+// the amount per batch ROUND(q × p, places), the times it is paid (timesF,
+// the cell of the number of batches; 1 for a one-time line) and the
+// campaign's amount. items are the equipment the campaign buys.
+func ledgerBlock(g *grid, st *styles, r *scale.Report, m money, lay *layout, head int, lines []ledger.Line, items []scale.CapitalItem, timesF string, batches int) {
 	for c, h := range []string{"Item", "Line", "Heading", "Quantity per batch", "Unit", "Unit price", "Per batch", "Times", "Campaign", "Price band"} {
 		style := st.header
 		if c+1 >= bQty && c+1 != bUnit && c+1 != bBand {
 			style = st.headerRight
 		}
-		g.text(bLedgerHead, c+1, h, style)
+		g.text(head, c+1, h, style)
 	}
-	n := decimal.NewFromInt(int64(b.Batches))
-	for k, l := range b.Cost.Ledger.Lines {
-		row := bLedgerHead + 1 + k
-		times, timesF := n, fmt.Sprintf("$B$%d", bBatchesRow)
-		if l.Demand.Group == usage.OneTime {
-			times, timesF = decimal.NewFromInt(1), "1"
+	for k, l := range lines {
+		row := head + 1 + k
+		times, tf := l.Demand.Group != usage.OneTime, "1"
+		if times {
+			tf = timesF
 		}
 		g.text(row, bItem, l.Demand.Item, st.text)
 		g.set(row, bLabel, cell{value: l.Demand.Label, style: st.wrap, wrap: true})
@@ -205,15 +214,19 @@ func budgetLedger(g *grid, st *styles, r *scale.Report, m money, lay *layout) {
 		g.num(row, bQty, l.Qty.InexactFloat64(), st.figure)
 		g.text(row, bUnit, l.Unit, st.text)
 		ref := priceRef(l.PriceRow)
-		if f, ok := capitalRate(r, l.Demand.Item); ok {
+		if f, ok := capitalRate(r, items, l.Demand.Item); ok {
 			ref = f
 		}
 		g.formula(row, bPrice, ref, l.UnitPrice.InexactFloat64(), st.priceStyle(l.UnitPrice))
 		lay.add(sheetBudget, cellName(bPrice, row), l.UnitPrice, "unit price")
 		g.formula(row, bPerBatch, fmt.Sprintf("ROUND(%s*%s,%d)", cellName(bQty, row), cellName(bPrice, row), m.places), l.Amount.InexactFloat64(), st.money)
 		lay.add(sheetBudget, cellName(bPerBatch, row), l.Amount, "line")
-		g.formula(row, bTimes, timesF, times.InexactFloat64(), st.general)
-		campaign := l.Amount.Mul(times)
+		n := 1
+		if times {
+			n = batches
+		}
+		g.formula(row, bTimes, tf, float64(n), st.general)
+		campaign := l.Amount.Mul(decimal.NewFromInt(int64(n)))
 		g.formula(row, bCampaign, fmt.Sprintf("%s*%s", cellName(bPerBatch, row), cellName(bTimes, row)), campaign.InexactFloat64(), st.money)
 		lay.add(sheetBudget, cellName(bCampaign, row), campaign, "line")
 		if l.Band != "" {
@@ -222,31 +235,58 @@ func budgetLedger(g *grid, st *styles, r *scale.Report, m money, lay *layout) {
 	}
 }
 
-// budgetCampaigns writes, below the ledger, every method's campaign, the
-// paybacks and the map of the cheapest method over batch mass and number
-// of batches; it returns the rows of the payback table for the chart.
-func budgetCampaigns(g *grid, st *styles, r *scale.Report, row int) (first, last int, methods []string) {
+// Columns of the table of every method's campaign (campaignTable).
+const (
+	cMethod     = 1
+	cBatches    = 2
+	cProduct    = 3 // purified product of one batch, kg
+	cPerBatch   = 4
+	cOneTime    = 5
+	cTotal      = 6
+	cPerGram    = 7
+	cDays       = 8
+	cPersonDays = 9
+	cHours      = 10
+)
+
+// campaignRows are the rows of the table of every method's campaign that
+// hold the feasible methods, in the order of scale.CampaignReport.Costs;
+// the Summary's recommendation refers to them. last < first when no
+// method is feasible.
+func campaignRows(r *scale.Report) (first, last int) {
+	first = bLedgerHead + len(r.Budget.Cost.Ledger.Lines) + 5 // two blank rows, the heading, the header
+	return first, first + len(r.Campaign.Costs) - 1
+}
+
+// campaignTable writes, below the ledger, the table of every method's
+// campaign: its figures that are not money (batches, product, days,
+// hours) and the methods not feasible; campaignMoney writes the money
+// columns. It returns the last row written.
+func campaignTable(g *grid, st *styles, r *scale.Report) int {
 	c := r.Campaign
-	g.set(row, 1, cell{value: "The campaign by each method", style: st.heading, spill: true})
-	row++
-	for k, h := range []string{"Method", "Batches", "Per batch", "One-time", "Campaign", "Per gram", "Working days", "Person-days", "Equipment hours"} {
+	first, _ := campaignRows(r)
+	g.set(first-2, 1, cell{value: "The campaign by each method", style: st.heading, spill: true})
+	for k, h := range []string{"Method", "Batches", "Product per batch, kg", "Per batch", "One-time", "Campaign", "Per gram", "Working days", "Person-days", "Equipment hours"} {
 		style := st.headerRight
 		if k == 0 {
 			style = st.header
 		}
-		g.text(row, k+1, h, style)
+		g.text(first-1, k+1, h, style)
 	}
+	row := first - 1
 	for _, k := range c.Costs {
 		row++
-		g.text(row, 1, capitalize(k.Method), st.text)
-		g.num(row, 2, float64(k.Batches), st.general)
-		g.num(row, 3, k.PerBatch.InexactFloat64(), st.money)
-		g.num(row, 4, k.OneTime.InexactFloat64(), st.money)
-		g.num(row, 5, k.Total.InexactFloat64(), st.money)
-		g.num(row, 6, k.PerGram, st.perGram)
-		g.num(row, 7, k.WorkingDays, st.hours)
-		g.num(row, 8, k.PersonDays, st.hours)
-		g.num(row, 9, k.OccupiedH, st.hours)
+		g.text(row, cMethod, capitalize(k.Method), st.text)
+		if k.Method == r.Budget.Method || c.Spec.Batches > 0 {
+			// The budget's number of batches, which a reader may edit.
+			g.formula(row, cBatches, fmt.Sprintf("$B$%d", bBatchesRow), float64(k.Batches), st.general)
+		} else {
+			g.num(row, cBatches, float64(k.Batches), st.general)
+		}
+		g.num(row, cProduct, k.ProductKg/float64(k.Batches), st.kgFine)
+		g.num(row, cDays, k.WorkingDays, st.hours)
+		g.num(row, cPersonDays, k.PersonDays, st.hours)
+		g.num(row, cHours, k.OccupiedH, st.hours)
 	}
 	var infeasible []string
 	for name := range c.Infeasible {
@@ -257,10 +297,153 @@ func budgetCampaigns(g *grid, st *styles, r *scale.Report, row int) (first, last
 		why := c.Infeasible[name]
 		row++
 		g.text(row, 1, capitalize(name), st.text)
-		mergedCell(g, row, 2, 9, cell{value: notFeasible(why), style: st.wrap, wrap: true})
+		mergedCell(g, row, 2, cHours, cell{value: notFeasible(why), style: st.wrap, wrap: true})
 	}
-	mp := c.Map
-	row += 2
+	return row
+}
+
+// campaignMoney writes the money columns of the table of every method's
+// campaign as formulas on the ledger lines the campaign is priced from,
+// cached at the campaign's figures (scale.CampaignReport):
+//
+//	per batch = the batch's lines less its one-time lines
+//	campaign  = batches × per batch + one-time + capital
+//	per gram  = campaign / (batches × product per batch in g)
+//
+// The lines are the Budget ledger's for the budget's method; a method
+// sheet's ledger where it is the campaign's line for line (same prices,
+// price bands and amounts, no equipment bought); else a ledger of the
+// campaign written from row top. One-time lines and capital are charged
+// once.
+func campaignMoney(g *grid, st *styles, r *scale.Report, m money, outs []methodOut, lay *layout, top int) {
+	c := r.Campaign
+	first, _ := campaignRows(r)
+	for k, cost := range c.Costs {
+		row := first + k
+		src, capital := campaignSource{}, ""
+		switch {
+		case cost.Method == r.Budget.Method:
+			src = blockSource(bLedgerHead, len(cost.Ledger.Lines))
+			capital = absName(2, bHeadRow)
+		default:
+			var ok bool
+			if src, ok = sheetSource(r, outs, cost); !ok {
+				g.set(top, 1, cell{value: "Ledger of one batch of " + cost.Method + " at the campaign's price bands", style: st.heading, spill: true})
+				items := c.Capital[cost.Method]
+				ledgerBlock(g, st, r, m, lay, top+1, cost.Ledger.Lines, items, absName(cBatches, row), cost.Batches)
+				src = blockSource(top+1, len(cost.Ledger.Lines))
+				top += len(cost.Ledger.Lines) + 3
+			}
+			capital = capitalSum(r, c.Capital[cost.Method])
+		}
+		src.write(g, st, lay, row, cost, capital)
+	}
+}
+
+// campaignSource holds the formulas of one method's campaign row: its
+// recurring cost of one batch and its one-time cost ("" when the ledger
+// has no one-time line).
+type campaignSource struct {
+	perBatch, oneTime string
+}
+
+// blockSource sums a ledger block on the Budget sheet (header at head, n
+// lines) by heading.
+func blockSource(head, n int) campaignSource {
+	h := absName(bHeading, head+1) + ":" + absName(bHeading, head+max(n, 1))
+	a := absName(bPerBatch, head+1) + ":" + absName(bPerBatch, head+max(n, 1))
+	return campaignSource{
+		perBatch: fmt.Sprintf(`SUMIF(%s,"<>%s",%s)`, h, onetimeHeading, a),
+		oneTime:  fmt.Sprintf(`SUMIF(%s,"%s",%s)`, h, onetimeHeading, a),
+	}
+}
+
+// onetimeHeading is the budget heading of one-time lines.
+var onetimeHeading = headingOf(usage.OneTime)
+
+// sheetSource refers to the method sheet's TOTAL and one-time subtotal at
+// the campaign's batch mass when that ledger is the campaign's, line for
+// line; ok is false otherwise (or without method sheets).
+func sheetSource(r *scale.Report, outs []methodOut, cost campaign.Cost) (campaignSource, bool) {
+	if len(r.Campaign.Capital[cost.Method]) > 0 {
+		return campaignSource{}, false // items bought are charged at their hourly rate only
+	}
+	for j, meth := range r.Methods {
+		if meth != cost.Method || j >= len(outs) {
+			continue
+		}
+		for i, kg := range r.MassesKg {
+			if !sameMass(kg, cost.BatchKg) || i >= len(outs[j].mass) || outs[j].mass[i].totalRef == "" || !samePriced(&r.Results[i][j].Ledger, &cost.Ledger) {
+				continue
+			}
+			mc := outs[j].mass[i]
+			src := campaignSource{perBatch: sheetRef(outs[j].sheet, mc.totalRef)}
+			if mc.oneTimeRef != "" {
+				src.oneTime = sheetRef(outs[j].sheet, mc.oneTimeRef)
+				src.perBatch += "-" + src.oneTime
+			}
+			return src, true
+		}
+	}
+	return campaignSource{}, false
+}
+
+// samePriced reports whether two ledgers have the same lines (sameLines)
+// at the same quantities, unit prices and amounts.
+func samePriced(a, b *ledger.Ledger) bool {
+	if !sameLines(a, b) || !a.Total.Equal(b.Total) {
+		return false
+	}
+	for k := range a.Lines {
+		x, y := &a.Lines[k], &b.Lines[k]
+		if !x.Qty.Equal(y.Qty) || !x.UnitPrice.Equal(y.UnitPrice) || !x.Amount.Equal(y.Amount) {
+			return false
+		}
+	}
+	return true
+}
+
+// capitalSum is the formula of the purchase prices of the equipment a
+// campaign buys, on the Equipment sheet; "" when it buys none.
+func capitalSum(r *scale.Report, items []scale.CapitalItem) string {
+	if len(items) == 0 || r.Equipment == nil {
+		return ""
+	}
+	refs := make([]string, len(items))
+	for i, c := range items {
+		refs[i] = eqRef(eqPrice, c.Row)
+	}
+	return "SUM(" + strings.Join(refs, ",") + ")"
+}
+
+// write writes the money cells of a method's campaign row, capital the
+// formula of its capital ("" for none).
+func (src campaignSource) write(g *grid, st *styles, lay *layout, row int, cost campaign.Cost, capital string) {
+	g.formula(row, cPerBatch, src.perBatch, cost.PerBatch.InexactFloat64(), st.money)
+	lay.add(sheetBudget, cellName(cPerBatch, row), cost.PerBatch, "campaign")
+	if src.oneTime == "" {
+		g.num(row, cOneTime, 0, st.money) // no one-time line
+	} else {
+		g.formula(row, cOneTime, src.oneTime, cost.OneTime.InexactFloat64(), st.money)
+		lay.add(sheetBudget, cellName(cOneTime, row), cost.OneTime, "campaign")
+	}
+	total := fmt.Sprintf("%s*%s+%s", cellName(cBatches, row), cellName(cPerBatch, row), cellName(cOneTime, row))
+	if capital != "" {
+		total += "+" + capital
+	}
+	g.formula(row, cTotal, total, cost.Total.InexactFloat64(), st.money)
+	lay.add(sheetBudget, cellName(cTotal, row), cost.Total, "campaign")
+	pg := fmt.Sprintf("%s/(%s*%s*1000)", cellName(cTotal, row), cellName(cBatches, row), cellName(cProduct, row))
+	g.formula(row, cPerGram, pg, cost.PerGram, st.perGram)
+}
+
+// campaignMapAndPayback writes, from row, the map of the cheapest method
+// over batch mass and number of batches and the paybacks; it returns the
+// rows of the payback table for the chart, the methods it shows and the
+// last row written.
+func campaignMapAndPayback(g *grid, st *styles, r *scale.Report, row int) (first, last int, methods []string, end int) {
+	mp := r.Campaign.Map
+	row++
 	g.set(row, 1, cell{value: "Cheapest method per gram over a campaign: crude per batch (rows) × number of batches (columns)", style: st.heading, spill: true})
 	row++
 	g.text(row, 1, "Crude per batch, g", st.header)
@@ -287,7 +470,7 @@ func budgetCampaigns(g *grid, st *styles, r *scale.Report, row int) (first, last
 	}
 	sort.Strings(methods)
 	if len(methods) == 0 {
-		return 0, 0, nil
+		return 0, 0, nil, row
 	}
 	row += 2
 	g.set(row, 1, cell{value: "Batches after which developing the method pays back against chromatography", style: st.heading, spill: true})
@@ -307,7 +490,7 @@ func budgetCampaigns(g *grid, st *styles, r *scale.Report, row int) (first, last
 		}
 	}
 	g.set(row+1, 1, cell{value: "Above the curve (more batches than shown at that batch mass) the developed method is cheaper per gram over the campaign; below it, columns are. An empty cell: it never pays back at that batch mass (or cannot run there).", style: st.note, spill: true})
-	return first, row, methods
+	return first, row, methods, row + 1
 }
 
 // paybackChart is the payback table drawn: batches to pay back against

@@ -3,9 +3,11 @@ package workbook
 import (
 	"bytes"
 	"context"
+	"math"
 	"os"
 	"os/exec"
 	"path/filepath"
+	"strconv"
 	"strings"
 	"testing"
 	"time"
@@ -200,5 +202,83 @@ func check(t *testing.T, f *excelize.File, ref string, want decimal.Decimal, wha
 	}
 	if !sameToTheCent(strings.TrimSpace(got), want, 2) {
 		t.Errorf("Budget!%s (%s): LibreOffice %q, want %s", ref, what, got, want.StringFixed(2))
+	}
+}
+
+// bandsDemoReport is the demo costed at 20 g with a campaign of 20
+// batches: chromatography's campaign buys about 20 × 13 L of n-heptane,
+// which the example prices put in the 200 L drum band, while one batch
+// buys it at the small-purchase price; so its campaign ledger is not the
+// one on its method sheet.
+func bandsDemoReport(t *testing.T) *scale.Report {
+	return demoReportEdited(t, templates.Scenario, "built-in demo scenario", func(sc *scenario.Scenario) {
+		sc.TargetKg = 0.02
+		sc.Campaign.Batches, sc.Campaign.ProductKg = 20, 0
+	})
+}
+
+// Every method's campaign row on the Budget sheet holds formulas whose
+// cached values are the campaign report's figures, and excelize's own
+// formula engine gives the same figures to the cent. A row refers to a
+// method sheet only where that sheet's ledger at the campaign's batch mass
+// is the campaign's, line for line; else to a ledger on the Budget sheet.
+func TestCampaignRowsAreFormulas(t *testing.T) {
+	t.Parallel()
+	// At 20 g × 5 batches chromatography is the budget's method and
+	// crystallization's row refers to its method sheet, one-time subtotal
+	// included.
+	five := demoReportEdited(t, templates.Scenario, "built-in demo scenario", func(sc *scenario.Scenario) {
+		sc.TargetKg = 0.02
+		sc.Campaign.Batches, sc.Campaign.ProductKg = 5, 0
+	})
+	if five.Budget.Method != "chromatography" {
+		t.Fatalf("at 20 g × 5 batches the budget is for %s; the case wants chromatography", five.Budget.Method)
+	}
+	for name, r := range map[string]*scale.Report{"demo": demoReport(t), "demo at 20 g, 20 batches": bandsDemoReport(t), "demo at 20 g, 5 batches": five} {
+		t.Run(name, func(t *testing.T) {
+			b, _ := render(t, r, Options{})
+			f := open(t, b)
+			first, _ := campaignRows(r)
+			for k, c := range r.Campaign.Costs {
+				row := first + k
+				one := batchLedger(t, r, c.Method)
+				sheetLedger := samePriced(&one, &c.Ledger) && len(r.Campaign.Capital[c.Method]) == 0 && c.Method != r.Budget.Method
+				for _, x := range []struct {
+					col  int
+					want decimal.Decimal
+				}{{cPerBatch, c.PerBatch}, {cOneTime, c.OneTime}, {cTotal, c.Total}} {
+					ref := cellName(x.col, row)
+					cached, _ := f.GetCellValue(sheetBudget, ref, excelize.Options{RawCellValue: true})
+					if d, err := decimal.NewFromString(cached); err != nil || !d.Equal(x.want) {
+						t.Errorf("%s Budget!%s: cached %q, campaign %s", c.Method, ref, cached, x.want)
+					}
+					fo, _ := f.GetCellFormula(sheetBudget, ref)
+					if fo == "" {
+						if x.col == cOneTime && c.OneTime.IsZero() {
+							continue // no one-time line: a plain zero
+						}
+						t.Errorf("%s Budget!%s: no formula", c.Method, ref)
+						continue
+					}
+					calc, err := f.CalcCellValue(sheetBudget, ref, excelize.Options{RawCellValue: true})
+					if err != nil || !sameToTheCent(calc, x.want, 2) { // Source: EUR has two decimal places (ISO 4217)
+						t.Errorf("%s Budget!%s = %s: CalcCellValue %q (%v), campaign %s", c.Method, ref, fo, calc, err, x.want)
+					}
+					if x.col == cPerBatch && strings.Contains(fo, capitalize(c.Method)+"!") != sheetLedger {
+						t.Errorf("%s Budget!%s = %s: refers to the method sheet %v, want %v", c.Method, ref, fo, !sheetLedger, sheetLedger)
+					}
+				}
+				calc, err := f.CalcCellValue(sheetBudget, cellName(cPerGram, row), excelize.Options{RawCellValue: true})
+				if v, perr := strconv.ParseFloat(calc, 64); err != nil || perr != nil || math.Abs(v/c.PerGram-1) > 1e-12 {
+					t.Errorf("%s per gram: CalcCellValue %q (%v), campaign %v", c.Method, calc, err, c.PerGram)
+				}
+			}
+		})
+	}
+	// The case the second report is for.
+	r := bandsDemoReport(t)
+	c, _ := r.Campaign.Cost("chromatography")
+	if one := batchLedger(t, r, "chromatography"); c.Method == r.Budget.Method || samePriced(&one, &c.Ledger) {
+		t.Errorf("at 20 g × 20 batches chromatography's campaign ledger is its method sheet's, or the budget's: the Budget sheet's own ledger of it is not exercised")
 	}
 }

@@ -39,6 +39,7 @@ type massCells struct {
 	reason            string
 	totalRef          string
 	total             decimal.Decimal
+	oneTimeRef        string // the "Subtotal: one-time" cell; "" when the ledger has no one-time line
 	perGram, recovery numCell
 	elapsed, attended numCell
 	wasteKg, solventL numCell
@@ -372,6 +373,9 @@ func (ms *methodSheet) ledger() error {
 			c := blockCol(i) + 1
 			g.formula(ms.row, c, fmt.Sprintf("SUM(%s:%s)", cellName(c, first), cellName(c, last)), sums[i].InexactFloat64(), st.money)
 			ms.lay.add(ms.name, cellName(c, ms.row), sums[i], "subtotal")
+			if grp == usage.OneTime {
+				ms.out[i].oneTimeRef = cellName(c, ms.row)
+			}
 		}
 		ranges = append(ranges, [2]int{first, last})
 		ms.row++

@@ -264,12 +264,7 @@ func writeRecommendation(g *grid, st *styles, r *scale.Report, m money, row int,
 		g.set(row, 1, cell{value: "No decision was made for this report.", style: st.note, spill: true})
 		return
 	}
-	f := newDecisionFormulas(tab)
-	if d.OnCampaign {
-		// Decided per gram over the campaign (Budget sheet), not on the
-		// batch table below: the figures are written as values.
-		f = decisionFormulas{}
-	}
+	f := newDecisionFormulas(r, tab)
 	label := func(row int, s string) { g.text(row, 1, s, st.bold) }
 	words := func(row, col int, s string) { g.set(row, col, cell{value: s, style: st.textIndent, spill: true}) }
 
@@ -278,7 +273,8 @@ func writeRecommendation(g *grid, st *styles, r *scale.Report, m money, row int,
 	if winner == "" {
 		winner = "none feasible"
 	}
-	f.put(g, row, 2, f.pick(tab.col[smMethod], 1, "none feasible"), capitalize(winner), st.bold)
+	recommended := "B" + fmt.Sprint(row)
+	f.put(g, row, 2, f.pick(f.names, 1, "none feasible"), capitalize(winner), st.bold)
 	words(row, 3, "cheapest per gram of purified product at this mass")
 	row++
 
@@ -304,14 +300,15 @@ func writeRecommendation(g *grid, st *styles, r *scale.Report, m money, row int,
 
 	label(row, "Batch cost")
 	total, hours := nan, nan
+	batchCost := f.batch(f.total, recommended)
 	if w := winnerResult(r, d); w != nil {
 		total = w.Ledger.Total.InexactFloat64()
 		hours, _ = w.Usage.Hours()
-		if f.pg != "" { // a formula, checked by the recalculation tests
+		if batchCost != "" { // a formula, checked by the recalculation tests
 			lay.add(sheetSummary, cellName(2, row), w.Ledger.Total, "batch cost")
 		}
 	}
-	f.put(g, row, 2, f.pick(tab.col[smTotal], 1, ""), total, st.money)
+	f.put(g, row, 2, batchCost, total, st.money)
 	if w := winnerResult(r, d); w == nil && tab.first == 0 && d.Winner != "" {
 		// A sweep whose masses miss the target: the decision was costed
 		// there, but its batch figures are not among the rows.
@@ -322,7 +319,7 @@ func writeRecommendation(g *grid, st *styles, r *scale.Report, m money, row int,
 	row++
 
 	label(row, "Elapsed time")
-	f.put(g, row, 2, f.pick(tab.col[smElapsed], 1, ""), hours, st.hours)
+	f.put(g, row, 2, f.batch(f.elapsed, recommended), hours, st.hours)
 	if tab.first > 0 {
 		g.formula(row, 3, "IF(ISNUMBER(B"+fmt.Sprint(row)+"),B"+fmt.Sprint(row)+"/"+fmt.Sprint(hoursPerDay)+",\"\")", hours/hoursPerDay, st.days)
 	} else if finite(hours) {
@@ -335,7 +332,7 @@ func writeRecommendation(g *grid, st *styles, r *scale.Report, m money, row int,
 	if runner == "" {
 		runner = "none"
 	}
-	f.put(g, row, 2, f.pick(tab.col[smMethod], 2, "none"), capitalize(runner), st.text)
+	f.put(g, row, 2, f.pick(f.names, 2, "none"), capitalize(runner), st.text)
 	f.put(g, row, 3, f.nth(2), d.RunnerPerG, st.perGram)
 	row++
 
@@ -346,7 +343,7 @@ func writeRecommendation(g *grid, st *styles, r *scale.Report, m money, row int,
 	if d.Tie {
 		tie = tieWords
 	}
-	if tab.first > 0 {
+	if f.pg != "" {
 		ref := "B" + fmt.Sprint(row)
 		g.set(row, 3, cell{formula: fmt.Sprintf("IF(ISNUMBER(%s),IF(%s<%g,%q,\"cheaper per gram than the runner-up\"),\"\")",
 			ref, ref, scale.TieMargin, tieWords), value: tie, style: st.textIndent, spill: true})
@@ -373,7 +370,11 @@ func writeRecommendation(g *grid, st *styles, r *scale.Report, m money, row int,
 	if tab.first == 0 {
 		note = "Worked out by the models at the target mass with the prices as read; the Decision sheet explains it."
 	}
-	if d.OnCampaign {
+	switch {
+	case d.OnCampaign && f.pg != "":
+		note = "Decided per gram over the whole campaign, one-time costs and capital charged once: the cells above are formulas on the campaign's costs per gram (Budget sheet) " +
+			"and on the table below, which is for one batch, so an edit on the Prices sheet moves them. The explanation (Decision sheet) was worked out with the prices as read."
+	case d.OnCampaign:
 		note = "Decided per gram over the whole campaign, one-time costs and capital charged once (Budget sheet), with the prices as read; the table below is for one batch."
 	}
 	wrapped(g, st, row, note, lastCol)
@@ -395,18 +396,36 @@ func winnerResult(r *scale.Report, d *scale.Decision) *scale.Result {
 	return nil
 }
 
-// decisionFormulas writes the recommendation's formulas over the target
-// mass's rows of the table: pg is the range of their costs per gram.
+// decisionFormulas writes the recommendation's formulas. pg is the range
+// of the costs per gram the decision is made on and names the methods in
+// the same rows: the target mass's rows of the table below for a decision
+// on one batch, the Budget sheet's campaign rows (campaignRows) for a
+// decision on the campaign; "" when the figures are written as values.
+// total and elapsed are the table's batch cost and elapsed hours at the
+// target mass, in the same rows as pg on one batch; on a campaign they are
+// found by the recommended method's name in tabNames, the table's.
 type decisionFormulas struct {
-	tab summaryTable
-	pg  string
+	pg, names, total, elapsed string
+	tabNames                  string
+	onCampaign                bool
 }
 
-func newDecisionFormulas(tab summaryTable) decisionFormulas {
-	f := decisionFormulas{tab: tab}
+func newDecisionFormulas(r *scale.Report, tab summaryTable) decisionFormulas {
+	f := decisionFormulas{onCampaign: r.Decision != nil && r.Decision.OnCampaign}
 	if tab.first > 0 {
-		c := tab.col[smPerGram]
-		f.pg = absName(c, tab.first) + ":" + absName(c, tab.last)
+		col := func(c int) string { return absName(tab.col[c], tab.first) + ":" + absName(tab.col[c], tab.last) }
+		f.pg, f.names, f.total, f.elapsed = col(smPerGram), col(smMethod), col(smTotal), col(smElapsed)
+	}
+	if !f.onCampaign {
+		return f
+	}
+	f.tabNames, f.pg, f.names = f.names, "", ""
+	if r.Budget == nil || r.Campaign == nil {
+		return f
+	}
+	if first, last := campaignRows(r); last >= first {
+		f.pg = sheetRef(sheetBudget, absName(cPerGram, first)+":"+absName(cPerGram, last))
+		f.names = sheetRef(sheetBudget, absName(cMethod, first)+":"+absName(cMethod, last))
 	}
 	return f
 }
@@ -420,14 +439,29 @@ func (f decisionFormulas) nth(k int) string {
 	return fmt.Sprintf("IF(COUNT(%s)>=%d,SMALL(%s,%d),\"\")", f.pg, k, f.pg, k)
 }
 
-// pick is the cell of column col in the row of the k-th cheapest method,
-// or none: IF(COUNT(pg)>=k,INDEX(col,MATCH(SMALL(pg,k),pg,0)),none).
-func (f decisionFormulas) pick(col, k int, none string) string {
+// pick is the cell of range rng (rows of pg) in the row of the k-th
+// cheapest method, or none:
+// IF(COUNT(pg)>=k,INDEX(rng,MATCH(SMALL(pg,k),pg,0)),none).
+func (f decisionFormulas) pick(rng string, k int, none string) string {
 	if f.pg == "" {
 		return ""
 	}
-	rng := absName(col, f.tab.first) + ":" + absName(col, f.tab.last)
 	return fmt.Sprintf("IF(COUNT(%s)>=%d,INDEX(%s,MATCH(SMALL(%s,%d),%s,0)),%q)", f.pg, k, rng, f.pg, k, f.pg, none)
+}
+
+// batch is the recommended method's cell of rng, a column of the table's
+// target-mass rows: on one batch the cheapest's (pick); on a campaign the
+// row whose method is named in the cell recommended,
+// IF(ISNUMBER(MATCH(rec,names,0)),INDEX(rng,MATCH(rec,names,0)),"").
+func (f decisionFormulas) batch(rng, recommended string) string {
+	if !f.onCampaign {
+		return f.pick(rng, 1, "")
+	}
+	if f.pg == "" || f.tabNames == "" {
+		return ""
+	}
+	at := fmt.Sprintf("MATCH(%s,%s,0)", recommended, f.tabNames)
+	return fmt.Sprintf("IF(ISNUMBER(%s),INDEX(%s,%s),\"\")", at, rng, at)
 }
 
 // margin is (second − first) / second of the costs per gram.

@@ -367,7 +367,10 @@ func TestLibreOfficeRecalculation(t *testing.T) {
 		// (many masses) totals that are sums of ROUND terms on the prices.
 		"sweep": sweepReport(), "sweep-many": syntheticSweep(40, 2),
 		// A sweep of the demo across price bands.
-		"demo-sweep": demoSweepReport(t)}
+		"demo-sweep": demoSweepReport(t),
+		// A campaign priced at other bands than one batch: a ledger of
+		// it on the Budget sheet.
+		"demo-campaign-bands": bandsDemoReport(t)}
 	type written struct {
 		cached []byte
 		lay    *layout

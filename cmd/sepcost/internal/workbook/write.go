@@ -212,7 +212,7 @@ func build(r *scale.Report, opt Options, record bool) (*excelize.File, *layout, 
 	grids = append(grids, summary, decision, inputs, prices, waste)
 	if r.Budget != nil && r.Campaign != nil {
 		budget := newGrid(sheetBudget)
-		buildBudget(budget, st, r, m, lay)
+		buildBudget(budget, st, r, m, methods, lay)
 		grids = append(grids, budget)
 		if r.Equipment != nil {
 			eq := newGrid(sheetEquipment)
