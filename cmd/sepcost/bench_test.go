@@ -36,8 +36,8 @@ func BenchmarkDemoWorkbook(b *testing.B) {
 // millisecond) while the command runs in this process, what the sweep and
 // its writer hold without the runtime's own overhead; and peak-RSS-MB,
 // the peak resident set of the same command run alone in a child process
-// (ru_maxrss, unix only), runtime, garbage not yet returned and the test
-// binary included. Run with -benchtime 1x.
+// (its VmHWM, Linux only), runtime, garbage not yet returned to the system
+// and the test binary included. Run with -benchtime 1x.
 func BenchmarkSweepMemory(b *testing.B) {
 	dir := b.TempDir()
 	sc, pr := filepath.Join(dir, "scenario.yaml"), filepath.Join(dir, "prices.csv")
@@ -81,15 +81,25 @@ const (
 )
 
 // TestMemoryChild is the child process of BenchmarkSweepMemory's peak
-// resident set (peakRSS): it runs the command its environment names and
-// exits with the command's status. Without that environment it does
-// nothing.
+// resident set (peakRSS): it runs the command its environment names,
+// prints its own peak resident set and exits. Without that environment it
+// does nothing.
 func TestMemoryChild(t *testing.T) {
 	args := os.Getenv(memoryArgsEnv)
 	if args == "" {
 		t.Skip("run by BenchmarkSweepMemory only")
 	}
-	os.Exit(mainWith(strings.Split(args, memoryArgsSep)))
+	if err := run(context.Background(), strings.Split(args, memoryArgsSep), io.Discard, io.Discard); err != nil {
+		fmt.Println(err)
+		os.Exit(1)
+	}
+	line, err := ownPeakRSS()
+	if err != nil {
+		fmt.Println(err)
+		os.Exit(1)
+	}
+	fmt.Println(line)
+	os.Exit(0)
 }
 
 // samplePeakHeap samples the bytes in heap objects every millisecond until
