@@ -51,4 +51,13 @@ func Cheapest(results []Result) int {
 
 // CheapestAt returns the method column that is cheapest per gram at mass
 // index i of the report, or −1 when no method is feasible there.
-func (r *Report) CheapestAt(i int) int { return Cheapest(r.Results[i]) }
+func (r *Report) CheapestAt(i int) int {
+	if r.Results != nil {
+		return Cheapest(r.Results[i])
+	}
+	perG := make([]float64, len(r.Methods))
+	for j := range perG {
+		perG[j] = r.RowAt(i, j).PerGram
+	}
+	return cheapest(perG)
+}

@@ -20,6 +20,10 @@ type Options struct {
 	// non-zero TargetKg comes from, e.g. "--target".
 	TargetKg  float64
 	TargetWhy string
+	// Hold is the most batch masses whose full results the report holds
+	// (Report.Results); 0 takes HeldMasses. Beyond it the report keeps
+	// Rows and recomputes full results for its writers.
+	Hold int
 }
 
 // DefaultOptions: 400 draws put the P10 and P90 within a few per cent of
@@ -40,7 +44,11 @@ func EstimateWith(p *costing.Plan, t *prices.Table, massesKg []float64, opt Opti
 	if err != nil {
 		return nil, err
 	}
-	res, err := p.Run(massesKg, t)
+	hold := opt.Hold
+	if hold <= 0 {
+		hold = HeldMasses
+	}
+	c, err := collect(p, t, massesKg, p.MethodNames(), hold)
 	if err != nil {
 		return nil, err
 	}
@@ -52,7 +60,9 @@ func EstimateWith(p *costing.Plan, t *prices.Table, massesKg []float64, opt Opti
 		Prices:       t,
 		MassesKg:     massesKg,
 		Methods:      p.MethodNames(),
-		Results:      res,
+		Results:      c.results,
+		rows:         c.rows,
+		plan:         p,
 		Coefficients: p.Coefficients(),
 		Cautions:     p.Cautions(),
 		Equipment:    p.Equipment,
@@ -66,8 +76,8 @@ func EstimateWith(p *costing.Plan, t *prices.Table, massesKg []float64, opt Opti
 	if opt.TargetKg > 0 {
 		r.TargetKg, r.TargetWhy = opt.TargetKg, opt.TargetWhy
 	}
-	r.Waste = wasteRows(p, massesKg, r.Methods, res)
-	r.Warnings = collectWarnings(r.Methods, massesKg, res)
+	r.Waste = c.waste
+	r.Warnings = c.warn.list()
 	r.Greenness = greenness(p)
 	r.WasteSector = p.WasteSector.String()
 	r.Coefficients = append(r.Coefficients, waste.Sources()...)
@@ -118,7 +128,7 @@ func EstimateWith(p *costing.Plan, t *prices.Table, massesKg []float64, opt Opti
 	if sc.Notes != "" {
 		r.Notes = append(r.Notes, usage.Note{Level: usage.Info, Text: sc.Notes})
 	}
-	if n := UnusedPrices(t, res); n != nil {
+	if n := unusedNote(t, c.used); n != nil {
 		r.Notes = append(r.Notes, *n)
 	}
 	return r, nil

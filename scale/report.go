@@ -26,9 +26,14 @@ type Report struct {
 	PricesFile   string  // path as given, or "built-in example prices"
 	Inputs       []Input // scenario echo for the Inputs sheet
 	Prices       *prices.Table
-	MassesKg     []float64  // crude masses, ascending
-	Methods      []string   // method names in column order
-	Results      [][]Result // Results[i][j]: mass i, method j
+	MassesKg     []float64 // crude masses, ascending
+	Methods      []string  // method names in column order
+	// Results holds every full result, Results[i][j] (mass i, method j),
+	// when the report has at most Options.Hold masses (HeldMasses by
+	// default); a longer sweep leaves it nil and keeps a compact Row per
+	// mass and method instead. Writers read results through At, Walk,
+	// Each, Rows, RowAt and CheapestAt, which serve both.
+	Results      [][]Result
 	Coefficients []source.Coefficient
 	Cautions     []string     // safety cautions that apply to this scenario
 	Notes        []usage.Note // scenario-wide notes and warnings
@@ -47,4 +52,7 @@ type Report struct {
 	Campaign     *CampaignReport  // the scenario's campaign (nil when it describes none)
 	Budget       *Budget          // the request for the campaign's chosen method (nil without a campaign)
 	Equipment    *equipment.Table // the site equipment table the models chose from
+
+	rows []Row         // every mass and method, mass-major, when Results is nil
+	plan *costing.Plan // recomputes the results not held (At, Walk)
 }

@@ -22,11 +22,13 @@ func SweepWith(p *costing.Plan, t *prices.Table, masses []float64, opt Options) 
 	}
 	r.IsSweep = true
 	grid := make([][]point, len(masses))
-	for i := range masses {
-		grid[i] = make([]point, len(r.Methods))
-		for j := range r.Methods {
-			grid[i][j] = pointOf(r.Results[i][j])
+	nm := len(r.Methods)
+	for k, row := range r.Rows() {
+		if grid[k/nm] == nil {
+			grid[k/nm] = make([]point, nm)
 		}
+		// pointOf's fields, from the row (the same Result's).
+		grid[k/nm][k%nm] = point{perG: row.PerGram, equipment: row.Equipment, reason: row.Reason}
 	}
 	eval := planEval(p, t)
 	if r.Crossovers, err = findDecisionCrossovers(r.Methods, masses, grid, eval); err != nil {

@@ -15,6 +15,12 @@ import (
 // the solvent table does not know) shows here instead of going unnoticed.
 func UnusedPrices(t *prices.Table, res [][]Result) *usage.Note {
 	used := make([]bool, len(t.Items))
+	markUsed(used, res)
+	return unusedNote(t, used)
+}
+
+// markUsed marks the price rows the ledgers of res use.
+func markUsed(used []bool, res [][]Result) {
 	for _, row := range res {
 		for _, r := range row {
 			for _, l := range r.Ledger.Lines {
@@ -24,6 +30,10 @@ func UnusedPrices(t *prices.Table, res [][]Result) *usage.Note {
 			}
 		}
 	}
+}
+
+// unusedNote is UnusedPrices's note on the price rows marked used.
+func unusedNote(t *prices.Table, used []bool) *usage.Note {
 	// A price band of an item counts as used when any band of it is: the
 	// campaign's purchase picks one band, the others are not mistakes.
 	usedName := map[string]bool{}

@@ -3,6 +3,7 @@ package scale
 import (
 	"fmt"
 	"regexp"
+	"sort"
 
 	"sepcost/costing/units"
 	"sepcost/costing/usage"
@@ -26,27 +27,61 @@ var figures = regexp.MustCompile(`[0-9][0-9.,]*(e[+-]?[0-9]+)?( ?(mg|kg|g)\b)?`)
 // method order, then by first mass, so that no writer has to look inside
 // the results to show them.
 func collectWarnings(methods []string, masses []float64, res [][]Result) []Warning {
-	type key struct {
-		method int
-		text   string
+	var s warningSet
+	s.add(methods, masses, res)
+	return s.list()
+}
+
+// warningSet gathers warnings chunk by chunk of masses (add, in ascending
+// order of mass), for list to give in collectWarnings's order.
+type warningSet struct {
+	at  map[warningKey]int
+	out []Warning
+	col []int // out[k]'s method column
+}
+
+type warningKey struct {
+	method int
+	text   string // with its figures masked
+}
+
+// add gathers the notes of the results at masses, which follow every
+// mass added before.
+func (s *warningSet) add(methods []string, masses []float64, res [][]Result) {
+	if s.at == nil {
+		s.at = map[warningKey]int{}
 	}
-	at := map[key]int{}
-	var out []Warning
-	for j, name := range methods {
-		for i, m := range masses {
+	for i, m := range masses {
+		for j, name := range methods {
 			for _, n := range res[i][j].Usage.Notes {
 				if n.Level == usage.Info {
 					continue
 				}
-				k := key{j, figures.ReplaceAllString(n.Text, "#")}
-				if w, ok := at[k]; ok {
-					out[w].MassesKg = append(out[w].MassesKg, m)
+				k := warningKey{j, figures.ReplaceAllString(n.Text, "#")}
+				if w, ok := s.at[k]; ok {
+					s.out[w].MassesKg = append(s.out[w].MassesKg, m)
 					continue
 				}
-				at[k] = len(out)
-				out = append(out, Warning{Method: name, Level: n.Level, Text: n.Text, MassesKg: []float64{m}})
+				s.at[k] = len(s.out)
+				s.out = append(s.out, Warning{Method: name, Level: n.Level, Text: n.Text, MassesKg: []float64{m}})
+				s.col = append(s.col, j)
 			}
 		}
+	}
+}
+
+// list is the warnings in method order, then by first mass and order of
+// raising: within a method they were found in that order, so a stable
+// sort on the method keeps it.
+func (s *warningSet) list() []Warning {
+	idx := make([]int, len(s.out))
+	for k := range idx {
+		idx[k] = k
+	}
+	sort.SliceStable(idx, func(a, b int) bool { return s.col[idx[a]] < s.col[idx[b]] })
+	var out []Warning
+	for _, k := range idx {
+		out = append(out, s.out[k])
 	}
 	return out
 }

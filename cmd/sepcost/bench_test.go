@@ -9,6 +9,7 @@ import (
 	"runtime"
 	"runtime/metrics"
 	"strconv"
+	"strings"
 	"testing"
 	"time"
 
@@ -29,10 +30,14 @@ func BenchmarkDemoWorkbook(b *testing.B) {
 }
 
 // BenchmarkSweepMemory: `sepcost sweep` of the demo over 1,000 and 10,000
-// masses into a file of each format, reporting the peak of the heap's
-// objects (live and not yet collected, runtime/metrics sampled every
-// millisecond) as peak-heap-MB: the memory the sweep and its writer hold,
-// without the runtime's own overhead. Run with -benchtime 1x.
+// masses (default draws) into a file of each format, reporting two
+// measures of its peak memory: peak-heap-MB, the largest bytes in heap
+// objects (live and not yet collected; runtime/metrics sampled every
+// millisecond) while the command runs in this process, what the sweep and
+// its writer hold without the runtime's own overhead; and peak-RSS-MB,
+// the peak resident set of the same command run alone in a child process
+// (its VmHWM, Linux only), runtime, garbage not yet returned to the system
+// and the test binary included. Run with -benchtime 1x.
 func BenchmarkSweepMemory(b *testing.B) {
 	dir := b.TempDir()
 	sc, pr := filepath.Join(dir, "scenario.yaml"), filepath.Join(dir, "prices.csv")
@@ -57,9 +62,44 @@ func BenchmarkSweepMemory(b *testing.B) {
 					peak = max(peak, stop())
 				}
 				b.ReportMetric(peak/1e6, "peak-heap-MB")
+				b.StopTimer()
+				if rss, err := peakRSS(args); err != nil {
+					b.Log(err)
+				} else {
+					b.ReportMetric(rss/1e6, "peak-RSS-MB")
+				}
 			})
 		}
 	}
+}
+
+// memoryArgsEnv carries the arguments of the command TestMemoryChild
+// runs, joined by memoryArgsSep.
+const (
+	memoryArgsEnv = "SEPCOST_MEMORY_ARGS"
+	memoryArgsSep = "\x1f"
+)
+
+// TestMemoryChild is the child process of BenchmarkSweepMemory's peak
+// resident set (peakRSS): it runs the command its environment names,
+// prints its own peak resident set and exits. Without that environment it
+// does nothing.
+func TestMemoryChild(t *testing.T) {
+	args := os.Getenv(memoryArgsEnv)
+	if args == "" {
+		t.Skip("run by BenchmarkSweepMemory only")
+	}
+	if err := run(context.Background(), strings.Split(args, memoryArgsSep), io.Discard, io.Discard); err != nil {
+		fmt.Println(err)
+		os.Exit(1)
+	}
+	line, err := ownPeakRSS()
+	if err != nil {
+		fmt.Println(err)
+		os.Exit(1)
+	}
+	fmt.Println(line)
+	os.Exit(0)
 }
 
 // samplePeakHeap samples the bytes in heap objects every millisecond until

@@ -24,9 +24,10 @@ func CSV(w io.Writer, r *scale.Report) error {
 	if err := cw.Write(header); err != nil {
 		return err
 	}
-	for i, m := range r.MassesKg {
+	err := r.Each(func(i int, results []scale.Result) error {
+		m := r.MassesKg[i]
 		for j, name := range r.Methods {
-			res := r.Results[i][j]
+			res := results[j]
 			mass := strconv.FormatFloat(m, 'g', -1, 64)
 			for _, l := range res.Ledger.Lines {
 				row := []string{mass, Safe(name), Safe(string(l.Demand.Group)), Safe(l.Demand.Item), Safe(l.Demand.Label),
@@ -40,6 +41,10 @@ func CSV(w io.Writer, r *scale.Report) error {
 				return err
 			}
 		}
+		return nil
+	})
+	if err != nil {
+		return err
 	}
 	for _, row := range budgetCSV(r) {
 		if err := cw.Write(row); err != nil {

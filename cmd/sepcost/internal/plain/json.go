@@ -253,19 +253,26 @@ func JSON(w io.Writer, r *scale.Report) error {
 		out.Warnings = append(out.Warnings, jsonWarning{w.Method, string(w.Level), w.Text, w.MassesKg})
 	}
 	out.Campaign, out.Budget = campaignJSON(r)
-	return streamJSON(w, out, len(r.MassesKg), func(i int) jsonBatch { return batchJSON(r, i) })
+	walk := r.Walk()
+	return streamJSON(w, out, len(r.MassesKg), func(i int) (jsonBatch, error) { return batchJSON(r, walk, i) })
 }
 
-// batchJSON is the report's batch i.
-func batchJSON(r *scale.Report, i int) jsonBatch {
+// batchJSON is the report's batch i, its results read by walk (in
+// ascending order, so that those a long sweep does not hold are
+// recomputed once each).
+func batchJSON(r *scale.Report, walk *scale.Walker, i int) (jsonBatch, error) {
 	b := jsonBatch{CrudeKg: r.MassesKg[i]}
 	if k := r.CheapestAt(i); k >= 0 {
 		b.Cheapest = r.Methods[k]
 	}
-	for j, name := range r.Methods {
-		b.Methods = append(b.Methods, jsonResult(name, r.Results[i][j]))
+	results, err := walk.At(i)
+	if err != nil {
+		return b, err
 	}
-	return b
+	for j, name := range r.Methods {
+		b.Methods = append(b.Methods, jsonResult(name, results[j]))
+	}
+	return b, nil
 }
 
 // batchesKey is where the batches go in the indented report: a line of
@@ -277,7 +284,7 @@ const batchesKey = "\n  \"batches\": [],\n"
 // byte for byte, with its n batches made one at a time by batch and
 // written as they are made, so that a sweep of thousands of masses is never
 // held whole as JSON.
-func streamJSON(w io.Writer, out jsonReport, n int, batch func(int) jsonBatch) error {
+func streamJSON(w io.Writer, out jsonReport, n int, batch func(int) (jsonBatch, error)) error {
 	out.Batches = []jsonBatch{}
 	frame, err := json.MarshalIndent(out, "", "  ")
 	if err != nil {
@@ -294,7 +301,11 @@ func streamJSON(w io.Writer, out jsonReport, n int, batch func(int) jsonBatch) e
 	} else {
 		bw.WriteString("\n  \"batches\": [")
 		for i := range n {
-			data, err := json.MarshalIndent(batch(i), "    ", "  ")
+			b, err := batch(i)
+			if err != nil {
+				return err
+			}
+			data, err := json.MarshalIndent(b, "    ", "  ")
 			if err != nil {
 				return err
 			}

@@ -89,8 +89,8 @@ func textDecision(ew *errWriter, r *scale.Report) {
 		}
 		fmt.Fprintf(tw, "  recommended\t%s\n", line)
 		if w := winner(r, d); w != nil {
-			el, _ := w.Usage.Hours()
-			fmt.Fprintf(tw, "  batch cost\t%s; %s elapsed, %s working days of 8 h\n", money(w.Ledger.Total, w.Ledger.Places, cur),
+			el := w.HoursElapsed
+			fmt.Fprintf(tw, "  batch cost\t%s; %s elapsed, %s working days of 8 h\n", money(w.Total, w.Places, cur),
 				units.Readable(el, "h"), units.Sig3(el/hoursPerDay))
 		}
 	}
@@ -131,16 +131,16 @@ func band(r *scale.Report, method string) (scale.Band, bool) {
 	return scale.Band{}, false
 }
 
-// winner is the winner's result at the target mass, nil when the target
+// winner is the winner's row at the target mass, nil when the target
 // mass is not among the report's masses.
-func winner(r *scale.Report, d *scale.Decision) *scale.Result {
+func winner(r *scale.Report, d *scale.Decision) *scale.Row {
 	for i, kg := range r.MassesKg {
 		if diff := kg - d.TargetKg; diff > 1e-9*kg || diff < -1e-9*kg {
 			continue
 		}
 		for j, m := range r.Methods {
-			if m == d.Winner && r.Results[i][j].Usage.Feasible {
-				return &r.Results[i][j]
+			if row := r.RowAt(i, j); m == d.Winner && row.Feasible {
+				return &row
 			}
 		}
 	}
@@ -216,9 +216,10 @@ func crossovers(ew *errWriter, r *scale.Report) {
 // waste, costs by group and the warnings.
 func textDetails(ew *errWriter, r *scale.Report) error {
 	cur := r.Prices.Currency
-	for i, m := range r.MassesKg {
+	return r.Each(func(i int, results []scale.Result) error {
+		m := r.MassesKg[i]
 		for j, name := range r.Methods {
-			res := r.Results[i][j]
+			res := results[j]
 			u := res.Usage
 			ew.printf("\n== %s of crude by %s ==\n", units.FormatMass(m), name)
 			if !u.Feasible {
@@ -255,8 +256,8 @@ func textDetails(ew *errWriter, r *scale.Report) error {
 				}
 			}
 		}
-	}
-	return nil
+		return nil
+	})
 }
 
 // num prints a figure to three significant figures.

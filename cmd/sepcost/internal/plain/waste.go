@@ -34,7 +34,7 @@ func WasteCSV(w io.Writer, r *scale.Report) error {
 	for _, row := range r.Waste {
 		cost := ""
 		if row.HasDisposal {
-			cost = row.Disposal.StringFixed(r.Results[row.Mass][row.Col].Ledger.Places)
+			cost = row.Disposal.StringFixed(r.RowAt(row.Mass, row.Col).Places)
 		}
 		rec := []string{Safe(r.Title), strconv.FormatFloat(row.CrudeKg, 'g', -1, 64), Safe(row.Method), recommended(r, row), Safe(row.Stream.Name),
 			Safe(string(row.Stream.Class)), strconv.FormatFloat(row.Kg, 'f', 4, 64), strconv.FormatFloat(row.Litres, 'f', 4, 64),
@@ -80,7 +80,7 @@ func WasteJSON(w io.Writer, r *scale.Report) error {
 			jr.Components[c.Name] += c.Kg
 		}
 		if row.HasDisposal {
-			jr.Disposal = row.Disposal.StringFixed(r.Results[row.Mass][row.Col].Ledger.Places)
+			jr.Disposal = row.Disposal.StringFixed(r.RowAt(row.Mass, row.Col).Places)
 		}
 		out.Streams = append(out.Streams, jr)
 	}
@@ -101,7 +101,7 @@ func WasteText(w io.Writer, r *scale.Report) error {
 			ew.printf("    - %s\n", rule)
 		}
 		if row.HasDisposal {
-			ew.printf("  disposal: %s %s\n", row.Disposal.StringFixed(r.Results[row.Mass][row.Col].Ledger.Places), r.Prices.Currency)
+			ew.printf("  disposal: %s %s\n", row.Disposal.StringFixed(r.RowAt(row.Mass, row.Col).Places), r.Prices.Currency)
 		}
 	}
 	ew.printf("\n%s\n", waste.Caution)

@@ -71,19 +71,19 @@ var greenMetrics = []greenMetric{
 
 // writeGreenMetrics writes, after the codes, the green metrics of each
 // method at the masses listed (green.Metrics: computed by the costing
-// package, shown here), then what each metric means and its source, and
+// package, shown here; shown[k] holds the results at masses[k]), then what each metric means and its source, and
 // the material inputs that have no mass and so are not counted. row is
 // the next free row; it returns the next free row.
-func writeGreenMetrics(g *grid, st *styles, r *scale.Report, masses []int, row int) int {
+func writeGreenMetrics(g *grid, st *styles, r *scale.Report, masses []int, shown [][]scale.Result, row int) int {
 	g.set(row, 1, cell{value: "Green metrics", style: st.heading, spill: true})
 	row++
-	shown := false
-	for _, i := range masses {
+	some := false
+	for k := range masses {
 		for j := range r.Methods {
-			shown = shown || (r.Results[i][j].Usage.Feasible && r.Results[i][j].Metrics != nil)
+			some = some || (shown[k][j].Usage.Feasible && shown[k][j].Metrics != nil)
 		}
 	}
-	if !shown {
+	if !some {
 		g.set(row, 1, cell{value: "No green metrics were computed for this report.", style: st.note, spill: true})
 		return row + 2
 	}
@@ -94,9 +94,9 @@ func writeGreenMetrics(g *grid, st *styles, r *scale.Report, masses []int, row i
 	}
 	row++
 	var notCounted []string
-	for _, i := range masses {
+	for k, i := range masses {
 		for j, meth := range r.Methods {
-			res := r.Results[i][j]
+			res := shown[k][j]
 			g.text(row, 1, units.FormatMass(r.MassesKg[i]), st.text)
 			g.text(row, 2, capitalize(meth), st.text)
 			switch {

@@ -104,10 +104,14 @@ type methodSheet struct {
 
 func buildMethod(g *grid, st *styles, r *scale.Report, m money, j int, lay *layout) (methodOut, error) {
 	ms := &methodSheet{g: g, st: st, r: r, m: m, j: j, name: g.name, lay: lay}
-	for i := range r.MassesKg {
-		res := r.Results[i][j]
+	err := r.Each(func(_ int, results []scale.Result) error {
+		res := results[j]
 		ms.res = append(ms.res, res)
 		ms.out = append(ms.out, massCells{feasible: res.Usage.Feasible, reason: res.Usage.Reason})
+		return nil
+	})
+	if err != nil {
+		return methodOut{}, err
 	}
 	ms.head()
 	if err := ms.figures(); err != nil {

@@ -95,10 +95,11 @@ func writeScaleUp(f *excelize.File, st *styles, r *scale.Report, m money, method
 	at := func(i, j int) *scale.Row { return &rows[i*nm+j] }
 
 	var qty []*qtyCol
-	var lineCols [][]int // per result (i·nm + j), the quantity column of each ledger line
+	var lineCols [][]int    // per result (i·nm + j), the quantity column of each ledger line
+	var lineQty [][]qtyCell // per result, the quantity of each ledger line as written
 	if !details {
 		var err error
-		if qty, lineCols, err = quantityColumns(r, m); err != nil {
+		if qty, lineCols, lineQty, err = quantityColumns(r, m); err != nil {
 			return err
 		}
 	}
@@ -155,21 +156,20 @@ func writeScaleUp(f *excelize.File, st *styles, r *scale.Report, m money, method
 			}
 			rw.text(suFeasible, "feasible", st.text)
 			total := totals[i*nm+j]
-			res := &r.Results[i][j]
 			switch {
 			case details && methods[j].mass[i].totalRef != "":
 				rw.formula(suTotal, sheetRef(methods[j].sheet, methods[j].mass[i].totalRef), total, st.money)
 				if lay != nil {
 					lay.add(sheetScaleUp, cellName(suTotal, k), row.Total, "scale-up total")
 				}
-			case !details && len(res.Ledger.Lines) > 0:
+			case !details && len(lineCols[i*nm+j]) > 0:
 				cols := lineCols[i*nm+j]
-				rw.formula(suTotal, roundSum(&rw.buf, k, &res.Ledger, cols, qty), total, st.money)
+				rw.formula(suTotal, roundSum(&rw.buf, k, cols, qty), total, st.money)
 				if lay != nil {
 					lay.add(sheetScaleUp, cellName(suTotal, k), row.Total, "scale-up total")
 				}
-				for n := range res.Ledger.Lines {
-					rw.dec(cols[n], res.Ledger.Lines[n].Qty, st.general)
+				for n, q := range lineQty[i*nm+j] {
+					rw.qty(cols[n], q, st.general)
 				}
 			default:
 				rw.num(suTotal, total, st.money, true)
@@ -250,20 +250,24 @@ type lineID struct {
 // quantityColumns gathers the ledger lines of every feasible result, in
 // usage.Groups order and first-seen order within a group, as quantity
 // columns, each with the tail of its ROUND term, and gives for each result
-// (index i·methods + j) the column of each of its ledger lines.
-func quantityColumns(r *scale.Report, m money) ([]*qtyCol, [][]int, error) {
+// (index i·methods + j) the column and the quantity of each of its ledger
+// lines: the rows are written from these numbers, so that a long sweep's
+// results are read once (scale.Report.Each) and not held.
+func quantityColumns(r *scale.Report, m money) ([]*qtyCol, [][]int, [][]qtyCell, error) {
 	nm := len(r.Methods)
 	cols := map[lineID]*qtyCol{}
 	byGroup := map[usage.Group][]*qtyCol{}
 	var order []*qtyCol // first-seen order: a column's provisional index
-	idx := make([][]int, len(r.Results)*nm)
+	idx := make([][]int, len(r.MassesKg)*nm)
+	vals := make([][]qtyCell, len(r.MassesKg)*nm)
 	prev := make([]ledger.Ledger, nm) // each method's last ledger, to share its list
-	for i := range r.Results {
-		for j := range r.Results[i] {
-			res := &r.Results[i][j]
+	err := r.Each(func(i int, results []scale.Result) error {
+		for j := range results {
+			res := &results[j]
 			if !res.Usage.Feasible {
 				continue
 			}
+			vals[i*nm+j] = qtyCells(&res.Ledger)
 			// A method's ledgers mostly bill the same lines at every mass:
 			// the same list of columns then serves them all.
 			if k := (i-1)*nm + j; i > 0 && idx[k] != nil && sameLines(&prev[j], &res.Ledger) {
@@ -295,7 +299,7 @@ func quantityColumns(r *scale.Report, m money) ([]*qtyCol, [][]int, error) {
 					byGroup[l.Demand.Group] = append(byGroup[l.Demand.Group], q)
 				}
 				if q.unit != l.Unit || q.priceRow != l.PriceRow {
-					return nil, nil, fmt.Errorf("workbook: %s at %s: ledger line %q (%s) is priced per %q from price row %d, but elsewhere per %q from row %d",
+					return fmt.Errorf("workbook: %s at %s: ledger line %q (%s) is priced per %q from price row %d, but elsewhere per %q from row %d",
 						r.Methods[j], units.FormatMass(r.MassesKg[i]), l.Demand.Label, l.Demand.Item, l.Unit, l.PriceRow, q.unit, q.priceRow)
 				}
 				list[n] = q.col
@@ -303,6 +307,10 @@ func quantityColumns(r *scale.Report, m money) ([]*qtyCol, [][]int, error) {
 			idx[i*nm+j] = list
 			prev[j] = res.Ledger
 		}
+		return nil
+	})
+	if err != nil {
+		return nil, nil, nil, err
 	}
 	// Columns in usage.Groups order, then first-seen order in a group.
 	var out []*qtyCol
@@ -328,7 +336,7 @@ func quantityColumns(r *scale.Report, m money) ([]*qtyCol, [][]int, error) {
 			list[n] = final[c]
 		}
 	}
-	return out, idx, nil
+	return out, idx, vals, nil
 }
 
 // sameLines reports whether two ledgers bill the same lines (group, item,
@@ -353,11 +361,11 @@ func sameLines(a, b *ledger.Ledger) bool {
 const maxFormula = 8192
 
 // roundSum builds the total of row k from its ledger's lines, whose
-// quantities sit in columns cols:
+// quantities sit in columns cols (one a line):
 // ROUND(N23*Prices!$C$2,2)+ROUND(O23*Prices!$C$5,2)+...
-func roundSum(buf *[]byte, k int, l *ledger.Ledger, cols []int, qty []*qtyCol) string {
+func roundSum(buf *[]byte, k int, cols []int, qty []*qtyCol) string {
 	b := (*buf)[:0]
-	for n := range l.Lines {
+	for n := range cols {
 		q := qty[cols[n]-suFirstQty]
 		if n > 0 {
 			b = append(b, '+')
@@ -416,12 +424,41 @@ func (rw *rowWriter) num(col int, v float64, style int, na bool) {
 // quantities and amounts do: its nearest double already shows those
 // digits, so round15 is skipped.
 func (rw *rowWriter) dec(col int, d decimal.Decimal, style int) {
+	rw.qty(col, qtyCellOf(d), style)
+}
+
+// qtyCell is a ledger decimal as dec writes it: v, exact to its 15
+// significant digits, or (long) a value num writes.
+type qtyCell struct {
+	v    float64
+	long bool
+}
+
+// qtyCellOf is d as dec writes it.
+func qtyCellOf(d decimal.Decimal) qtyCell {
 	x := smallOf(d)
 	if !x.ok || x.c <= -1e15 || x.c >= 1e15 {
-		rw.num(col, d.InexactFloat64(), style, true)
+		return qtyCell{d.InexactFloat64(), true}
+	}
+	return qtyCell{x.float(d), false}
+}
+
+// qtyCells are the quantities of a ledger's lines as dec writes them.
+func qtyCells(l *ledger.Ledger) []qtyCell {
+	out := make([]qtyCell, len(l.Lines))
+	for n := range l.Lines {
+		out[n] = qtyCellOf(l.Lines[n].Qty)
+	}
+	return out
+}
+
+// qty writes a quantity made by qtyCellOf.
+func (rw *rowWriter) qty(col int, q qtyCell, style int) {
+	if q.long {
+		rw.num(col, q.v, style, true)
 		return
 	}
-	rw.put(col, excelize.Cell{StyleID: style, Value: x.float(d)})
+	rw.put(col, excelize.Cell{StyleID: style, Value: q.v})
 }
 
 func (rw *rowWriter) formula(col int, f string, cached float64, style int) {

@@ -302,10 +302,10 @@ func writeRecommendation(g *grid, st *styles, r *scale.Report, m money, row int,
 	total, hours := nan, nan
 	batchCost := f.batch(f.total, recommended)
 	if w := winnerResult(r, d); w != nil {
-		total = w.Ledger.Total.InexactFloat64()
-		hours, _ = w.Usage.Hours()
+		total = w.Total.InexactFloat64()
+		hours = w.HoursElapsed
 		if batchCost != "" { // a formula, checked by the recalculation tests
-			lay.add(sheetSummary, cellName(2, row), w.Ledger.Total, "batch cost")
+			lay.add(sheetSummary, cellName(2, row), w.Total, "batch cost")
 		}
 	}
 	f.put(g, row, 2, batchCost, total, st.money)
@@ -380,16 +380,16 @@ func writeRecommendation(g *grid, st *styles, r *scale.Report, m money, row int,
 	wrapped(g, st, row, note, lastCol)
 }
 
-// winnerResult is the winner's result at the target mass, nil where the
+// winnerResult is the winner's row at the target mass, nil where the
 // target mass is not among the report's masses or nothing is feasible.
-func winnerResult(r *scale.Report, d *scale.Decision) *scale.Result {
+func winnerResult(r *scale.Report, d *scale.Decision) *scale.Row {
 	for i, kg := range r.MassesKg {
 		if !sameMass(kg, d.TargetKg) {
 			continue
 		}
 		for j, meth := range r.Methods {
-			if meth == d.Winner && r.Results[i][j].Usage.Feasible {
-				return &r.Results[i][j]
+			if row := r.RowAt(i, j); meth == d.Winner && row.Feasible {
+				return &row
 			}
 		}
 	}

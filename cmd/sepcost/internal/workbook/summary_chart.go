@@ -64,7 +64,7 @@ func chartData(g *grid, st *styles, r *scale.Report, tab summaryTable, col int) 
 		c := col + 1 + len(b.series)
 		points := 0
 		for i := range r.MassesKg {
-			pg := r.Results[i][j].PerGram()
+			pg := r.PerGramAt(i, j)
 			if !finite(pg) || pg <= 0 {
 				continue
 			}

@@ -83,7 +83,7 @@ const wasteCautionPlain = "Waste codes and the classification of each stream are
 // nearest the target mass in ln m, and a note says so: the sheet is for the
 // EHS office, which plans for the batch that will be run, not for every
 // point of a curve.
-func buildWaste(g *grid, st *styles, r *scale.Report, m money, details bool, lay *layout) {
+func buildWaste(g *grid, st *styles, r *scale.Report, m money, details bool, lay *layout) error {
 	codes := len(r.Waste) > 0
 	head := []string{"Batch mass", "Method", "Stream", "Class", "kg", "L", "Composition", "Disposal cost"}
 	if codes {
@@ -125,15 +125,23 @@ func buildWaste(g *grid, st *styles, r *scale.Report, m money, details bool, lay
 		}
 		note += " The Scale-up sheet gives the total waste, E-factor and PMI at every mass."
 	}
+	shown := make([][]scale.Result, len(masses)) // the full results at the masses listed
+	walk := r.Walk()
+	for k, i := range masses {
+		var err error
+		if shown[k], err = walk.At(i); err != nil {
+			return err
+		}
+	}
 	cls := newClassified(r.Waste)
 	var rules numbered
 	var cautions []string
 	var used []waste.Code
 	seenCode := map[string]bool{}
-	for _, i := range masses {
+	for k, i := range masses {
 		kg := r.MassesKg[i]
 		for j, meth := range r.Methods {
-			res := r.Results[i][j]
+			res := shown[k][j]
 			if !res.Usage.Feasible {
 				g.text(row, wMass, units.FormatMass(kg), st.text)
 				g.text(row, wMethod, capitalize(meth), st.text)
@@ -206,8 +214,9 @@ func buildWaste(g *grid, st *styles, r *scale.Report, m money, details bool, lay
 		row = writeRules(g, st, r, rules, row)
 		row = writeCodes(g, st, used, row)
 	}
-	row = writeGreenMetrics(g, st, r, masses, row)
+	row = writeGreenMetrics(g, st, r, masses, shown, row)
 	writeSolvents(g, st, r, row)
+	return nil
 }
 
 // writeRules writes the rules applied, numbered as the stream rows give

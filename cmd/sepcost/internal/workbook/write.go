@@ -208,7 +208,9 @@ func build(r *scale.Report, opt Options, record bool) (*excelize.File, *layout, 
 	prices := newGrid(sheetPrices)
 	buildPrices(prices, st, r)
 	waste := newGrid(sheetWaste)
-	buildWaste(waste, st, r, m, details, lay)
+	if err := buildWaste(waste, st, r, m, details, lay); err != nil {
+		return nil, nil, err
+	}
 	grids = append(grids, summary, decision, inputs, prices, waste)
 	if r.Budget != nil && r.Campaign != nil {
 		budget := newGrid(sheetBudget)
@@ -266,14 +268,15 @@ func validate(r *scale.Report) (money, error) {
 			r.Prices.File, r.Prices.Currency)
 	}
 	m.currency = r.Prices.Currency
-	if len(r.Results) != len(r.MassesKg) {
+	// Results is nil when a long sweep holds Rows instead (scale.Report).
+	if r.Results != nil && len(r.Results) != len(r.MassesKg) {
 		return m, fmt.Errorf("workbook: the report has results for %d batch masses but lists %d masses", len(r.Results), len(r.MassesKg))
 	}
 	for i, kg := range r.MassesKg {
 		if !finite(kg) || kg <= 0 {
 			return m, fmt.Errorf("workbook: batch mass %d is %v kg; it must be a positive number", i+1, kg)
 		}
-		if len(r.Results[i]) != len(r.Methods) {
+		if r.Results != nil && len(r.Results[i]) != len(r.Methods) {
 			return m, fmt.Errorf("workbook: at %s the report has %d results for %d methods", units.FormatMass(kg), len(r.Results[i]), len(r.Methods))
 		}
 	}
@@ -298,9 +301,12 @@ func validate(r *scale.Report) (money, error) {
 	// priced ledger must agree.
 	placesSet := false
 	checker := ledger.NewChecker(r.Prices)
-	for i := range r.Results {
-		for j := range r.Results[i] {
-			res := &r.Results[i][j]
+	err := r.Each(func(i int, results []scale.Result) error {
+		if len(results) != len(r.Methods) {
+			return fmt.Errorf("workbook: at %s the report has %d results for %d methods", units.FormatMass(r.MassesKg[i]), len(results), len(r.Methods))
+		}
+		for j := range results {
+			res := &results[j]
 			if !res.Usage.Feasible {
 				continue
 			}
@@ -308,24 +314,28 @@ func validate(r *scale.Report) (money, error) {
 			l := &res.Ledger
 			if len(l.Lines) == 0 && l.Currency == "" {
 				if !l.Total.IsZero() {
-					return m, fmt.Errorf("%s: the ledger has no lines but a total of %s", where, l.Total)
+					return fmt.Errorf("%s: the ledger has no lines but a total of %s", where, l.Total)
 				}
 				continue
 			}
 			if l.Currency != r.Prices.Currency {
-				return m, fmt.Errorf("%s: the ledger is in %q but the price table is in %q", where, l.Currency, r.Prices.Currency)
+				return fmt.Errorf("%s: the ledger is in %q but the price table is in %q", where, l.Currency, r.Prices.Currency)
 			}
 			if l.Places < 0 || l.Places > 6 {
-				return m, fmt.Errorf("%s: the ledger rounds to %d places; 0 to 6 are valid", where, l.Places)
+				return fmt.Errorf("%s: the ledger rounds to %d places; 0 to 6 are valid", where, l.Places)
 			}
 			if placesSet && l.Places != m.places {
-				return m, fmt.Errorf("%s: the ledger rounds to %d places but another rounds to %d", where, l.Places, m.places)
+				return fmt.Errorf("%s: the ledger rounds to %d places but another rounds to %d", where, l.Places, m.places)
 			}
 			m.places, placesSet = l.Places, true
 			if err := validateLedger(where, checker, &res.Ledger); err != nil {
-				return m, err
+				return err
 			}
 		}
+		return nil
+	})
+	if err != nil {
+		return m, err
 	}
 	if !placesSet {
 		// No priced result: money appears only as prices. Two places is the
