@@ -373,7 +373,13 @@ func sheetSource(r *scale.Report, outs []methodOut, cost campaign.Cost) (campaig
 			continue
 		}
 		for i, kg := range r.MassesKg {
-			if !sameMass(kg, cost.BatchKg) || i >= len(outs[j].mass) || outs[j].mass[i].totalRef == "" || !samePriced(&r.Results[i][j].Ledger, &cost.Ledger) {
+			if !sameMass(kg, cost.BatchKg) || i >= len(outs[j].mass) || outs[j].mass[i].totalRef == "" {
+				continue
+			}
+			// Method sheets exist only for short sweeps, whose results the
+			// report holds; At recomputes them otherwise.
+			res, err := r.At(i)
+			if err != nil || !samePriced(&res[j].Ledger, &cost.Ledger) {
 				continue
 			}
 			mc := outs[j].mass[i]
