@@ -21,17 +21,26 @@ func SweepWith(p *costing.Plan, t *prices.Table, masses []float64, opt Options) 
 		return nil, err
 	}
 	r.IsSweep = true
-	grid := make([][]point, len(masses))
-	for i := range masses {
-		grid[i] = make([]point, len(r.Methods))
-		for j := range r.Methods {
-			grid[i][j] = pointOf(r.Results[i][j])
-		}
-	}
-	eval := planEval(p, t)
-	if r.Crossovers, err = findDecisionCrossovers(r.Methods, masses, grid, eval); err != nil {
+	grid := gridOf(r)
+	e, err := planEvals(p, t)
+	if err != nil {
 		return nil, err
 	}
-	r.Pairwise, err = findPairwise(r.Methods, masses, grid, eval)
+	if r.Crossovers, err = findDecisionCrossovers(r.Methods, masses, grid, e); err != nil {
+		return nil, err
+	}
+	r.Pairwise, err = findPairwise(r.Methods, masses, grid, e)
 	return r, err
+}
+
+// gridOf is the report's results as the crossover search's points.
+func gridOf(r *Report) [][]point {
+	grid := make([][]point, len(r.MassesKg))
+	for i, m := range r.MassesKg {
+		grid[i] = make([]point, len(r.Methods))
+		for j := range r.Methods {
+			grid[i][j] = pointOf(r.Results[i][j], m)
+		}
+	}
+	return grid
 }
