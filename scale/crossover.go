@@ -114,7 +114,8 @@ func perGrams(ps []point) []float64 {
 type evals struct {
 	lean, full evalFunc // lean may be nil: full alone
 	cache      map[evalKey]point
-	runs       int // model evaluations run, both paths
+	runs       int // model runs, both paths
+	fullRuns   int // of which full
 }
 
 type evalKey struct {
@@ -171,6 +172,7 @@ func (e *evals) upgrade(p *point, j int, exactOnly bool) error {
 		return err
 	}
 	e.runs++
+	e.fullRuns++
 	e.cache[k] = q
 	*p = q
 	return nil
