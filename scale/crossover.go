@@ -3,6 +3,8 @@ package scale
 import (
 	"fmt"
 	"math"
+	"runtime"
+	"sync"
 
 	"sepcost/costing"
 	"sepcost/costing/prices"
@@ -111,8 +113,11 @@ func perGrams(ps []point) []float64 {
 // mass at most once on each path (masses are keyed by their bits: the
 // search computes a mass the same way each time it comes back to it),
 // the lean path first, the full one where a choice or a word needs it.
+// Safe for concurrent use: the searches of separate grid intervals share
+// it (eachInterval).
 type evals struct {
 	lean, full evalFunc // lean may be nil: full alone
+	mu         sync.Mutex
 	cache      map[evalKey]point
 	runs       int // model runs, both paths
 	fullRuns   int // of which full
@@ -139,7 +144,7 @@ func planEvals(p *costing.Plan, t *prices.Table) (*evals, error) {
 // point is method j at m, lean when the search has a lean path.
 func (e *evals) point(j int, m float64) (point, error) {
 	k := evalKey{j, math.Float64bits(m)}
-	if p, ok := e.cache[k]; ok {
+	if p, ok := e.cached(k); ok {
 		return p, nil
 	}
 	run := e.lean
@@ -150,9 +155,26 @@ func (e *evals) point(j int, m float64) (point, error) {
 	if err != nil {
 		return point{}, err
 	}
-	e.runs++
-	e.cache[k] = p
+	e.store(k, p)
 	return p, nil
+}
+
+func (e *evals) cached(k evalKey) (point, bool) {
+	e.mu.Lock()
+	defer e.mu.Unlock()
+	p, ok := e.cache[k]
+	return p, ok
+}
+
+// store keeps a point just run, and counts the run.
+func (e *evals) store(k evalKey, p point) {
+	e.mu.Lock()
+	defer e.mu.Unlock()
+	e.runs++
+	if !p.lean {
+		e.fullRuns++
+	}
+	e.cache[k] = p
 }
 
 // upgrade replaces p, method j's point, when lean, by the full point at
@@ -163,7 +185,7 @@ func (e *evals) upgrade(p *point, j int, exactOnly bool) error {
 		return nil
 	}
 	k := evalKey{j, math.Float64bits(p.kg)}
-	if q, ok := e.cache[k]; ok && !q.lean {
+	if q, ok := e.cached(k); ok && !q.lean {
 		*p = q
 		return nil
 	}
@@ -171,9 +193,7 @@ func (e *evals) upgrade(p *point, j int, exactOnly bool) error {
 	if err != nil {
 		return err
 	}
-	e.runs++
-	e.fullRuns++
-	e.cache[k] = q
+	e.store(k, q)
 	*p = q
 	return nil
 }
@@ -243,8 +263,8 @@ func (s *decisionSearch) atWith(lnm float64, j int, pj point) ([]point, error) {
 // looks on both sides of the step for that. Every choice of the cheapest
 // is the one the reported costs make (evals.cheapest).
 func findDecisionCrossovers(names []string, masses []float64, grid [][]point, e *evals) ([]Crossover, error) {
-	s := &decisionSearch{names: names, e: e}
-	for k := 0; k+1 < len(masses); k++ {
+	return eachInterval(len(masses)-1, func(k int) ([]Crossover, error) {
+		s := &decisionSearch{names: names, e: e}
 		w0, err := e.cheapest(grid[k])
 		if err != nil {
 			return nil, err
@@ -258,11 +278,42 @@ func findDecisionCrossovers(names []string, masses []float64, grid [][]point, e 
 		} else {
 			err = s.bracket(math.Log(masses[k]), math.Log(masses[k+1]), grid[k], grid[k+1])
 		}
-		if err != nil {
-			return nil, err
-		}
+		return s.out, err
+	})
+}
+
+// eachInterval runs search(k) for the grid intervals k = 0 … n−1 on all
+// cores and joins their crossovers in the order of k; the first error in
+// that order is returned. Each interval's search is a pure function of
+// the models at masses inside it (the grid's points are only read), so the
+// result is the same on any number of cores.
+func eachInterval(n int, search func(k int) ([]Crossover, error)) ([]Crossover, error) {
+	outs := make([][]Crossover, max(n, 0))
+	errs := make([]error, len(outs))
+	jobs := make(chan int)
+	var wg sync.WaitGroup
+	for w := 0; w < runtime.GOMAXPROCS(0); w++ {
+		wg.Add(1)
+		go func() {
+			defer wg.Done()
+			for k := range jobs {
+				outs[k], errs[k] = search(k)
+			}
+		}()
 	}
-	return s.out, nil
+	for k := range outs {
+		jobs <- k
+	}
+	close(jobs)
+	wg.Wait()
+	var all []Crossover
+	for k, out := range outs {
+		if errs[k] != nil {
+			return nil, errs[k]
+		}
+		all = append(all, out...)
+	}
+	return all, nil
 }
 
 // bracket narrows [lo, hi] (ln kg), whose cheapest methods differ, to
@@ -425,18 +476,19 @@ func findPairwise(names []string, masses []float64, grid [][]point, e *evals) ([
 	var out []Crossover
 	for a := 0; a < len(names); a++ {
 		for b := a + 1; b < len(names); b++ {
-			for k := 0; k+1 < len(masses); k++ {
+			found, err := eachInterval(len(masses)-1, func(k int) ([]Crossover, error) {
 				d0 := grid[k][a].perG - grid[k][b].perG
 				d1 := grid[k+1][a].perG - grid[k+1][b].perG
 				if math.IsNaN(d0) || math.IsNaN(d1) || d0 == 0 || (d0 > 0) == (d1 > 0) {
-					continue
+					return nil, nil
 				}
 				c, err := bisectPair(names, a, b, masses[k], masses[k+1], grid[k], grid[k+1], e)
-				if err != nil {
-					return nil, err
-				}
-				out = append(out, c)
+				return []Crossover{c}, err
+			})
+			if err != nil {
+				return nil, err
 			}
+			out = append(out, found...)
 		}
 	}
 	return out, nil
