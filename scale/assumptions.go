@@ -211,17 +211,10 @@ func clamp(co source.Coefficient, v float64) float64 {
 
 // runWith runs method j at m with one coefficient set as a user would set
 // it (calibrations rerun); it returns the cost per gram (NaN when not
-// feasible).
+// feasible), the one WithSetting then RunOne report
+// (costing.Plan.PerGramWithSetting: only method j built, quiet).
 func runWith(p *costing.Plan, t *prices.Table, j int, m float64, co source.Coefficient) (float64, error) {
-	q, err := p.WithSetting(co.Key, co.SI)
-	if err != nil {
-		return 0, err
-	}
-	r, err := q.RunOne(j, m, t)
-	if err != nil {
-		return 0, err
-	}
-	return r.PerGram(), nil
+	return p.PerGramWithSetting(co.Key, co.SI, j, m, t)
 }
 
 func unitSuffix(u string) string {
