@@ -104,6 +104,25 @@ func PrepareWith(sc *scenario.Scenario, opt Options) (*Plan, error) {
 	if eq == nil {
 		eq = equipment.Default()
 	}
+	coef, err := settle(sc)
+	if err != nil {
+		return nil, err
+	}
+	p := newPlan(sc, coef, eq, false)
+	if sc.WasteSector.Text != "" {
+		sec, err := waste.ParseSector(sc.WasteSector.Text)
+		if err != nil {
+			return nil, &scenario.Problem{Of: scenario.ErrInvalid, File: sc.File, Line: sc.WasteSector.Line, Field: "waste_sector", Msg: err.Error()}
+		}
+		p.WasteSector = sec
+	}
+	return p, nil
+}
+
+// settle is the coefficients of Prepare: defaults, settings, calibrations,
+// with every problem of the settings named, and the check that the
+// scenario describes a method.
+func settle(sc *scenario.Scenario) (source.Set, error) {
 	defaults := make([][]source.Coefficient, len(Registry))
 	calibrated := map[string]bool{}
 	for i, e := range Registry {
@@ -140,24 +159,16 @@ func PrepareWith(sc *scenario.Scenario, opt Options) (*Plan, error) {
 	}
 	apply(true)
 	if len(problems) > 0 {
-		return nil, problems
+		return source.Set{}, problems
 	}
 	described := false
 	for _, e := range Registry {
 		described = described || e.Described(sc)
 	}
 	if !described {
-		return nil, &scenario.Problem{Of: scenario.ErrInvalid, File: sc.File, Msg: "describes no purification method; add " + sectionList() + " (see `sepcost init`)"}
+		return source.Set{}, &scenario.Problem{Of: scenario.ErrInvalid, File: sc.File, Msg: "describes no purification method; add " + sectionList() + " (see `sepcost init`)"}
 	}
-	p := newPlan(sc, coef, eq, false)
-	if sc.WasteSector.Text != "" {
-		sec, err := waste.ParseSector(sc.WasteSector.Text)
-		if err != nil {
-			return nil, &scenario.Problem{Of: scenario.ErrInvalid, File: sc.File, Line: sc.WasteSector.Line, Field: "waste_sector", Msg: err.Error()}
-		}
-		p.WasteSector = sec
-	}
-	return p, nil
+	return coef, nil
 }
 
 // newPlan registers the methods of the Registry on a settled coefficient
@@ -167,15 +178,20 @@ func PrepareWith(sc *scenario.Scenario, opt Options) (*Plan, error) {
 func newPlan(sc *scenario.Scenario, coef source.Set, eq *equipment.Table, quiet bool) *Plan {
 	p := &Plan{Scenario: sc, Coef: coef, Equipment: eq}
 	for _, e := range Registry {
-		m := Method{Name: e.Name, Use: e.Use}
-		if e.Described(sc) {
-			m.Run, m.Choices = e.Build(sc, coef, eq, quiet)
-		} else {
-			m.Run = notAssessed(sc, e.Name)
-		}
-		p.Methods = append(p.Methods, m)
+		p.Methods = append(p.Methods, buildMethod(e, sc, coef, eq, quiet))
 	}
 	return p
+}
+
+// buildMethod is one registry entry's method on a settled coefficient set.
+func buildMethod(e Entry, sc *scenario.Scenario, coef source.Set, eq *equipment.Table, quiet bool) Method {
+	m := Method{Name: e.Name, Use: e.Use}
+	if e.Described(sc) {
+		m.Run, m.Choices = e.Build(sc, coef, eq, quiet)
+	} else {
+		m.Run = notAssessed(sc, e.Name)
+	}
+	return m
 }
 
 // WithCoefficients is the same plan on another coefficient set (used to
@@ -387,6 +403,15 @@ func (r Result) PerGram() float64 {
 // si (in the coefficient's SI unit): the coefficients are settled again,
 // calibrations included, exactly as for a setting written in the file.
 func (p *Plan) WithSetting(key string, si float64) (*Plan, error) {
+	sc, err := p.withSetting(key, si)
+	if err != nil {
+		return nil, err
+	}
+	return Prepare(sc)
+}
+
+// withSetting is the scenario whose settings also set key to si.
+func (p *Plan) withSetting(key string, si float64) (*scenario.Scenario, error) {
 	co, ok := p.Coef.Lookup(key)
 	if !ok {
 		return nil, fmt.Errorf("unknown model setting %q", key)
@@ -395,5 +420,5 @@ func (p *Plan) WithSetting(key string, si float64) (*Plan, error) {
 	co.SI = si
 	sc.Settings = append(append([]scenario.Setting(nil), p.Scenario.Settings...),
 		scenario.Setting{Key: key, Value: units.Quantity{SI: si, Dim: co.Dim}, Written: co.String()})
-	return Prepare(&sc)
+	return &sc, nil
 }

@@ -3,7 +3,9 @@ package scale
 import (
 	"fmt"
 	"math"
+	"runtime"
 	"sort"
+	"sync"
 
 	"sepcost/costing"
 	"sepcost/costing/prices"
@@ -91,18 +93,23 @@ func (a Assumption) Words() string {
 // the target mass. A default that moves that method's cost per gram by
 // more than AssumptionSwing, or decides whether the method is feasible, is
 // listed, largest swing first. Methods not feasible at the default stay
-// out unless a plausible value makes them feasible.
+// out unless a plausible value makes them feasible; a method the scenario
+// does not describe (costing.StatusNotAssessed) is not assessed whatever
+// its coefficients, so its defaults are not tried. The reruns are pure
+// functions of the plan and the value: they run on all cores, each in its
+// own slot, so the list is the same on any number.
 func FindAssumptions(p *costing.Plan, t *prices.Table, targetKg float64) ([]Assumption, error) {
 	names := p.MethodNames()
 	base := make([]float64, len(names))
+	assessed := make([]bool, len(names))
 	for j := range names {
 		r, err := p.RunOne(j, targetKg, t)
 		if err != nil {
 			return nil, err
 		}
-		base[j] = r.PerGram()
+		base[j], assessed[j] = r.PerGram(), r.Status() != costing.StatusNotAssessed
 	}
-	var out []Assumption
+	var tries []trial
 	for _, key := range p.Coef.Keys() {
 		co := p.Coef.Of(key)
 		if co.Mark == source.Override {
@@ -115,26 +122,65 @@ func FindAssumptions(p *costing.Plan, t *prices.Table, targetKg float64) ([]Assu
 		}
 		lo.SI, hi.SI = clamp(co, lo.SI), clamp(co, hi.SI)
 		for j, name := range names {
-			if co.Method != name {
+			if co.Method != name || !assessed[j] {
 				continue
 			}
-			a := Assumption{Method: name, Key: key, Label: co.Label, Unit: co.Unit, Default: co.Display(),
-				Low: lo.Display(), High: hi.Display(), Mark: co.Mark, Source: co.Source, PerGram: base[j]}
-			var err error
-			if a.PerGramLo, err = runWith(p, t, j, targetKg, lo); err != nil {
-				return nil, err
-			}
-			if a.PerGramHi, err = runWith(p, t, j, targetKg, hi); err != nil {
-				return nil, err
-			}
-			a.Swing = swing(a.PerGram, a.PerGramLo, a.PerGramHi)
-			if a.Swing > AssumptionSwing {
-				out = append(out, a)
-			}
+			tries = append(tries, trial{j: j, lo: lo, hi: hi, a: Assumption{Method: name, Key: key, Label: co.Label, Unit: co.Unit,
+				Default: co.Display(), Low: lo.Display(), High: hi.Display(), Mark: co.Mark, Source: co.Source, PerGram: base[j]}})
+		}
+	}
+	if err := runTrials(p, t, targetKg, tries); err != nil {
+		return nil, err
+	}
+	var out []Assumption
+	for _, tr := range tries {
+		if tr.a.Swing > AssumptionSwing {
+			out = append(out, tr.a)
 		}
 	}
 	sort.SliceStable(out, func(a, b int) bool { return out[a].Swing > out[b].Swing })
 	return out, nil
+}
+
+// trial is one default of method j tried at its low and high values.
+type trial struct {
+	j      int
+	lo, hi source.Coefficient
+	a      Assumption
+}
+
+// runTrials runs every trial at m on all cores, filling each one's costs
+// per gram and swing; the first error in trial order is returned.
+func runTrials(p *costing.Plan, t *prices.Table, m float64, tries []trial) error {
+	errs := make([]error, len(tries))
+	jobs := make(chan int)
+	var wg sync.WaitGroup
+	for w := 0; w < runtime.GOMAXPROCS(0); w++ {
+		wg.Add(1)
+		go func() {
+			defer wg.Done()
+			for k := range jobs {
+				tr := &tries[k]
+				var err error
+				if tr.a.PerGramLo, err = runWith(p, t, tr.j, m, tr.lo); err == nil {
+					tr.a.PerGramHi, err = runWith(p, t, tr.j, m, tr.hi)
+				}
+				tr.a.Swing = swing(tr.a.PerGram, tr.a.PerGramLo, tr.a.PerGramHi)
+				errs[k] = err
+			}
+		}()
+	}
+	for k := range tries {
+		jobs <- k
+	}
+	close(jobs)
+	wg.Wait()
+	for _, err := range errs {
+		if err != nil {
+			return err
+		}
+	}
+	return nil
 }
 
 // swing is |hi − lo| / base; +Inf when the method is feasible at some of
@@ -165,17 +211,10 @@ func clamp(co source.Coefficient, v float64) float64 {
 
 // runWith runs method j at m with one coefficient set as a user would set
 // it (calibrations rerun); it returns the cost per gram (NaN when not
-// feasible).
+// feasible), the one WithSetting then RunOne report
+// (costing.Plan.PerGramWithSetting: only method j built, quiet).
 func runWith(p *costing.Plan, t *prices.Table, j int, m float64, co source.Coefficient) (float64, error) {
-	q, err := p.WithSetting(co.Key, co.SI)
-	if err != nil {
-		return 0, err
-	}
-	r, err := q.RunOne(j, m, t)
-	if err != nil {
-		return 0, err
-	}
-	return r.PerGram(), nil
+	return p.PerGramWithSetting(co.Key, co.SI, j, m, t)
 }
 
 func unitSuffix(u string) string {

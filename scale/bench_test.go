@@ -13,30 +13,60 @@ import (
 
 	"sepcost/costing"
 	"sepcost/costing/ledger"
+	"sepcost/costing/prices"
 	"sepcost/costing/scenario"
 	"sepcost/templates"
 )
 
-// BenchmarkSweep200: a 200-mass sweep of each demo, the solid one's two
-// methods (chromatography, crystallization) and the liquid one's two
-// (chromatography, distillation), with crossovers found by bisection,
-// without the Monte Carlo draws.
+// BenchmarkSweep200: a 200-mass sweep, 100 µg to 10 kg, with the
+// decision's and the pairwise crossovers found by bisection, no draws: the
+// solid demo (chromatography and crystallization; distillation not
+// assessed), the liquid demo (chromatography and distillation;
+// crystallization not assessed) and "three", the solid demo with a
+// distillation section (all three methods). Beside the clock and processor
+// time, evals/op counts the model runs of the crossover search (lean and
+// full; the 200 × 3 runs of the sweep's own table not counted).
 func BenchmarkSweep200(b *testing.B) {
+	three, err := os.ReadFile("testdata/solid-with-distillation.yaml")
+	if err != nil {
+		b.Fatal(err)
+	}
 	for _, c := range []struct {
 		name string
 		yaml []byte
-	}{{"solid", templates.Scenario}, {"liquid", templates.Liquid}} {
+	}{{"solid", templates.Scenario}, {"liquid", templates.Liquid}, {"three", three}} {
 		b.Run(c.name, func(b *testing.B) {
 			p, pt := plan(b, c.yaml)
 			masses, _ := LogSpace(1e-4, 10, 200)
 			b.ReportAllocs()
+			start := cpuTime()
+			var r *Report
 			for b.Loop() {
-				if _, err := SweepWith(p, pt, masses, Options{}); err != nil {
+				if r, err = SweepWith(p, pt, masses, Options{}); err != nil {
 					b.Fatal(err)
 				}
 			}
+			reportCPU(b, start)
+			b.ReportMetric(float64(searchRuns(b, p, pt, r)), "evals/op")
 		})
 	}
+}
+
+// searchRuns is the number of model runs the crossover search of a
+// sweep's report makes.
+func searchRuns(b *testing.B, p *costing.Plan, pt *prices.Table, r *Report) int {
+	e, err := planEvals(p, pt)
+	if err != nil {
+		b.Fatal(err)
+	}
+	grid := gridOf(r)
+	if _, err := findDecisionCrossovers(r.Methods, r.MassesKg, grid, e); err != nil {
+		b.Fatal(err)
+	}
+	if _, err := findPairwise(r.Methods, r.MassesKg, grid, e); err != nil {
+		b.Fatal(err)
+	}
+	return e.runs
 }
 
 // BenchmarkSample400: the default 400 uncertainty draws at one mass.
@@ -124,25 +154,6 @@ func BenchmarkValueOfInformation(b *testing.B) {
 func reportCPU(b *testing.B, start time.Duration) {
 	if b.N > 0 && start > 0 {
 		b.ReportMetric((cpuTime()-start).Seconds()/float64(b.N), "cpu-s/op")
-	}
-}
-
-// BenchmarkSweep200ThreeMethods: a 200-mass sweep of the solid demo with a
-// distillation section, the three methods with crossovers found by
-// bisection, no draws.
-func BenchmarkSweep200ThreeMethods(b *testing.B) {
-	yaml, err := os.ReadFile("testdata/solid-with-distillation.yaml")
-	if err != nil {
-		b.Fatal(err)
-	}
-	p, pt := plan(b, yaml)
-	masses, _ := LogSpace(1e-4, 10, 200)
-	b.ReportAllocs()
-	defer reportCPU(b, cpuTime())
-	for b.Loop() {
-		if _, err := SweepWith(p, pt, masses, Options{}); err != nil {
-			b.Fatal(err)
-		}
 	}
 }
 

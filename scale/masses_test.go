@@ -75,7 +75,7 @@ func TestCrossoverAgainstBruteForce(t *testing.T) {
 	names := []string{"a", "b", "c", "d"}
 	masses, _ := LogSpace(1e-2, 100, 9)
 	eval, grid := synthetic(curves, masses)
-	got, err := findPairwise(names, masses, grid, eval)
+	got, err := findPairwise(names, masses, grid, newEvals(eval, nil))
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -163,7 +163,7 @@ func TestDecisionCrossovers(t *testing.T) {
 	names := []string{"a", "b", "c"}
 	masses, _ := LogSpace(1e-2, 100, 5)
 	eval, grid := synthetic(curves, masses)
-	got, err := findDecisionCrossovers(names, masses, grid, eval)
+	got, err := findDecisionCrossovers(names, masses, grid, newEvals(eval, nil))
 	if err != nil {
 		t.Fatal(err)
 	}

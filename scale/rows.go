@@ -28,6 +28,7 @@ type Row struct {
 	EFactor       float64 // kg waste per kg product (Sheldon)
 	PMI           float64 // kg of all inputs per kg product, water counted
 	Equipment     string
+	EquipmentID   string // usage.Usage.EquipmentID: the equipment without its continuous parts
 }
 
 // Rows flattens the results, mass by mass, method by method. The slice
@@ -59,7 +60,7 @@ func rowOf(m float64, name string, i, j int, res *Result) Row {
 	el, at := u.Hours()
 	row := Row{CrudeKg: m, Method: name, Mass: i, Col: j, Feasible: u.Feasible, Reason: u.Reason,
 		Total: res.Ledger.Total, Places: res.Ledger.Places, PerGram: res.PerGram(), ProductKg: u.ProductOutKg,
-		WasteKg: u.WasteKg(), HoursElapsed: el, HoursAttended: at, Equipment: u.Equipment,
+		WasteKg: u.WasteKg(), HoursElapsed: el, HoursAttended: at, Equipment: u.Equipment, EquipmentID: u.EquipmentID,
 		SolventL: math.NaN(), EFactor: math.NaN(), PMI: math.NaN()}
 	if f, ok := u.Figure(usage.FigSolventTotal); ok {
 		row.SolventL = f.SI * 1000

@@ -21,19 +21,29 @@ func SweepWith(p *costing.Plan, t *prices.Table, masses []float64, opt Options) 
 		return nil, err
 	}
 	r.IsSweep = true
-	grid := make([][]point, len(masses))
-	nm := len(r.Methods)
-	for k, row := range r.Rows() {
-		if grid[k/nm] == nil {
-			grid[k/nm] = make([]point, nm)
-		}
-		// pointOf's fields, from the row (the same Result's).
-		grid[k/nm][k%nm] = point{perG: row.PerGram, equipment: row.Equipment, reason: row.Reason}
-	}
-	eval := planEval(p, t)
-	if r.Crossovers, err = findDecisionCrossovers(r.Methods, masses, grid, eval); err != nil {
+	grid := gridOf(r)
+	e, err := planEvals(p, t)
+	if err != nil {
 		return nil, err
 	}
-	r.Pairwise, err = findPairwise(r.Methods, masses, grid, eval)
+	if r.Crossovers, err = findDecisionCrossovers(r.Methods, masses, grid, e); err != nil {
+		return nil, err
+	}
+	r.Pairwise, err = findPairwise(r.Methods, masses, grid, e)
 	return r, err
+}
+
+// gridOf is the report's rows as the crossover search's points (pointOf's
+// fields, from the row of the same Result).
+func gridOf(r *Report) [][]point {
+	nm := len(r.Methods)
+	grid := make([][]point, len(r.MassesKg))
+	for k, row := range r.Rows() {
+		i := k / nm
+		if grid[i] == nil {
+			grid[i] = make([]point, nm)
+		}
+		grid[i][k%nm] = point{kg: row.CrudeKg, perG: row.PerGram, id: row.EquipmentID, equipment: row.Equipment, reason: row.Reason}
+	}
+	return grid
 }

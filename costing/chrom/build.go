@@ -67,13 +67,16 @@ func build(u *usage.Usage, a analysis, sc *scenario.Scenario, coef source.Set, s
 // equipmentFigures reports the equipment and the silica.
 func (p *runPlan) equipmentFigures(u *usage.Usage, coef source.Set) {
 	e, fig := p.e, u.AddFigure
-	if e.cartridge != nil {
-		u.Equipment = fmt.Sprintf("%s (prepacked)", e.name)
-	} else {
-		u.Equipment = fmt.Sprintf("%s, %.0f cm bed", e.name, e.bedHeight*100)
-	}
+	runs := ""
 	if e.runs > 1 {
-		u.Equipment += fmt.Sprintf(" × %d runs", e.runs)
+		runs = fmt.Sprintf(" × %d runs", e.runs)
+	}
+	if e.cartridge != nil {
+		u.Equipment = e.name + " (prepacked)" + runs
+		u.EquipmentID = u.Equipment
+	} else {
+		u.Equipment = fmt.Sprintf("%s, %.0f cm bed%s", e.name, e.bedHeight*100, runs)
+		u.EquipmentID = e.name + runs // the bed height follows the mass smoothly
 	}
 	fig("ratio_used", "silica : crude used (the loading chosen)", e.silicaRun*p.runs/u.CrudeKg, "")
 	fig("silica_needed", "silica needed at the loading chosen", u.CrudeKg*p.ratio, "g")
@@ -196,6 +199,7 @@ func (p *runPlan) times(u *usage.Usage, sc *scenario.Scenario, coef source.Set, 
 	p.workingDays(u, coef, elapsed, attended)
 	u.AddFigure("flow", "flow rate", p.flow, "mL/min")
 	u.Equipment += "; " + p.ev.Name
+	u.EquipmentID += "; " + p.ev.Name
 }
 
 // workingDays reports runs per day and elapsed working days, and warns

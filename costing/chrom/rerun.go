@@ -91,6 +91,7 @@ func mergeRerun(u, v *usage.Usage) {
 		u.Activities = append(u.Activities, a)
 	}
 	u.Equipment += "; mixed fractions re-run on " + v.Equipment
+	u.EquipmentID += "; mixed fractions re-run on " + v.EquipmentID
 	u.Notef(usage.Info, "The mixed fractions (%s of crude) are pooled, evaporated and run once more at the same loading: %s more product, %.1f %% of the product in the crude.",
 		units.FormatMass(v.CrudeKg), units.FormatMass(gained), gained/u.ProductInKg*100)
 }

@@ -99,6 +99,7 @@ func (m *Model) equipmentFigures(u *usage.Usage, o *outcome) {
 	if b.vessel.Batches > 1 {
 		u.Equipment += fmt.Sprintf(" × %d batches", b.vessel.Batches)
 	}
+	u.EquipmentID = u.Equipment // a vessel of the table and a count: nothing that follows the mass smoothly
 	fig("heating_time", "heating time per batch (first pass)", b.tHeat, "h")
 	fig("cooling_time", "cooling time per batch (first pass)", b.tCool, "h")
 	fig("cooling_time_jacket", "jacket-limited cooling time per batch (first pass)", b.tCoolJacket, "h")

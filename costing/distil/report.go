@@ -86,6 +86,7 @@ func (m *Model) reportStill(u *usage.Usage, o *outcome) {
 	if o.st.Batches > 1 {
 		u.Equipment += fmt.Sprintf(" × %d batches", o.st.Batches)
 	}
+	u.EquipmentID = u.Equipment // a still of the list, the stages and a count: nothing that follows the mass smoothly
 	fig("charge_per_batch", "charge per batch", o.mBatch, "g")
 	m.batchesNote(u, o)
 	fig("holdup", "hold-up of head and column", o.vHold, "mL")

@@ -195,6 +195,14 @@ type Usage struct {
 	// is never read for its words, and wording them is a good part of
 	// its cost. Figures, demands and waste are the same either way.
 	Quiet bool `json:"-"`
+	// EquipmentID names the pieces of equipment the plan uses and how many
+	// runs or batches, without what changes continuously with the mass
+	// (a bed height): e.g. "300 mm column × 51 runs; rotary evaporator
+	// 20 L". Two plans of one method with the same EquipmentID use the
+	// same equipment as often, so their costs join smoothly in the mass;
+	// a change of it is an equipment step (the crossover search bisects
+	// it). The model sets it beside Equipment, from the same choices.
+	EquipmentID string
 }
 
 // Table is a small table of numbers a model shows on its method sheet.
