@@ -407,7 +407,7 @@ func (p *Plan) WithSetting(key string, si float64) (*Plan, error) {
 	if err != nil {
 		return nil, err
 	}
-	return Prepare(sc)
+	return PrepareWith(sc, Options{Equipment: p.Equipment})
 }
 
 // withSetting is the scenario whose settings also set key to si.

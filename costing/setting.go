@@ -1,7 +1,6 @@
 package costing
 
 import (
-	"sepcost/costing/equipment"
 	"sepcost/costing/prices"
 )
 
@@ -10,7 +9,7 @@ import (
 // WithSetting(key, si) then RunOne(j, crudeKg, t).PerGram() reports (NaN
 // when not feasible), for a caller that needs only it (FindAssumptions):
 // the coefficients are settled as Prepare settles them (calibrations
-// rerun, on the default equipment table as Prepare takes it), but only
+// rerun, on the plan's own equipment table), but only
 // method j's model is built, quiet (the same costs, TestQuietPlanCostsTheSame),
 // and no green metrics are computed. The scenario's waste sector, which
 // PrepareWith checks, is the plan's own, already checked.
@@ -23,7 +22,7 @@ func (p *Plan) PerGramWithSetting(key string, si float64, j int, crudeKg float64
 	if err != nil {
 		return 0, err
 	}
-	q := &Plan{Scenario: sc, Coef: coef, Equipment: equipment.Default(), Methods: make([]Method, len(Registry))}
+	q := &Plan{Scenario: sc, Coef: coef, Equipment: p.Equipment, Methods: make([]Method, len(Registry))}
 	q.Methods[j] = buildMethod(Registry[j], sc, coef, q.Equipment, true)
 	st, err := q.SitePrices(t)
 	if err != nil {
