@@ -37,6 +37,7 @@ type grid struct {
 	name       string
 	cells      [][]cell // [row−1][column−1]; a row as long as its last cell set
 	maxRow     int
+	maxCol     int // the last column set in any row: the room a new row is given
 	merges     []merge
 	freezeRows int
 	freezeCols int
@@ -62,14 +63,26 @@ func (g *grid) set(row, col int, c cell) {
 	}
 	r := g.cells[row-1]
 	if len(r) < col {
-		r = append(r, make([]cell, col-len(r))...)
+		r = g.widen(r, col)
 		g.cells[row-1] = r
 	}
 	c.used = true
 	r[col-1] = c
-	if row > g.maxRow {
-		g.maxRow = row
+	g.maxRow = max(g.maxRow, row)
+	g.maxCol = max(g.maxCol, col)
+}
+
+// widen lengthens a row to col cells. A row that must grow is given room
+// for as many columns as the widest row so far (rows of a sheet are
+// mostly alike), so that a row is allocated about once rather than
+// doubled cell by cell.
+func (g *grid) widen(r []cell, col int) []cell {
+	if col <= cap(r) {
+		return r[:col] // the cells past len were never set: zero
 	}
+	n := make([]cell, col, max(col, g.maxCol, 2*cap(r)))
+	copy(n, r)
+	return n
 }
 
 // text writes a string.
@@ -259,54 +272,8 @@ func (g *grid) flush(f *excelize.File, st *styles, omit bool, title string) erro
 			return fmt.Errorf("workbook: sheet %s: panes: %w", g.name, err)
 		}
 	}
-	for row := 1; row <= g.maxRow; row++ {
-		if row > len(g.cells) || len(g.cells[row-1]) == 0 {
-			continue
-		}
-		cols := g.cells[row-1]
-		vals := make([]any, len(cols))
-		lines := 1
-		for k, c := range cols {
-			if !c.used {
-				continue
-			}
-			col := k + 1
-			if v, ok := c.value.(float64); ok && !finite(v) {
-				return fmt.Errorf("workbook: sheet %s: cell %s would hold %v; this is a bug in the writer", g.name, cellName(col, row), v)
-			}
-			x := excelize.Cell{StyleID: c.style, Formula: c.formula, Value: c.value}
-			if v, ok := c.value.(float64); ok {
-				x.Value = round15(v)
-			}
-			if c.formula != "" && omit {
-				x.Value = nil
-			}
-			vals[col-1] = x
-			if s, ok := c.value.(string); ok && c.wrap {
-				w := widths[col]
-				if m, ok := g.merged(row, col); ok {
-					w = 0
-					for k := m.first; k <= m.last; k++ {
-						w += widths[k]
-					}
-				}
-				if c.small {
-					w *= 11.0 / 9 // characters scale with the font size
-				}
-				if n := wrappedLines(s, w); n > lines {
-					lines = n
-				}
-			}
-		}
-		var opts []excelize.RowOpts
-		if lines > 1 {
-			// A spreadsheet row is at most 409 points high (excelize's
-			// MaxRowHeight, Excel's limit); a longer text is cut there.
-			opts = append(opts, excelize.RowOpts{Height: math.Min(lineHeight*float64(lines), excelize.MaxRowHeight)})
-		}
-		if err := sw.SetRow(cellName(1, row), vals, opts...); err != nil {
-			return fmt.Errorf("workbook: sheet %s: row %d: %w", g.name, row, err)
-		}
+	if err := g.writeRows(sw, widths, omit); err != nil {
+		return err
 	}
 	for _, m := range g.merges {
 		if err := sw.MergeCell(cellName(m.first, m.row), cellName(m.last, m.row)); err != nil {
@@ -323,6 +290,77 @@ func (g *grid) flush(f *excelize.File, st *styles, omit bool, title string) erro
 		}
 	}
 	return nil
+}
+
+// writeRows streams the rows, each with the height its wrapped text needs.
+// One row's cells are assembled in slices reused from row to row, handed
+// to the StreamWriter as pointers (SetRow takes *excelize.Cell as it takes
+// excelize.Cell), so that no cell is boxed per row; a number keeps the
+// interface value it was set with unless round15 changes it.
+func (g *grid) writeRows(sw *excelize.StreamWriter, widths map[int]float64, omit bool) error {
+	cells := make([]excelize.Cell, g.maxCol)
+	vals := make([]any, g.maxCol)
+	var height [1]excelize.RowOpts
+	for row := 1; row <= g.maxRow && row <= len(g.cells); row++ {
+		cols := g.cells[row-1]
+		if len(cols) == 0 {
+			continue
+		}
+		vals := vals[:len(cols)]
+		clear(vals)
+		lines := 1
+		for k := range cols {
+			c := &cols[k]
+			if !c.used {
+				continue
+			}
+			col := k + 1
+			x := &cells[k]
+			*x = excelize.Cell{StyleID: c.style, Formula: c.formula, Value: c.value}
+			if v, ok := c.value.(float64); ok {
+				if !finite(v) {
+					return fmt.Errorf("workbook: sheet %s: cell %s would hold %v; this is a bug in the writer", g.name, cellName(col, row), v)
+				}
+				if r := round15(v); r != v {
+					x.Value = r
+				}
+			}
+			if c.formula != "" && omit {
+				x.Value = nil
+			}
+			vals[k] = x
+			if s, ok := c.value.(string); ok && c.wrap {
+				lines = max(lines, g.wrapLines(s, row, col, c.small, widths))
+			}
+		}
+		opts := height[:0]
+		if lines > 1 {
+			// A spreadsheet row is at most 409 points high (excelize's
+			// MaxRowHeight, Excel's limit); a longer text is cut there.
+			height[0] = excelize.RowOpts{Height: math.Min(lineHeight*float64(lines), excelize.MaxRowHeight)}
+			opts = height[:]
+		}
+		if err := sw.SetRow(cellName(1, row), vals, opts...); err != nil {
+			return fmt.Errorf("workbook: sheet %s: row %d: %w", g.name, row, err)
+		}
+	}
+	return nil
+}
+
+// wrapLines is the lines wrapped text s takes in its cell (row, col): the
+// column's width, or the merged range's, scaled for the small font.
+func (g *grid) wrapLines(s string, row, col int, small bool, widths map[int]float64) int {
+	w := widths[col]
+	if m, ok := g.merged(row, col); ok {
+		w = 0
+		for k := m.first; k <= m.last; k++ {
+			w += widths[k]
+		}
+	}
+	if small {
+		w *= 11.0 / 9 // characters scale with the font size
+	}
+	return wrappedLines(s, w)
 }
 
 // pageSetup sets a sheet to print in landscape on A4, scaled to fit one
