@@ -227,7 +227,10 @@ func logXAxis(b []byte) ([]byte, error) {
 // obeys: the title then lies across the chart and squeezes the plot. The
 // second bodyPr is given the same rotation.
 func uprightTitles(b []byte, p string) []byte {
-	title := regexp.MustCompile(`(?s)<` + regexp.QuoteMeta(p) + `title>.*?</` + regexp.QuoteMeta(p) + `title>`)
+	title := titleDefault
+	if p != "" {
+		title = titleRe(p)
+	}
 	flat := []byte("<" + p + `txPr><a:bodyPr anchorCtr="false" rot="0"`)
 	upright := []byte("<" + p + `txPr><a:bodyPr anchorCtr="false" rot="-5400000" vert="horz"`)
 	return title.ReplaceAllFunc(b, func(t []byte) []byte {
@@ -237,6 +240,14 @@ func uprightTitles(b []byte, p string) []byte {
 		return bytes.Replace(t, flat, upright, 1)
 	})
 }
+
+// titleRe matches a chart title element with the chart namespace prefix p.
+func titleRe(p string) *regexp.Regexp {
+	return regexp.MustCompile(`(?s)<` + regexp.QuoteMeta(p) + `title>.*?</` + regexp.QuoteMeta(p) + `title>`)
+}
+
+// titleDefault is titleRe for the default namespace, as excelize writes.
+var titleDefault = titleRe("")
 
 // chartXML is the part of a chart part that checkLogChart reads; element
 // names match in any namespace prefix.

@@ -39,6 +39,8 @@ type grid struct {
 	maxRow     int
 	maxCol     int // the last column set in any row: the room a new row is given
 	merges     []merge
+	byRow      [][]merge // merges filed by row (indexMerges), for the rows up to maxRow
+	indexed    int       // how many merges byRow holds
 	freezeRows int
 	freezeCols int
 	widths     map[int]float64 // widths fixed by the sheet's builder
@@ -189,42 +191,54 @@ func (g *grid) merged(row, col int) (merge, bool) {
 	if len(g.merges) == 0 {
 		return merge{}, false
 	}
-	for _, m := range g.merges {
-		if m.row == row && m.first <= col && col <= m.last {
-			return m, true
+	if len(g.byRow) != g.maxRow+1 || g.indexed != len(g.merges) {
+		g.indexMerges()
+	}
+	if row < len(g.byRow) {
+		for _, m := range g.byRow[row] {
+			if m.first <= col && col <= m.last {
+				return m, true
+			}
 		}
 	}
 	return merge{}, false
 }
 
+// indexMerges files the merged ranges by row, so that looking a cell up
+// reads its own row's ranges only.
+func (g *grid) indexMerges() {
+	g.byRow = make([][]merge, g.maxRow+1)
+	for _, m := range g.merges {
+		if m.row >= 0 && m.row < len(g.byRow) {
+			g.byRow[m.row] = append(g.byRow[m.row], m)
+		}
+	}
+	g.indexed = len(g.merges)
+}
+
 // fitWidths sets every column's width from its longest content.
 func (g *grid) fitWidths(st *styles) map[int]float64 {
-	need := map[int]int{}
-	maxCol := 0
+	need := make([]int, g.maxCol+1)
 	for i, cols := range g.cells {
 		row := i + 1
-		for k, c := range cols {
-			if !c.used {
+		for k := range cols {
+			c := &cols[k]
+			if !c.used || c.spill {
 				continue
 			}
 			col := k + 1
-			if col > maxCol {
-				maxCol = col
-			}
-			if _, ok := g.merged(row, col); ok || c.spill {
+			if _, ok := g.merged(row, col); ok {
 				continue
 			}
 			n := st.displayWidth(c)
 			if c.wrap && n > int(maxWidth) {
 				n = int(maxWidth)
 			}
-			if n > need[col] {
-				need[col] = n
-			}
+			need[col] = max(need[col], n)
 		}
 	}
-	out := map[int]float64{}
-	for col := 1; col <= maxCol; col++ {
+	out := make(map[int]float64, g.maxCol)
+	for col := 1; col <= g.maxCol; col++ {
 		if w, ok := g.widths[col]; ok {
 			out[col] = w
 			continue
@@ -457,25 +471,40 @@ func (g *grid) panes() *excelize.Panes {
 	}
 }
 
-// displayWidth estimates how many characters a cell shows.
-func (st *styles) displayWidth(c cell) int {
+// displayWidth estimates how many characters a cell shows: a text's
+// longest line; a number as its style shows it (the places, thousands
+// separators and suffix of fmtMeta), formatted into a buffer on the stack.
+func (st *styles) displayWidth(c *cell) int {
 	switch v := c.value.(type) {
 	case string:
 		return textWidth(v)
 	case float64:
 		m := st.meta[c.style]
-		var s string
+		var buf [40]byte
+		var n int
 		if m.places < 0 {
-			s = strconv.FormatFloat(v, 'g', 10, 64)
+			n = len(strconv.AppendFloat(buf[:0], v, 'g', 10, 64))
 		} else {
-			s = strconv.FormatFloat(v, 'f', m.places, 64)
+			n = len(strconv.AppendFloat(buf[:0], v, 'f', m.places, 64))
 		}
-		n := len(s)
 		if m.grouping {
-			digits := len(strconv.FormatFloat(math.Abs(math.Trunc(v)), 'f', 0, 64))
-			n += (digits - 1) / 3
+			n += (intDigits(math.Abs(math.Trunc(v))) - 1) / 3
 		}
 		return n + m.suffix
 	}
 	return 0
+}
+
+// intDigits is the number of decimal digits of a whole number x ≥ 0 as
+// strconv writes it in full ('f', no decimals): the smallest k with
+// x < 10^k, compared with the exactly held powers of ten up to 10^22, and
+// counted on the written digits above them.
+func intDigits(x float64) int {
+	for k := 1; k < len(pow10); k++ {
+		if x < pow10[k] {
+			return k
+		}
+	}
+	var buf [400]byte
+	return len(strconv.AppendFloat(buf[:0], x, 'f', 0, 64))
 }

@@ -108,3 +108,25 @@ func TestWrappedLinesAsSplit(t *testing.T) {
 		}
 	}
 }
+
+// intDigits counts the digits strconv writes for a whole number ('f', no
+// decimals), at and around every power of ten a double holds and beyond,
+// and for the values that are not numbers.
+func TestIntDigitsAsStrconv(t *testing.T) {
+	t.Parallel()
+	xs := []float64{0, 1, 9, 10, 99, 100, 999999999999999, 1e15, 1e22, 1e23, 1.7976931348623157e308, math.NaN(), math.Inf(1)}
+	for k := 0; k <= 308; k++ {
+		p := math.Pow(10, float64(k))
+		xs = append(xs, p, math.Nextafter(p, 0), math.Nextafter(p, math.Inf(1)), math.Trunc(p*0.999), math.Trunc(p*1.5))
+	}
+	rng := rand.New(rand.NewPCG(3, 4))
+	for range 20000 {
+		xs = append(xs, math.Trunc(math.Exp(rng.Float64()*60)))
+	}
+	for _, x := range xs {
+		x = math.Trunc(x) // whole numbers, as displayWidth passes
+		if got, want := intDigits(x), len(strconv.FormatFloat(x, 'f', 0, 64)); got != want {
+			t.Errorf("intDigits(%v) = %d, strconv writes %d characters", x, got, want)
+		}
+	}
+}

@@ -481,7 +481,7 @@ func (w *widths) fit() map[int]float64 {
 	for col := 1; col < len(w.need); col++ {
 		n := w.need[col]
 		if w.style[col] != 0 {
-			d := w.st.displayWidth(cell{value: w.maxAbs[col], style: w.style[col]})
+			d := w.st.displayWidth(&cell{value: w.maxAbs[col], style: w.style[col]})
 			if w.neg[col] {
 				d++
 			}
