@@ -74,6 +74,19 @@ func (g *grid) set(row, col int, c cell) {
 	g.maxCol = max(g.maxCol, col)
 }
 
+// reserve makes room in a row for cells up to column cols, setting none:
+// for a block filled column by column, so that each row is allocated once.
+func (g *grid) reserve(row, cols int) {
+	for len(g.cells) < row {
+		g.cells = append(g.cells, nil)
+	}
+	if r := g.cells[row-1]; cap(r) < cols {
+		n := make([]cell, len(r), cols)
+		copy(n, r)
+		g.cells[row-1] = n
+	}
+}
+
 // widen lengthens a row to col cells. A row that must grow is given room
 // for as many columns as the widest row so far (rows of a sheet are
 // mostly alike), so that a row is allocated about once rather than
