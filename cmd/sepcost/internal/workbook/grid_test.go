@@ -6,6 +6,7 @@ import (
 	"strconv"
 	"strings"
 	"testing"
+	"unicode"
 	"unicode/utf8"
 )
 
@@ -127,6 +128,17 @@ func TestIntDigitsAsStrconv(t *testing.T) {
 		x = math.Trunc(x) // whole numbers, as displayWidth passes
 		if got, want := intDigits(x), len(strconv.FormatFloat(x, 'f', 0, 64)); got != want {
 			t.Errorf("intDigits(%v) = %d, strconv writes %d characters", x, got, want)
+		}
+	}
+}
+
+// The ASCII table of white space in paraLines agrees with unicode.IsSpace
+// on every ASCII character.
+func TestASCIISpaceAsUnicode(t *testing.T) {
+	t.Parallel()
+	for b := range utf8.RuneSelf {
+		if got, want := asciiSpace[b], unicode.IsSpace(rune(b)); got != want {
+			t.Errorf("asciiSpace[%q] = %v, unicode.IsSpace says %v", rune(b), got, want)
 		}
 	}
 }

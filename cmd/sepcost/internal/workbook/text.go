@@ -118,8 +118,17 @@ func paraLines(para string, per int) int {
 			used -= per
 		}
 	}
-	for _, r := range para {
-		if unicode.IsSpace(r) {
+	for k := 0; k < len(para); {
+		space := false
+		if b := para[k]; b < utf8.RuneSelf { // ASCII: one byte, a table look-up
+			space = asciiSpace[b]
+			k++
+		} else {
+			r, n := utf8.DecodeRuneInString(para[k:])
+			space = unicode.IsSpace(r)
+			k += n
+		}
+		if space {
 			if inWord {
 				word()
 			}
@@ -133,6 +142,10 @@ func paraLines(para string, per int) int {
 	}
 	return n
 }
+
+// asciiSpace marks the ASCII characters unicode.IsSpace counts as white
+// space: tab, newline, vertical tab, form feed, carriage return, space.
+var asciiSpace = [utf8.RuneSelf]bool{'\t': true, '\n': true, '\v': true, '\f': true, '\r': true, ' ': true}
 
 // unitPowers writes the powers in a unit as a reader writes them: m^2 as
 // m², m3 as m³ (the units package spells them for typing).
