@@ -97,7 +97,7 @@ func TestWrappedLinesAsSplit(t *testing.T) {
 		return w
 	}
 	texts := []string{"", " ", "\n", "a", "one two  three\tfour", "Ethyl acetate\u00a0(EtOAc) at 3.50 € per litre\n\nsecond paragraph",
-		"averyveryveryverylongwordthatdoesnotfit and then some", "  leading and trailing  ", "é è ê ë\nà â\n", "x\ny\n\nz"}
+		"averyveryveryverylongwordthatdoesnotfit and then some", "  leading and trailing  ", "é è ê ë\nà â\n", "x\ny\n\nz", "broken \xff\xfe bytes\n\xc3", "ends in a newline\n", "± 3 €\u00a0per\u2003kg"}
 	for _, s := range texts {
 		for _, w := range []float64{0, 1, 2, 5, 8.5, 12, 40, 80} {
 			if got, want := wrappedLines(s, w), split(s, w); got != want {

@@ -63,19 +63,27 @@ func capitalize(s string) string {
 	return string(unicode.ToUpper(r)) + s[n:]
 }
 
-// textWidth is the length in characters of the longest line of s.
+// textWidth is the length in characters (runes, as
+// utf8.RuneCountInString counts them) of the longest line of s, counted in
+// one pass: ASCII a byte at a time, other runes decoded.
 func textWidth(s string) int {
-	w := 0
-	for {
-		line, rest, more := strings.Cut(s, "\n")
-		if n := utf8.RuneCountInString(line); n > w {
-			w = n
+	w, n := 0, 0
+	for k := 0; k < len(s); {
+		b := s[k]
+		switch {
+		case b == '\n':
+			w, n = max(w, n), 0
+			k++
+			continue
+		case b < utf8.RuneSelf:
+			k++
+		default:
+			_, size := utf8.DecodeRuneInString(s[k:])
+			k += size
 		}
-		if !more {
-			return w
-		}
-		s = rest
+		n++
 	}
+	return max(w, n)
 }
 
 // wrappedLines estimates how many lines s takes when wrapped in a column
