@@ -200,17 +200,7 @@ func rawWrite(b testing.TB, sheets []baselineSheet, maxStyle int) {
 // on a shared machine disturb less; garbage one side leaves may still be
 // collected while the other runs.
 func BenchmarkWorkbookOverRaw(b *testing.B) {
-	cases := []struct {
-		name   string
-		report func(testing.TB) *scale.Report
-	}{
-		{"demo", func(t testing.TB) *scale.Report {
-			return demoReportOf(t, templates.Scenario, "built-in demo scenario")
-		}},
-		{"sweep200", func(t testing.TB) *scale.Report { return demoSweep(t, 200) }},
-		{"sweep1000", func(t testing.TB) *scale.Report { return demoSweep(t, 1000) }},
-	}
-	for _, c := range cases {
+	for _, c := range realCases {
 		b.Run(c.name, func(b *testing.B) {
 			r := c.report(b)
 			var buf bytes.Buffer
@@ -250,6 +240,38 @@ func BenchmarkWorkbookOverRaw(b *testing.B) {
 			b.ReportMetric(float64(ours.Microseconds())/float64(b.N)/1000, "workbook-ms/op")
 			b.ReportMetric(float64(raw.Microseconds())/float64(b.N)/1000, "raw-ms/op")
 			b.ReportMetric(float64(cells), "cells")
+		})
+	}
+}
+
+// realCases are the reports the paired benchmarks write: the demo, and
+// the solid demo swept over 200 and 1,000 masses.
+var realCases = []struct {
+	name   string
+	report func(testing.TB) *scale.Report
+}{
+	{"demo", func(t testing.TB) *scale.Report {
+		return demoReportOf(t, templates.Scenario, "built-in demo scenario")
+	}},
+	{"sweep200", func(t testing.TB) *scale.Report { return demoSweep(t, 200) }},
+	{"sweep1000", func(t testing.TB) *scale.Report { return demoSweep(t, 1000) }},
+}
+
+// BenchmarkWorkbookWrite is the writer alone on the reports of
+// BenchmarkWorkbookOverRaw (whose allocation figures count both sides):
+// its time, processor time and allocations per workbook.
+func BenchmarkWorkbookWrite(b *testing.B) {
+	for _, c := range realCases {
+		b.Run(c.name, func(b *testing.B) {
+			r := c.report(b)
+			b.ReportAllocs()
+			cpu := cpuTime()
+			for b.Loop() {
+				if err := Write(io.Discard, r, Options{}); err != nil {
+					b.Fatal(err)
+				}
+			}
+			reportCPU(b, cpu)
 		})
 	}
 }
