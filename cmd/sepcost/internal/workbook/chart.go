@@ -226,16 +226,39 @@ func logXAxis(b []byte) ([]byte, error) {
 // text-properties element whose bodyPr says rot="0", which LibreOffice
 // obeys: the title then lies across the chart and squeezes the plot. The
 // second bodyPr is given the same rotation.
+//
+// Each title is the text from an opening <title> to the first closing
+// </title> after it, as the pattern (?s)<title>.*?</title> finds them,
+// found with plain searches.
 func uprightTitles(b []byte, p string) []byte {
-	title := regexp.MustCompile(`(?s)<` + regexp.QuoteMeta(p) + `title>.*?</` + regexp.QuoteMeta(p) + `title>`)
+	open, end := []byte("<"+p+"title>"), []byte("</"+p+"title>")
 	flat := []byte("<" + p + `txPr><a:bodyPr anchorCtr="false" rot="0"`)
 	upright := []byte("<" + p + `txPr><a:bodyPr anchorCtr="false" rot="-5400000" vert="horz"`)
-	return title.ReplaceAllFunc(b, func(t []byte) []byte {
-		if !bytes.Contains(t, []byte(`rot="-5400000"`)) {
-			return t
+	out := make([]byte, 0, len(b)+64)
+	rest := b
+	for {
+		k := bytes.Index(rest, open)
+		if k < 0 {
+			break
 		}
-		return bytes.Replace(t, flat, upright, 1)
-	})
+		e := bytes.Index(rest[k+len(open):], end)
+		if e < 0 {
+			break
+		}
+		e += k + len(open) + len(end)
+		t := rest[k:e]
+		out = append(out, rest[:k]...)
+		if bytes.Contains(t, []byte(`rot="-5400000"`)) {
+			if i := bytes.Index(t, flat); i >= 0 {
+				out = append(append(append(out, t[:i]...), upright...), t[i+len(flat):]...)
+				rest = rest[e:]
+				continue
+			}
+		}
+		out = append(out, t...)
+		rest = rest[e:]
+	}
+	return append(out, rest...)
 }
 
 // chartXML is the part of a chart part that checkLogChart reads; element

@@ -37,7 +37,10 @@ type grid struct {
 	name       string
 	cells      [][]cell // [row−1][column−1]; a row as long as its last cell set
 	maxRow     int
+	maxCol     int // the last column set in any row: the room a new row is given
 	merges     []merge
+	byRow      [][]merge // merges filed by row (indexMerges), for the rows up to maxRow
+	indexed    int       // how many merges byRow holds
 	freezeRows int
 	freezeCols int
 	widths     map[int]float64 // widths fixed by the sheet's builder
@@ -62,14 +65,39 @@ func (g *grid) set(row, col int, c cell) {
 	}
 	r := g.cells[row-1]
 	if len(r) < col {
-		r = append(r, make([]cell, col-len(r))...)
+		r = g.widen(r, col)
 		g.cells[row-1] = r
 	}
 	c.used = true
 	r[col-1] = c
-	if row > g.maxRow {
-		g.maxRow = row
+	g.maxRow = max(g.maxRow, row)
+	g.maxCol = max(g.maxCol, col)
+}
+
+// reserve makes room in a row for cells up to column cols, setting none:
+// for a block filled column by column, so that each row is allocated once.
+func (g *grid) reserve(row, cols int) {
+	for len(g.cells) < row {
+		g.cells = append(g.cells, nil)
 	}
+	if r := g.cells[row-1]; cap(r) < cols {
+		n := make([]cell, len(r), cols)
+		copy(n, r)
+		g.cells[row-1] = n
+	}
+}
+
+// widen lengthens a row to col cells. A row that must grow is given room
+// for as many columns as the widest row so far (rows of a sheet are
+// mostly alike), so that a row is allocated about once rather than
+// doubled cell by cell.
+func (g *grid) widen(r []cell, col int) []cell {
+	if col <= cap(r) {
+		return r[:col] // the cells past len were never set: zero
+	}
+	n := make([]cell, col, max(col, g.maxCol, 2*cap(r)))
+	copy(n, r)
+	return n
 }
 
 // text writes a string.
@@ -176,42 +204,54 @@ func (g *grid) merged(row, col int) (merge, bool) {
 	if len(g.merges) == 0 {
 		return merge{}, false
 	}
-	for _, m := range g.merges {
-		if m.row == row && m.first <= col && col <= m.last {
-			return m, true
+	if len(g.byRow) != g.maxRow+1 || g.indexed != len(g.merges) {
+		g.indexMerges()
+	}
+	if row < len(g.byRow) {
+		for _, m := range g.byRow[row] {
+			if m.first <= col && col <= m.last {
+				return m, true
+			}
 		}
 	}
 	return merge{}, false
 }
 
+// indexMerges files the merged ranges by row, so that looking a cell up
+// reads its own row's ranges only.
+func (g *grid) indexMerges() {
+	g.byRow = make([][]merge, g.maxRow+1)
+	for _, m := range g.merges {
+		if m.row >= 0 && m.row < len(g.byRow) {
+			g.byRow[m.row] = append(g.byRow[m.row], m)
+		}
+	}
+	g.indexed = len(g.merges)
+}
+
 // fitWidths sets every column's width from its longest content.
 func (g *grid) fitWidths(st *styles) map[int]float64 {
-	need := map[int]int{}
-	maxCol := 0
+	need := make([]int, g.maxCol+1)
 	for i, cols := range g.cells {
 		row := i + 1
-		for k, c := range cols {
-			if !c.used {
+		for k := range cols {
+			c := &cols[k]
+			if !c.used || c.spill {
 				continue
 			}
 			col := k + 1
-			if col > maxCol {
-				maxCol = col
-			}
-			if _, ok := g.merged(row, col); ok || c.spill {
+			if _, ok := g.merged(row, col); ok {
 				continue
 			}
 			n := st.displayWidth(c)
 			if c.wrap && n > int(maxWidth) {
 				n = int(maxWidth)
 			}
-			if n > need[col] {
-				need[col] = n
-			}
+			need[col] = max(need[col], n)
 		}
 	}
-	out := map[int]float64{}
-	for col := 1; col <= maxCol; col++ {
+	out := make(map[int]float64, g.maxCol)
+	for col := 1; col <= g.maxCol; col++ {
 		if w, ok := g.widths[col]; ok {
 			out[col] = w
 			continue
@@ -259,54 +299,8 @@ func (g *grid) flush(f *excelize.File, st *styles, omit bool, title string) erro
 			return fmt.Errorf("workbook: sheet %s: panes: %w", g.name, err)
 		}
 	}
-	for row := 1; row <= g.maxRow; row++ {
-		if row > len(g.cells) || len(g.cells[row-1]) == 0 {
-			continue
-		}
-		cols := g.cells[row-1]
-		vals := make([]any, len(cols))
-		lines := 1
-		for k, c := range cols {
-			if !c.used {
-				continue
-			}
-			col := k + 1
-			if v, ok := c.value.(float64); ok && !finite(v) {
-				return fmt.Errorf("workbook: sheet %s: cell %s would hold %v; this is a bug in the writer", g.name, cellName(col, row), v)
-			}
-			x := excelize.Cell{StyleID: c.style, Formula: c.formula, Value: c.value}
-			if v, ok := c.value.(float64); ok {
-				x.Value = round15(v)
-			}
-			if c.formula != "" && omit {
-				x.Value = nil
-			}
-			vals[col-1] = x
-			if s, ok := c.value.(string); ok && c.wrap {
-				w := widths[col]
-				if m, ok := g.merged(row, col); ok {
-					w = 0
-					for k := m.first; k <= m.last; k++ {
-						w += widths[k]
-					}
-				}
-				if c.small {
-					w *= 11.0 / 9 // characters scale with the font size
-				}
-				if n := wrappedLines(s, w); n > lines {
-					lines = n
-				}
-			}
-		}
-		var opts []excelize.RowOpts
-		if lines > 1 {
-			// A spreadsheet row is at most 409 points high (excelize's
-			// MaxRowHeight, Excel's limit); a longer text is cut there.
-			opts = append(opts, excelize.RowOpts{Height: math.Min(lineHeight*float64(lines), excelize.MaxRowHeight)})
-		}
-		if err := sw.SetRow(cellName(1, row), vals, opts...); err != nil {
-			return fmt.Errorf("workbook: sheet %s: row %d: %w", g.name, row, err)
-		}
+	if err := g.writeRows(sw, widths, omit); err != nil {
+		return err
 	}
 	for _, m := range g.merges {
 		if err := sw.MergeCell(cellName(m.first, m.row), cellName(m.last, m.row)); err != nil {
@@ -323,6 +317,77 @@ func (g *grid) flush(f *excelize.File, st *styles, omit bool, title string) erro
 		}
 	}
 	return nil
+}
+
+// writeRows streams the rows, each with the height its wrapped text needs.
+// One row's cells are assembled in slices reused from row to row, handed
+// to the StreamWriter as pointers (SetRow takes *excelize.Cell as it takes
+// excelize.Cell), so that no cell is boxed per row; a number keeps the
+// interface value it was set with unless round15 changes it.
+func (g *grid) writeRows(sw *excelize.StreamWriter, widths map[int]float64, omit bool) error {
+	cells := make([]excelize.Cell, g.maxCol)
+	vals := make([]any, g.maxCol)
+	var height [1]excelize.RowOpts
+	for row := 1; row <= g.maxRow && row <= len(g.cells); row++ {
+		cols := g.cells[row-1]
+		if len(cols) == 0 {
+			continue
+		}
+		vals := vals[:len(cols)]
+		clear(vals)
+		lines := 1
+		for k := range cols {
+			c := &cols[k]
+			if !c.used {
+				continue
+			}
+			col := k + 1
+			x := &cells[k]
+			*x = excelize.Cell{StyleID: c.style, Formula: c.formula, Value: c.value}
+			if v, ok := c.value.(float64); ok {
+				if !finite(v) {
+					return fmt.Errorf("workbook: sheet %s: cell %s would hold %v; this is a bug in the writer", g.name, cellName(col, row), v)
+				}
+				if r := round15(v); r != v {
+					x.Value = r
+				}
+			}
+			if c.formula != "" && omit {
+				x.Value = nil
+			}
+			vals[k] = x
+			if s, ok := c.value.(string); ok && c.wrap {
+				lines = max(lines, g.wrapLines(s, row, col, c.small, widths))
+			}
+		}
+		opts := height[:0]
+		if lines > 1 {
+			// A spreadsheet row is at most 409 points high (excelize's
+			// MaxRowHeight, Excel's limit); a longer text is cut there.
+			height[0] = excelize.RowOpts{Height: math.Min(lineHeight*float64(lines), excelize.MaxRowHeight)}
+			opts = height[:]
+		}
+		if err := sw.SetRow(cellName(1, row), vals, opts...); err != nil {
+			return fmt.Errorf("workbook: sheet %s: row %d: %w", g.name, row, err)
+		}
+	}
+	return nil
+}
+
+// wrapLines is the lines wrapped text s takes in its cell (row, col): the
+// column's width, or the merged range's, scaled for the small font.
+func (g *grid) wrapLines(s string, row, col int, small bool, widths map[int]float64) int {
+	w := widths[col]
+	if m, ok := g.merged(row, col); ok {
+		w = 0
+		for k := m.first; k <= m.last; k++ {
+			w += widths[k]
+		}
+	}
+	if small {
+		w *= 11.0 / 9 // characters scale with the font size
+	}
+	return wrappedLines(s, w)
 }
 
 // pageSetup sets a sheet to print in landscape on A4, scaled to fit one
@@ -419,25 +484,40 @@ func (g *grid) panes() *excelize.Panes {
 	}
 }
 
-// displayWidth estimates how many characters a cell shows.
-func (st *styles) displayWidth(c cell) int {
+// displayWidth estimates how many characters a cell shows: a text's
+// longest line; a number as its style shows it (the places, thousands
+// separators and suffix of fmtMeta), formatted into a buffer on the stack.
+func (st *styles) displayWidth(c *cell) int {
 	switch v := c.value.(type) {
 	case string:
 		return textWidth(v)
 	case float64:
 		m := st.meta[c.style]
-		var s string
+		var buf [40]byte
+		var n int
 		if m.places < 0 {
-			s = strconv.FormatFloat(v, 'g', 10, 64)
+			n = len(strconv.AppendFloat(buf[:0], v, 'g', 10, 64))
 		} else {
-			s = strconv.FormatFloat(v, 'f', m.places, 64)
+			n = len(strconv.AppendFloat(buf[:0], v, 'f', m.places, 64))
 		}
-		n := len(s)
 		if m.grouping {
-			digits := len(strconv.FormatFloat(math.Abs(math.Trunc(v)), 'f', 0, 64))
-			n += (digits - 1) / 3
+			n += (intDigits(math.Abs(math.Trunc(v))) - 1) / 3
 		}
 		return n + m.suffix
 	}
 	return 0
+}
+
+// intDigits is the number of decimal digits of a whole number x ≥ 0 as
+// strconv writes it in full ('f', no decimals): the smallest k with
+// x < 10^k, compared with the exactly held powers of ten up to 10^22, and
+// counted on the written digits above them.
+func intDigits(x float64) int {
+	for k := 1; k < len(pow10); k++ {
+		if x < pow10[k] {
+			return k
+		}
+	}
+	var buf [400]byte
+	return len(strconv.AppendFloat(buf[:0], x, 'f', 0, 64))
 }

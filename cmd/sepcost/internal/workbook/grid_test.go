@@ -6,6 +6,7 @@ import (
 	"strconv"
 	"strings"
 	"testing"
+	"unicode"
 	"unicode/utf8"
 )
 
@@ -96,7 +97,7 @@ func TestWrappedLinesAsSplit(t *testing.T) {
 		return w
 	}
 	texts := []string{"", " ", "\n", "a", "one two  three\tfour", "Ethyl acetate\u00a0(EtOAc) at 3.50 € per litre\n\nsecond paragraph",
-		"averyveryveryverylongwordthatdoesnotfit and then some", "  leading and trailing  ", "é è ê ë\nà â\n", "x\ny\n\nz"}
+		"averyveryveryverylongwordthatdoesnotfit and then some", "  leading and trailing  ", "é è ê ë\nà â\n", "x\ny\n\nz", "broken \xff\xfe bytes\n\xc3", "ends in a newline\n", "± 3 €\u00a0per\u2003kg"}
 	for _, s := range texts {
 		for _, w := range []float64{0, 1, 2, 5, 8.5, 12, 40, 80} {
 			if got, want := wrappedLines(s, w), split(s, w); got != want {
@@ -105,6 +106,39 @@ func TestWrappedLinesAsSplit(t *testing.T) {
 		}
 		if got, want := textWidth(s), widest(s); got != want {
 			t.Errorf("textWidth(%q) = %d, want %d", s, got, want)
+		}
+	}
+}
+
+// intDigits counts the digits strconv writes for a whole number ('f', no
+// decimals), at and around every power of ten a double holds and beyond,
+// and for the values that are not numbers.
+func TestIntDigitsAsStrconv(t *testing.T) {
+	t.Parallel()
+	xs := []float64{0, 1, 9, 10, 99, 100, 999999999999999, 1e15, 1e22, 1e23, 1.7976931348623157e308, math.NaN(), math.Inf(1)}
+	for k := 0; k <= 308; k++ {
+		p := math.Pow(10, float64(k))
+		xs = append(xs, p, math.Nextafter(p, 0), math.Nextafter(p, math.Inf(1)), math.Trunc(p*0.999), math.Trunc(p*1.5))
+	}
+	rng := rand.New(rand.NewPCG(3, 4))
+	for range 20000 {
+		xs = append(xs, math.Trunc(math.Exp(rng.Float64()*60)))
+	}
+	for _, x := range xs {
+		x = math.Trunc(x) // whole numbers, as displayWidth passes
+		if got, want := intDigits(x), len(strconv.FormatFloat(x, 'f', 0, 64)); got != want {
+			t.Errorf("intDigits(%v) = %d, strconv writes %d characters", x, got, want)
+		}
+	}
+}
+
+// The ASCII table of white space in paraLines agrees with unicode.IsSpace
+// on every ASCII character.
+func TestASCIISpaceAsUnicode(t *testing.T) {
+	t.Parallel()
+	for b := range utf8.RuneSelf {
+		if got, want := asciiSpace[b], unicode.IsSpace(rune(b)); got != want {
+			t.Errorf("asciiSpace[%q] = %v, unicode.IsSpace says %v", rune(b), got, want)
 		}
 	}
 }

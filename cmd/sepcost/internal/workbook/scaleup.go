@@ -141,20 +141,22 @@ func writeScaleUp(f *excelize.File, st *styles, r *scale.Report, m money, method
 	totalCol, productCol := colName(suTotal), colName(suProduct)
 	for j := range r.Methods {
 		first, _ := block(j)
+		name := any(methods[j].sheet) // boxed once for all its rows
+		var reason, equipment boxedText
 		for i := range r.MassesKg {
 			row := at(i, j)
 			k := first + i
 			rw.reset(k)
 			rw.num(suMass, row.CrudeKg*1000, st.figure, false)
-			rw.text(suMethod, methods[j].sheet, st.textIndent) // set off from the mass on its left
+			rw.put(suMethod, excelize.Cell{StyleID: st.textIndent, Value: name}) // set off from the mass on its left
 			if !row.Feasible {
-				rw.text(suFeasible, notFeasible(row.Reason), st.text)
+				rw.put(suFeasible, excelize.Cell{StyleID: st.text, Value: reason.of(row.Reason, notFeasible)})
 				if err := rw.write(sw); err != nil {
 					return err
 				}
 				continue
 			}
-			rw.text(suFeasible, "feasible", st.text)
+			rw.put(suFeasible, excelize.Cell{StyleID: st.text, Value: "feasible"}) // a constant: no box allocated
 			total := totals[i*nm+j]
 			switch {
 			case details && methods[j].mass[i].totalRef != "":
@@ -190,7 +192,7 @@ func writeScaleUp(f *excelize.File, st *styles, r *scale.Report, m money, method
 			rw.num(suElapsed, row.HoursElapsed, st.hours, false)
 			rw.num(suAttended, row.HoursAttended, st.hours, true)
 			if row.Equipment != "" {
-				rw.text(suEquipment, row.Equipment, st.textIndent) // set off from the hours on its left
+				rw.put(suEquipment, excelize.Cell{StyleID: st.textIndent, Value: equipment.of(row.Equipment, nil)}) // set off from the hours on its left
 			}
 			if err := rw.write(sw); err != nil {
 				return err
@@ -379,6 +381,28 @@ func roundSum(buf *[]byte, k int, cols []int, qty []*qtyCol) string {
 	return string(b)
 }
 
+// boxedText keeps the last text a column showed as a cell value, so that
+// rows in a run with the same words (a method's equipment, its reason for
+// not being feasible) share one value rather than each wording and boxing
+// its own.
+type boxedText struct {
+	key string
+	val any
+}
+
+// of is the cell value for key: word(key), or key itself when word is nil.
+func (b *boxedText) of(key string, word func(string) string) any {
+	if b.val == nil || key != b.key {
+		b.key = key
+		if word != nil {
+			b.val = word(key)
+		} else {
+			b.val = key
+		}
+	}
+	return b.val
+}
+
 // rowWriter assembles one streamed row in reused slices: vals holds
 // pointers into cells, so that no cell is allocated per row.
 type rowWriter struct {
@@ -403,10 +427,6 @@ func (rw *rowWriter) reset(row int) {
 func (rw *rowWriter) put(col int, c excelize.Cell) {
 	rw.cells[col-1] = c
 	rw.vals[col-1] = &rw.cells[col-1]
-}
-
-func (rw *rowWriter) text(col int, s string, style int) {
-	rw.put(col, excelize.Cell{StyleID: style, Value: s})
 }
 
 // num writes v, or, where v is not a finite number, "n/a" when na is set
@@ -518,7 +538,7 @@ func (w *widths) fit() map[int]float64 {
 	for col := 1; col < len(w.need); col++ {
 		n := w.need[col]
 		if w.style[col] != 0 {
-			d := w.st.displayWidth(cell{value: w.maxAbs[col], style: w.style[col]})
+			d := w.st.displayWidth(&cell{value: w.maxAbs[col], style: w.style[col]})
 			if w.neg[col] {
 				d++
 			}
@@ -633,6 +653,7 @@ func scaleUpPass1(st *styles, r *scale.Report, methods []methodOut, rows []scale
 	}
 	for j := range r.Methods {
 		w.text(suMethod, textWidth(methods[j].sheet))
+		measured := "" // the equipment last measured: a run of rows with the same words is measured once
 		for i := range r.MassesKg {
 			row := at(i, j)
 			w.num(suMass, row.CrudeKg*1000, st.figure)
@@ -649,7 +670,10 @@ func scaleUpPass1(st *styles, r *scale.Report, methods []methodOut, rows []scale
 			w.num(suPMI, row.PMI, st.figure)
 			w.num(suElapsed, row.HoursElapsed, st.hours)
 			w.num(suAttended, row.HoursAttended, st.hours)
-			w.text(suEquipment, textWidth(row.Equipment))
+			if row.Equipment != measured {
+				w.text(suEquipment, textWidth(row.Equipment))
+				measured = row.Equipment
+			}
 			plot := func(col int, v float64) {
 				if finite(v) {
 					points[col]++

@@ -58,6 +58,7 @@ func chartData(g *grid, st *styles, r *scale.Report, tab summaryTable, col int) 
 	g.text(2, col, "Crude mass, g", st.header)
 	lo, hi := math.Inf(1), math.Inf(-1)
 	for i, kg := range r.MassesKg {
+		g.reserve(b.first+i, col+len(r.Methods)) // filled column by column below
 		g.num(b.first+i, col, kg*1000, st.figure)
 	}
 	for j, meth := range r.Methods {

@@ -195,8 +195,7 @@ func WriteTables(w io.Writer, currency string, places int32, tables []Table) err
 	if err := f.SetCalcProps(&excelize.CalcPropsOptions{FullCalcOnLoad: &[]bool{true}[0]}); err != nil {
 		return err
 	}
-	_, err := f.WriteTo(w)
-	return err
+	return writePackage(f, w)
 }
 
 func tableCell(c Cell, styles map[string]int) excelize.Cell {

@@ -63,19 +63,27 @@ func capitalize(s string) string {
 	return string(unicode.ToUpper(r)) + s[n:]
 }
 
-// textWidth is the length in characters of the longest line of s.
+// textWidth is the length in characters (runes, as
+// utf8.RuneCountInString counts them) of the longest line of s, counted in
+// one pass: ASCII a byte at a time, other runes decoded.
 func textWidth(s string) int {
-	w := 0
-	for {
-		line, rest, more := strings.Cut(s, "\n")
-		if n := utf8.RuneCountInString(line); n > w {
-			w = n
+	w, n := 0, 0
+	for k := 0; k < len(s); {
+		b := s[k]
+		switch {
+		case b == '\n':
+			w, n = max(w, n), 0
+			k++
+			continue
+		case b < utf8.RuneSelf:
+			k++
+		default:
+			_, size := utf8.DecodeRuneInString(s[k:])
+			k += size
 		}
-		if !more {
-			return w
-		}
-		s = rest
+		n++
 	}
+	return max(w, n)
 }
 
 // wrappedLines estimates how many lines s takes when wrapped in a column
@@ -118,8 +126,17 @@ func paraLines(para string, per int) int {
 			used -= per
 		}
 	}
-	for _, r := range para {
-		if unicode.IsSpace(r) {
+	for k := 0; k < len(para); {
+		space := false
+		if b := para[k]; b < utf8.RuneSelf { // ASCII: one byte, a table look-up
+			space = asciiSpace[b]
+			k++
+		} else {
+			r, n := utf8.DecodeRuneInString(para[k:])
+			space = unicode.IsSpace(r)
+			k += n
+		}
+		if space {
 			if inWord {
 				word()
 			}
@@ -133,6 +150,10 @@ func paraLines(para string, per int) int {
 	}
 	return n
 }
+
+// asciiSpace marks the ASCII characters unicode.IsSpace counts as white
+// space: tab, newline, vertical tab, form feed, carriage return, space.
+var asciiSpace = [utf8.RuneSelf]bool{'\t': true, '\n': true, '\v': true, '\f': true, '\r': true, ' ': true}
 
 // unitPowers writes the powers in a unit as a reader writes them: m^2 as
 // m², m3 as m³ (the units package spells them for typing).

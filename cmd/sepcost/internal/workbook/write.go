@@ -26,6 +26,9 @@
 package workbook
 
 import (
+	"archive/zip"
+	"bytes"
+	"errors"
 	"fmt"
 	"io"
 	"regexp"
@@ -86,10 +89,53 @@ func Write(w io.Writer, r *scale.Report, opt Options) error {
 		return err
 	}
 	defer f.Close()
-	if err := f.Write(w); err != nil {
+	if err := writePackage(f, w); err != nil {
 		return fmt.Errorf("workbook: writing the file: %w", err)
 	}
 	return nil
+}
+
+// writePackage writes the workbook's zip package straight to w. excelize's
+// File.Write assembles the whole package in a bytes.Buffer and then copies
+// it to w; its zip writer hook (File.SetZipWriter) is handed that buffer,
+// and the hook here writes to w instead, so the buffer stays empty and
+// the package is compressed into w part by part. The bytes are those of
+// the buffered path (the same archive/zip writer, the same parts). What
+// the buffered path adds is a rewrite of the local headers of parts of
+// more than 4 GiB (zip64); no part of these workbooks comes near that.
+// A failed write to w is reported even where excelize would not pass it
+// on.
+func writePackage(f *excelize.File, w io.Writer) error {
+	ew := &errWriter{w: w}
+	hooked := false
+	f.SetZipWriter(func(io.Writer) excelize.ZipWriter { hooked = true; return zip.NewWriter(ew) })
+	var rest bytes.Buffer // what excelize copies out of its own buffer: nothing when hooked
+	err := f.Write(&rest)
+	switch {
+	case err != nil || rest.Len() == 0:
+	case hooked:
+		err = fmt.Errorf("excelize wrote %d bytes beside its zip writer", rest.Len())
+	default: // a library that no longer calls the hook: its buffer is the package
+		_, err = ew.Write(rest.Bytes())
+	}
+	return errors.Join(err, ew.err)
+}
+
+// errWriter passes writes to w and keeps the first error.
+type errWriter struct {
+	w   io.Writer
+	err error
+}
+
+func (e *errWriter) Write(p []byte) (int, error) {
+	if e.err != nil {
+		return 0, e.err
+	}
+	n, err := e.w.Write(p)
+	if err != nil {
+		e.err = err
+	}
+	return n, err
 }
 
 // checkCell is a money cell and the ledger value it must show; tests use
