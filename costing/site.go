@@ -14,16 +14,16 @@ import (
 // rule's loading on a column (no prices needed), choices every candidate
 // the plan prices. A site that lacks what a column needs makes every run
 // not feasible, with the reason.
-func chromMethod(sc *scenario.Scenario, coef source.Set, eq *equipment.Table, quiet bool) (run func(float64) usage.Usage, choices func(float64) []usage.Usage) {
+func chromMethod(sc *scenario.Scenario, coef source.Set, eq *equipment.Table, quiet bool) (run func(float64) usage.Usage, choices func(float64) []usage.Usage, lean LeanChoices) {
 	site := chromSite(sc, eq)
 	if why := siteProblem(site, eq); why != "" {
 		run = func(m float64) usage.Usage {
 			return usage.Usage{Method: chrom.Method, CrudeKg: m, ProductInKg: m * sc.Purity, Reason: why}
 		}
-		return run, func(m float64) []usage.Usage { return []usage.Usage{run(m)} }
+		return run, func(m float64) []usage.Usage { return []usage.Usage{run(m)} }, nil
 	}
 	model := chrom.NewModelWith(sc, coef, site, quiet)
-	return model.Run, model.Candidates
+	return model.Run, model.Candidates, model.Lean
 }
 
 // chromSite is the chromatography model's view of the site's equipment:

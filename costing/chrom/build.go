@@ -36,18 +36,32 @@ type runPlan struct {
 	colHours   float64 // h over all runs
 }
 
+// bedCut is a candidate's plates and cut at its own bed, which depend
+// only on the equipment, the loading and the analysis.
+type bedCut struct {
+	plates float64
+	cut    Cut
+}
+
 // build fills one candidate's usage: equipment, cut at its own bed,
-// eluent, fractions, time, energy, product, waste and demands.
-func build(u *usage.Usage, a analysis, sc *scenario.Scenario, coef source.Set, site Site, e equip, ratio float64) {
+// eluent, fractions, time, energy, product, waste and demands. known,
+// when not nil, is the plates and cut an earlier build of the same
+// candidate found; build returns those it used.
+func build(u *usage.Usage, a analysis, sc *scenario.Scenario, coef source.Set, site Site, e equip, ratio float64, known *bedCut) bedCut {
 	p := &runPlan{e: e, ratio: ratio, runs: float64(e.runs), crudeRun: u.CrudeKg / float64(e.runs)}
 	get := coef.Get
 	p.v0 = e.silicaRun * ColumnVolumePerMass(get(KeyBedDensity), get(KeySkeletalDensity))
-	p.plates = platesFor(coef, e.bedHeight)
-	p.cut = a.cutAt(p.crudeRun/e.silicaRun, p.plates)
+	if known != nil {
+		p.plates, p.cut = known.plates, known.cut
+	} else {
+		p.plates = platesFor(coef, e.bedHeight)
+		p.cut = a.cutAt(p.crudeRun/e.silicaRun, p.plates)
+	}
+	bc := bedCut{plates: p.plates, cut: p.cut}
 	if !usable(p.cut, coef) {
 		u.Feasible = false
 		u.Reason = fmt.Sprintf("on %s the bed of %.0f cm (%.0f plates) gives a cut of %.1f %% recovery at %.4g %% purity", e.name, e.bedHeight*100, p.plates, p.cut.Recovery*100, a.target*100)
-		return
+		return bc
 	}
 	p.equipmentFigures(u, coef)
 	p.eluent(u, sc, coef)
@@ -62,6 +76,7 @@ func build(u *usage.Usage, a analysis, sc *scenario.Scenario, coef source.Set, s
 	if second != nil {
 		mergeRerun(u, second)
 	}
+	return bc
 }
 
 // equipmentFigures reports the equipment and the silica.

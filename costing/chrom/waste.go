@@ -103,6 +103,9 @@ func (p *runPlan) recover(u *usage.Usage, liquid scenario.Volumes, coef source.S
 		recovered[id] = r
 		liquid[id] -= r
 	}
+	if u.Quiet {
+		return recovered
+	}
 	u.Notef(usage.Info, "%.0f %% of the spent eluent is sent to distillation for reuse; at a yield of %.0f %% it returns %.0f %% (at most %.0f %% of a later run's eluent may be recovered solvent); recovered solvent is credited at its purchase price and its distillation charged as electricity.",
 		share*100, coef.Get(KeyRecoveryYield)*100, math.Min(eff, limit)*100, limit*100)
 	return recovered
