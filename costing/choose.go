@@ -26,7 +26,7 @@ func (p *Plan) choose(j int, crudeKg float64, t *prices.Table) (usage.Usage, led
 	m := p.Methods[j]
 	if m.Choices == nil {
 		u := m.Run(crudeKg)
-		l, err := ledger.Price(u, t)
+		l, err := p.pricer(t).Price(u)
 		return u, l, err
 	}
 	cands, full := leanChoices(m, crudeKg)
@@ -119,7 +119,7 @@ func (p *Plan) priceCandidates(cands []usage.Usage, t *prices.Table) ([]priced, 
 		if ranked && lo[i] > limit {
 			continue
 		}
-		l, err := ledger.Price(c.u, t)
+		l, err := p.pricer(t).Price(c.u)
 		if err != nil {
 			return ps[:i+1], err
 		}
@@ -137,6 +137,17 @@ func (p *Plan) rates(t *prices.Table) *ledger.Rates {
 	r := ledger.NewRates(t)
 	p.rateCache.Store(t, r)
 	return r
+}
+
+// pricer is the price table prepared for pricing (ledger.NewPricer: the
+// ledgers of ledger.Price), made once per table.
+func (p *Plan) pricer(t *prices.Table) *ledger.Pricer {
+	if v, ok := p.pricers.Load(t); ok {
+		return v.(*ledger.Pricer)
+	}
+	pr := ledger.NewPricer(t)
+	p.pricers.Store(t, pr)
+	return pr
 }
 
 // describeChoices lists the four cheapest feasible candidates with their

@@ -54,6 +54,7 @@ type Plan struct {
 
 	sitePrices sync.Map // *prices.Table → the same with the equipment's charges
 	rateCache  sync.Map // *prices.Table → its *ledger.Rates
+	pricers    sync.Map // *prices.Table → its *ledger.Pricer
 }
 
 // Options are what Prepare takes besides the scenario.
