@@ -6,6 +6,7 @@ import (
 
 	"sepcost/costing/scenario"
 	"sepcost/costing/source"
+	"sepcost/costing/usage"
 )
 
 // analysis is what the TLC, the loading rules and the band model say about
@@ -24,6 +25,30 @@ type analysis struct {
 	why         string  // which rule and why
 	plates      float64 // plates of a bed of the reference height
 	trade       []tradeRow
+	// words are each solvent's figure key and ledger labels, worded once
+	// for every candidate (solventWords).
+	words map[string]solventWords
+}
+
+// solventWords are the words a candidate gives one solvent: its figure
+// key and label, and the labels of its purchase and of its recovery.
+type solventWords struct {
+	key                    usage.FigureKey
+	label, used, recovered string
+}
+
+// wordsOf is the words for solvent id: worded once in analyse, or here
+// for a solvent the section does not name.
+func (a analysis) wordsOf(id string) solventWords {
+	if w, ok := a.words[id]; ok {
+		return w
+	}
+	return newSolventWords(id)
+}
+
+// newSolventWords words one solvent.
+func newSolventWords(id string) solventWords {
+	return solventWords{key: usage.SolventFigure(id), label: "solvent: " + id, used: "solvent: " + id, recovered: "recovered for reuse: " + id}
 }
 
 // tradeRow is one loading of the trade-off table.
@@ -44,6 +69,10 @@ func analyse(sc *scenario.Scenario, coef source.Set) analysis {
 	ch := sc.Chromatography
 	get := coef.Get
 	a := analysis{sc: sc, sep: Separation{ProductRf: ch.ProductRf, ImpurityRf: ch.ImpurityRf, Product: sc.Purity, Impurity: sc.NearestImpurity}}
+	a.words = map[string]solventWords{}
+	for _, id := range ch.Solvents() {
+		a.words[id] = newSolventWords(id)
+	}
 	// Rounded to 1e-9 so that Rf values written to two places (0.35 − 0.25)
 	// compare as the chemist wrote them, not as 0.0999999….
 	a.dRf = math.Round(math.Abs(ch.ProductRf-ch.ImpurityRf)*1e9) / 1e9

@@ -3,6 +3,7 @@ package chrom
 import (
 	"fmt"
 	"math"
+	"strconv"
 
 	"sepcost/costing/scenario"
 	"sepcost/costing/source"
@@ -72,7 +73,7 @@ func build(u *usage.Usage, a analysis, sc *scenario.Scenario, coef source.Set, s
 	if sc.Chromatography.RerunMixed {
 		second = p.rerun(u, a, sc, coef, site)
 	}
-	p.wasteAndDemands(u, sc, coef)
+	p.wasteAndDemands(u, a, sc, coef)
 	if second != nil {
 		mergeRerun(u, second)
 	}
@@ -82,14 +83,6 @@ func build(u *usage.Usage, a analysis, sc *scenario.Scenario, coef source.Set, s
 // equipmentFigures reports the equipment and the silica.
 func (p *runPlan) equipmentFigures(u *usage.Usage, coef source.Set) {
 	e, fig := p.e, u.AddFigure
-	if e.cartridge != nil {
-		u.Equipment = fmt.Sprintf("%s (prepacked)", e.name)
-	} else {
-		u.Equipment = fmt.Sprintf("%s, %.0f cm bed", e.name, e.bedHeight*100)
-	}
-	if e.runs > 1 {
-		u.Equipment += fmt.Sprintf(" × %d runs", e.runs)
-	}
 	fig("ratio_used", "silica : crude used (the loading chosen)", e.silicaRun*p.runs/u.CrudeKg, "")
 	fig("silica_needed", "silica needed at the loading chosen", u.CrudeKg*p.ratio, "g")
 	fig("column_diameter", "column inner diameter", e.diameter, "mm")
@@ -210,7 +203,32 @@ func (p *runPlan) times(u *usage.Usage, sc *scenario.Scenario, coef source.Set, 
 	p.colHours = elapsed - p.evapHours
 	p.workingDays(u, coef, elapsed, attended)
 	u.AddFigure("flow", "flow rate", p.flow, "mL/min")
-	u.Equipment += "; " + p.ev.Name
+	u.Equipment = p.equipmentWords()
+}
+
+// equipmentWords names the equipment: "name (prepacked)" or "name, H cm
+// bed", " × n runs" when there are several, and "; " the evaporator's
+// name; written in one buffer (no fmt), as fmt's %s, %.0f and %d write
+// them.
+func (p *runPlan) equipmentWords() string {
+	e := p.e
+	b := make([]byte, 0, len(e.name)+len(p.ev.Name)+32)
+	b = append(b, e.name...)
+	if e.cartridge != nil {
+		b = append(b, " (prepacked)"...)
+	} else {
+		b = append(b, ", "...)
+		b = strconv.AppendFloat(b, e.bedHeight*100, 'f', 0, 64)
+		b = append(b, " cm bed"...)
+	}
+	if e.runs > 1 {
+		b = append(b, " × "...)
+		b = strconv.AppendInt(b, int64(e.runs), 10)
+		b = append(b, " runs"...)
+	}
+	b = append(b, "; "...)
+	b = append(b, p.ev.Name...)
+	return string(b)
 }
 
 // workingDays reports runs per day and elapsed working days, and warns

@@ -72,12 +72,17 @@ func (md *Model) start(crudeKg float64, quiet bool) usage.Usage {
 	u := usage.New(Method, crudeKg, crudeKg*md.sc.Purity)
 	u.Quiet = quiet
 	u.Figures = append(u.Figures, md.head.Figures...)
+	u.Activities = make([]usage.Activity, 0, activities)
 	if !quiet {
 		u.Notes = append([]usage.Note(nil), md.head.Notes...)
 		u.Tables = append([]usage.Table(nil), md.head.Tables...)
 	}
 	return u
 }
+
+// activities is the room start makes for a candidate's activities: pack
+// or mount, load, elute, TLC, combine, clean, dry load, evaporate.
+const activities = 8
 
 // Run is the package-level Run on a prepared model.
 func (md *Model) Run(crudeKg float64) usage.Usage {

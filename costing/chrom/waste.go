@@ -16,7 +16,7 @@ import (
 // solvent, evaporated before the column, is collected on its own; the rest
 // of the eluent, with the impurities and mixed fractions, is liquid waste;
 // a share distilled for reuse leaves as recovered solvent.
-func (p *runPlan) wasteAndDemands(u *usage.Usage, sc *scenario.Scenario, coef source.Set) {
+func (p *runPlan) wasteAndDemands(u *usage.Usage, a analysis, sc *scenario.Scenario, coef source.Set) {
 	ch, get, book := sc.Chromatography, coef.Get, sc.Solvents
 	used := scenario.Volumes{}
 	for id, v := range p.used {
@@ -36,7 +36,8 @@ func (p *runPlan) wasteAndDemands(u *usage.Usage, sc *scenario.Scenario, coef so
 	tlcPlates := p.plates2 * p.runs
 	u.AddFigure(usage.FigSolventTotal, "solvent used", used.Total(), "L")
 	for _, id := range used.IDs() {
-		u.AddFigure(usage.SolventFigure(id), "solvent: "+id, used[id], "L")
+		w := a.wordsOf(id)
+		u.AddFigure(w.key, w.label, used[id], "L")
 	}
 	liquid := scenario.Volumes{}
 	for id, v := range used {
@@ -72,7 +73,7 @@ func (p *runPlan) wasteAndDemands(u *usage.Usage, sc *scenario.Scenario, coef so
 	if dry.Total() > 0 {
 		u.Waste = append(u.Waste, solventStream("dry-load solvent (evaporated before the column)", dry, book))
 	}
-	p.demands(u, sc, coef, used, recovered, silicaTotal, sand, tlcPlates, lostMixed+lostSilica)
+	p.demands(u, a, sc, coef, used, recovered, silicaTotal, sand, tlcPlates, lostMixed+lostSilica)
 }
 
 // solventStream is a stream of solvents, halogenated when any is.
@@ -112,7 +113,7 @@ func (p *runPlan) recover(u *usage.Usage, liquid scenario.Volumes, coef source.S
 }
 
 // demands asks the ledger for every quantity of the candidate.
-func (p *runPlan) demands(u *usage.Usage, sc *scenario.Scenario, coef source.Set, used, recovered scenario.Volumes, silica, sand, tlcPlates, lost float64) {
+func (p *runPlan) demands(u *usage.Usage, a analysis, sc *scenario.Scenario, coef source.Set, used, recovered scenario.Volumes, silica, sand, tlcPlates, lost float64) {
 	book, get := sc.Solvents, coef.Get
 	evap := scenario.Volumes{}
 	for id, v := range p.evaporated {
@@ -132,7 +133,7 @@ func (p *runPlan) demands(u *usage.Usage, sc *scenario.Scenario, coef source.Set
 		d(ItemSand, "sand layers", usage.Materials, sand, units.Mass)
 	}
 	for _, id := range used.IDs() {
-		d(id, "solvent: "+id, usage.Materials, used[id], units.Volume)
+		d(id, a.wordsOf(id).used, usage.Materials, used[id], units.Volume)
 	}
 	u.AddCountedDemand(ItemTLCPlate, "TLC plates for fractions", usage.Materials, tlcPlates, tlcPlates*get(KeyPlateMass))
 	d(ItemLabour, "hands-on time", usage.Labour, attended*3600, units.Time)
@@ -142,7 +143,7 @@ func (p *runPlan) demands(u *usage.Usage, sc *scenario.Scenario, coef source.Set
 	d(ItemProduct, "product lost (mixed fractions, retained on silica)", usage.ProductLoss, lost, units.Mass)
 	if len(recovered) > 0 {
 		for _, id := range recovered.IDs() {
-			d(id, "recovered for reuse: "+id, usage.Credit, -recovered[id], units.Volume)
+			d(id, a.wordsOf(id).recovered, usage.Credit, -recovered[id], units.Volume)
 		}
 		d(ItemElectricity, "distilling the recovered eluent", usage.Energy, evaporationElectricity(coef, heatToEvaporate(book, recovered, get(KeyBathDelta))), units.Energy)
 	}

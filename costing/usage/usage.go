@@ -73,12 +73,29 @@ const (
 // WasteClasses lists the classes in print order.
 var WasteClasses = []WasteClass{NonHalogenated, Halogenated, WetSolids, Aqueous}
 
-// DisposalItem is the price-table item for disposing of a class.
-func (c WasteClass) DisposalItem() string { return "disposal: " + string(c) }
+// DisposalItem is the price-table item for disposing of a class:
+// "disposal: " and the class (the classes' items are constants, so that
+// naming one allocates nothing).
+func (c WasteClass) DisposalItem() string {
+	switch c {
+	case NonHalogenated:
+		return disposalPrefix + string(NonHalogenated)
+	case Halogenated:
+		return disposalPrefix + string(Halogenated)
+	case WetSolids:
+		return disposalPrefix + string(WetSolids)
+	case Aqueous:
+		return disposalPrefix + string(Aqueous)
+	}
+	return disposalPrefix + string(c)
+}
+
+// disposalPrefix begins a disposal item's name and a disposal demand's label.
+const disposalPrefix = "disposal: "
 
 // DisposalLabel is the ledger label of the demand that pays for disposing
 // of a stream; reports use it to find the stream's disposal line.
-func (s Stream) DisposalLabel() string { return "disposal: " + s.Name }
+func (s Stream) DisposalLabel() string { return disposalPrefix + s.Name }
 
 // Composition is the stream's make-up by mass, largest first:
 // "n-heptane 72.1 %; ethyl acetate 20.3 %; ...".
