@@ -5,6 +5,7 @@ import (
 	"math"
 
 	"sepcost/costing/scenario"
+	"sepcost/costing/solvent"
 	"sepcost/costing/source"
 	"sepcost/costing/usage"
 )
@@ -25,30 +26,37 @@ type analysis struct {
 	why         string  // which rule and why
 	plates      float64 // plates of a bed of the reference height
 	trade       []tradeRow
-	// words are each solvent's figure key and ledger labels, worded once
-	// for every candidate (solventWords).
-	words map[string]solventWords
+	// solvents are each solvent's words and properties, found and worded
+	// once for every candidate (solventOf).
+	solvents map[string]solventInfo
 }
 
-// solventWords are the words a candidate gives one solvent: its figure
-// key and label, and the labels of its purchase and of its recovery.
-type solventWords struct {
+// solventInfo is what a candidate needs of one solvent: its figure key and
+// label, the labels of its purchase and of its recovery, and the
+// properties the waste and the evaporation read.
+type solventInfo struct {
 	key                    usage.FigureKey
 	label, used, recovered string
+	density                float64 // kg/m³
+	cp, hvap               float64 // J/(kg·K), J/kg
+	halogenated            bool
 }
 
-// wordsOf is the words for solvent id: worded once in analyse, or here
-// for a solvent the section does not name.
-func (a analysis) wordsOf(id string) solventWords {
-	if w, ok := a.words[id]; ok {
-		return w
+// solventOf is solvent id's words and properties: found in analyse, or
+// here for a solvent the section does not name.
+func (a analysis) solventOf(id string) solventInfo {
+	if si, ok := a.solvents[id]; ok {
+		return si
 	}
-	return newSolventWords(id)
+	return newSolventInfo(a.sc.Solvents, id)
 }
 
-// newSolventWords words one solvent.
-func newSolventWords(id string) solventWords {
-	return solventWords{key: usage.SolventFigure(id), label: "solvent: " + id, used: "solvent: " + id, recovered: "recovered for reuse: " + id}
+// newSolventInfo words one solvent and reads its properties from the
+// scenario's book.
+func newSolventInfo(b *solvent.Book, id string) solventInfo {
+	s := mustSolvent(b, id)
+	return solventInfo{key: usage.SolventFigure(id), label: "solvent: " + id, used: "solvent: " + id, recovered: "recovered for reuse: " + id,
+		density: s.Density.V, cp: s.SpecificCp(), hvap: s.SpecificHVap(), halogenated: s.Halogenated}
 }
 
 // tradeRow is one loading of the trade-off table.
@@ -69,9 +77,9 @@ func analyse(sc *scenario.Scenario, coef source.Set) analysis {
 	ch := sc.Chromatography
 	get := coef.Get
 	a := analysis{sc: sc, sep: Separation{ProductRf: ch.ProductRf, ImpurityRf: ch.ImpurityRf, Product: sc.Purity, Impurity: sc.NearestImpurity}}
-	a.words = map[string]solventWords{}
+	a.solvents = map[string]solventInfo{}
 	for _, id := range ch.Solvents() {
-		a.words[id] = newSolventWords(id)
+		a.solvents[id] = newSolventInfo(sc.Solvents, id)
 	}
 	// Rounded to 1e-9 so that Rf values written to two places (0.35 − 0.25)
 	// compare as the chemist wrote them, not as 0.0999999….

@@ -69,7 +69,10 @@ func NewModelWith(sc *scenario.Scenario, coef source.Set, site Site, quiet bool)
 // unless quiet its notes and tables, copied so that the candidate can add
 // to them.
 func (md *Model) start(crudeKg float64, quiet bool) usage.Usage {
-	u := usage.New(Method, crudeKg, crudeKg*md.sc.Purity)
+	// A candidate adds 31 figures of its own, one per solvent and two
+	// for a re-run; 13 demands, one per solvent and the recovery's.
+	room := len(md.head.Figures) + 33 + len(md.a.solvents)
+	u := usage.NewWithRoom(Method, crudeKg, crudeKg*md.sc.Purity, room, 13+2*len(md.a.solvents))
 	u.Quiet = quiet
 	u.Figures = append(u.Figures, md.head.Figures...)
 	u.Activities = make([]usage.Activity, 0, activities)
@@ -309,11 +312,11 @@ func mustSolvent(b *solvent.Book, id string) solvent.Solvent {
 }
 
 // heatToEvaporate is the heat to warm and vaporise the volumes (J).
-func heatToEvaporate(b *solvent.Book, v scenario.Volumes, warmup float64) float64 {
+func (a analysis) heatToEvaporate(v scenario.Volumes, warmup float64) float64 {
 	heat := 0.0
 	for _, id := range v.IDs() {
-		s := mustSolvent(b, id)
-		heat += v[id] * s.Density.V * (s.SpecificCp()*warmup + s.SpecificHVap())
+		s := a.solventOf(id)
+		heat += v[id] * s.density * (s.cp*warmup + s.hvap)
 	}
 	return heat
 }

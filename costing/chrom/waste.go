@@ -4,7 +4,6 @@ import (
 	"math"
 
 	"sepcost/costing/scenario"
-	"sepcost/costing/solvent"
 	"sepcost/costing/source"
 	"sepcost/costing/units"
 	"sepcost/costing/usage"
@@ -17,7 +16,7 @@ import (
 // of the eluent, with the impurities and mixed fractions, is liquid waste;
 // a share distilled for reuse leaves as recovered solvent.
 func (p *runPlan) wasteAndDemands(u *usage.Usage, a analysis, sc *scenario.Scenario, coef source.Set) {
-	ch, get, book := sc.Chromatography, coef.Get, sc.Solvents
+	ch, get := sc.Chromatography, coef.Get
 	used := scenario.Volumes{}
 	for id, v := range p.used {
 		used[id] = v * p.runs
@@ -36,8 +35,8 @@ func (p *runPlan) wasteAndDemands(u *usage.Usage, a analysis, sc *scenario.Scena
 	tlcPlates := p.plates2 * p.runs
 	u.AddFigure(usage.FigSolventTotal, "solvent used", used.Total(), "L")
 	for _, id := range used.IDs() {
-		w := a.wordsOf(id)
-		u.AddFigure(w.key, w.label, used[id], "L")
+		si := a.solventOf(id)
+		u.AddFigure(si.key, si.label, used[id], "L")
 	}
 	liquid := scenario.Volumes{}
 	for id, v := range used {
@@ -59,32 +58,32 @@ func (p *runPlan) wasteAndDemands(u *usage.Usage, a analysis, sc *scenario.Scena
 	lostSilica := u.ProductInKg * get(KeyRetainedLoss)
 	u.ImpurityOutKg = impurityInProduct
 	u.AddFigure(usage.FigImpurityInProduct, "nearest impurity in the isolated product", impurityInProduct, "g")
-	spent := solventStream("spent eluent and mixed fractions", liquid, book)
+	spent := a.solventStream("spent eluent and mixed fractions", liquid)
 	spent.Components = append(spent.Components,
 		usage.Component{Name: "impurities", Kg: u.CrudeKg - u.ProductInKg - impurityInProduct - p.rerunI},
 		usage.Component{Name: "product in mixed fractions", Kg: lostMixed})
 	wet := usage.Stream{Name: "solvent-wet silica, sand and TLC plates", Class: usage.WetSolids}
 	wet.Components = append(wet.Components, usage.Component{Name: "silica gel", Kg: silicaWaste}, usage.Component{Name: "sea sand", Kg: sand}, usage.Component{Name: "TLC plates", Kg: tlcPlates * get(KeyPlateMass)})
 	for _, id := range wetSolvent.IDs() {
-		wet.Components = append(wet.Components, usage.Component{Name: id, Kg: wetSolvent[id] * mustSolvent(book, id).Density.V, Solvent: true})
+		wet.Components = append(wet.Components, usage.Component{Name: id, Kg: wetSolvent[id] * a.solventOf(id).density, Solvent: true})
 	}
 	wet.Components = append(wet.Components, usage.Component{Name: "product retained on silica", Kg: lostSilica})
 	u.Waste = []usage.Stream{spent, wet}
 	if dry.Total() > 0 {
-		u.Waste = append(u.Waste, solventStream("dry-load solvent (evaporated before the column)", dry, book))
+		u.Waste = append(u.Waste, a.solventStream("dry-load solvent (evaporated before the column)", dry))
 	}
 	p.demands(u, a, sc, coef, used, recovered, silicaTotal, sand, tlcPlates, lostMixed+lostSilica)
 }
 
 // solventStream is a stream of solvents, halogenated when any is.
-func solventStream(name string, v scenario.Volumes, book *solvent.Book) usage.Stream {
+func (a analysis) solventStream(name string, v scenario.Volumes) usage.Stream {
 	st := usage.Stream{Name: name, Class: usage.NonHalogenated, VolumeM3: v.Total()}
 	for _, id := range v.IDs() {
-		s := mustSolvent(book, id)
-		if s.Halogenated && v[id] > 0 {
+		s := a.solventOf(id)
+		if s.halogenated && v[id] > 0 {
 			st.Class = usage.Halogenated
 		}
-		st.Components = append(st.Components, usage.Component{Name: id, Kg: v[id] * s.Density.V, Solvent: true})
+		st.Components = append(st.Components, usage.Component{Name: id, Kg: v[id] * s.density, Solvent: true})
 	}
 	return st
 }
@@ -114,7 +113,7 @@ func (p *runPlan) recover(u *usage.Usage, liquid scenario.Volumes, coef source.S
 
 // demands asks the ledger for every quantity of the candidate.
 func (p *runPlan) demands(u *usage.Usage, a analysis, sc *scenario.Scenario, coef source.Set, used, recovered scenario.Volumes, silica, sand, tlcPlates, lost float64) {
-	book, get := sc.Solvents, coef.Get
+	get := coef.Get
 	evap := scenario.Volumes{}
 	for id, v := range p.evaporated {
 		evap[id] = v * p.runs
@@ -122,7 +121,7 @@ func (p *runPlan) demands(u *usage.Usage, a analysis, sc *scenario.Scenario, coe
 	for id, v := range p.dryLoad {
 		evap[id] += v * p.runs
 	}
-	heat := heatToEvaporate(book, evap, get(KeyBathDelta))
+	heat := a.heatToEvaporate(evap, get(KeyBathDelta))
 	u.AddFigure("evaporation_heat", "heat to evaporate product fractions and dry-load solvent", heat, "kWh")
 	_, attended := u.Hours()
 	d := u.AddDemand
@@ -133,7 +132,7 @@ func (p *runPlan) demands(u *usage.Usage, a analysis, sc *scenario.Scenario, coe
 		d(ItemSand, "sand layers", usage.Materials, sand, units.Mass)
 	}
 	for _, id := range used.IDs() {
-		d(id, a.wordsOf(id).used, usage.Materials, used[id], units.Volume)
+		d(id, a.solventOf(id).used, usage.Materials, used[id], units.Volume)
 	}
 	u.AddCountedDemand(ItemTLCPlate, "TLC plates for fractions", usage.Materials, tlcPlates, tlcPlates*get(KeyPlateMass))
 	d(ItemLabour, "hands-on time", usage.Labour, attended*3600, units.Time)
@@ -143,8 +142,8 @@ func (p *runPlan) demands(u *usage.Usage, a analysis, sc *scenario.Scenario, coe
 	d(ItemProduct, "product lost (mixed fractions, retained on silica)", usage.ProductLoss, lost, units.Mass)
 	if len(recovered) > 0 {
 		for _, id := range recovered.IDs() {
-			d(id, a.wordsOf(id).recovered, usage.Credit, -recovered[id], units.Volume)
+			d(id, a.solventOf(id).recovered, usage.Credit, -recovered[id], units.Volume)
 		}
-		d(ItemElectricity, "distilling the recovered eluent", usage.Energy, evaporationElectricity(coef, heatToEvaporate(book, recovered, get(KeyBathDelta))), units.Energy)
+		d(ItemElectricity, "distilling the recovered eluent", usage.Energy, evaporationElectricity(coef, a.heatToEvaporate(recovered, get(KeyBathDelta))), units.Energy)
 	}
 }

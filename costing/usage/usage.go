@@ -225,8 +225,15 @@ type Table struct {
 // New starts the usage of a method at a crude mass, feasible until a model
 // says otherwise.
 func New(method string, crudeKg, productInKg float64) Usage {
+	return NewWithRoom(method, crudeKg, productInKg, 64, 16)
+}
+
+// NewWithRoom is New with room for the number of figures and demands a
+// model knows it will add (a model that makes many usages, most of them
+// only costed, should not reserve more).
+func NewWithRoom(method string, crudeKg, productInKg float64, figures, demands int) Usage {
 	return Usage{Method: method, CrudeKg: crudeKg, ProductInKg: productInKg, Feasible: true,
-		Figures: make([]Figure, 0, 64), Demands: make([]Demand, 0, 16)}
+		Figures: make([]Figure, 0, figures), Demands: make([]Demand, 0, demands)}
 }
 
 // Compact gives the usage's figures and demands slices of their own
