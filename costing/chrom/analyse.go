@@ -74,6 +74,14 @@ var tradeSteps = []float64{0.5, 0.7, 1, 1.5, 2.25, 3.5, 5, 8}
 // analyse runs the TLC relations, both loading rules, the ceiling and the
 // band model over the loadings tried.
 func analyse(sc *scenario.Scenario, coef source.Set) analysis {
+	return analyseRows(sc, coef, false)
+}
+
+// analyseRows is analyse; candidatesOnly stops the trade-off table at the
+// row where Model.options stops (a usable loading after one that keeps
+// all but 0.1 % of the eluted product), for a model that never shows the
+// table (quiet): the rows after it would be computed for nothing.
+func analyseRows(sc *scenario.Scenario, coef source.Set, candidatesOnly bool) analysis {
 	ch := sc.Chromatography
 	get := coef.Get
 	a := analysis{sc: sc, sep: Separation{ProductRf: ch.ProductRf, ImpurityRf: ch.ImpurityRf, Product: sc.Purity, Impurity: sc.NearestImpurity}}
@@ -120,8 +128,18 @@ func analyse(sc *scenario.Scenario, coef source.Set) analysis {
 			break
 		}
 		a.trade = append(a.trade, tradeRow{ratio, a.cutAt(1/ratio, a.plates)})
+		if candidatesOnly && a.lastCandidateRow(len(a.trade)-1, coef) {
+			break
+		}
 	}
 	return a
+}
+
+// lastCandidateRow reports whether Model.options stops at trade row k: it
+// is usable and the row before keeps all but 0.1 % of the eluted product
+// (past it, more silica buys nothing).
+func (a analysis) lastCandidateRow(k int, coef source.Set) bool {
+	return k > 0 && usable(a.trade[k].cut, coef) && a.trade[k-1].cut.Recovery >= 0.999 && usable(a.trade[k-1].cut, coef)
 }
 
 // platesFor is the plate count of a bed of height h at the model's flow

@@ -58,7 +58,7 @@ func NewModel(sc *scenario.Scenario, coef source.Set, site Site) *Model {
 // NewModel gives, without notes, the trade-off table or the worded
 // reason (and the ΔRf search behind it) when no loading is feasible.
 func NewModelWith(sc *scenario.Scenario, coef source.Set, site Site, quiet bool) *Model {
-	md := &Model{sc: sc, coef: coef, site: site, a: analyse(sc, coef), quiet: quiet}
+	md := &Model{sc: sc, coef: coef, site: site, a: analyseRows(sc, coef, quiet), quiet: quiet}
 	if sc.Chromatography != nil {
 		md.head = md.a.header(sc, coef, quiet)
 	}
@@ -179,8 +179,9 @@ func (md *Model) options(crudeKg float64) (opts []option, why string) {
 			continue
 		}
 		// Past the first loading that keeps all but 0.1 % of the eluted
-		// product, more silica buys nothing: stop.
-		if k > 0 && a.trade[k-1].cut.Recovery >= 0.999 && usable(a.trade[k-1].cut, coef) {
+		// product, more silica buys nothing: stop (a quiet model's
+		// trade-off table ends here, analyseRows).
+		if a.lastCandidateRow(k, coef) {
 			break
 		}
 		for _, e := range equipmentFor(a, coef, site, crudeKg*row.ratio, crudeKg) {
