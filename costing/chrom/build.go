@@ -21,9 +21,9 @@ type runPlan struct {
 	cut        Cut
 	plates     float64
 	bandCV     float64
-	used       scenario.Volumes // per run
-	evaporated scenario.Volumes // product fractions, per run
-	dryLoad    scenario.Volumes // dry-load solvent evaporated before the column, per run
+	used       vols // per run
+	evaporated vols // product fractions, per run
+	dryLoad    vols // dry-load solvent evaporated before the column, per run
 	drySilica  float64
 	fracSize   float64
 	fractions  float64
@@ -101,23 +101,23 @@ func (p *runPlan) equipmentFigures(u *usage.Usage, coef source.Set) {
 // the loading solvent.
 func (p *runPlan) eluent(u *usage.Usage, sc *scenario.Scenario, coef source.Set) {
 	ch, get := sc.Chromatography, coef.Get
-	p.used, p.evaporated, p.dryLoad = scenario.Volumes{}, scenario.Volumes{}, scenario.Volumes{}
+	p.used, p.evaporated, p.dryLoad = newVols(), newVols(), newVols()
 	first := ch.TLCEluent
 	if len(ch.Gradient) > 0 {
 		first = ch.Gradient[0].Eluent
 	}
-	p.used.Add(first, get(KeyEquilibrationCV)*p.v0)
+	p.used.addMix(first, get(KeyEquilibrationCV)*p.v0)
 	collected := 0.0
 	for _, st := range ch.Gradient {
-		p.used.Add(st.Eluent, st.ColumnVolumes*p.v0)
+		p.used.addMix(st.Eluent, st.ColumnVolumes*p.v0)
 		collected += st.ColumnVolumes
 	}
 	b := ComponentBand(ch.ProductRf, p.crudeRun*sc.Purity/(get(KeyQs)*p.e.silicaRun), p.plates, 1)
 	p.bandCV = b.End - b.Front + 4*b.Kinetic
 	elute := b.End + 2*b.Kinetic + get(KeyTailCV) + get(KeyFlushCV)
-	p.used.Add(ch.TLCEluent, elute*p.v0)
+	p.used.addMix(ch.TLCEluent, elute*p.v0)
 	collected += elute
-	u.AddFigure("eluent_cv", "eluent per run (column volumes)", p.used.Total()/p.v0, "")
+	u.AddFigure("eluent_cv", "eluent per run (column volumes)", p.used.total()/p.v0, "")
 	u.AddFigure("band_cv", "product band width, front to rear ±2σ (column volumes)", p.bandCV, "")
 	u.MarkDetail("band_cv") // the method sheet and JSON only
 	loadMix := ch.TLCEluent
@@ -127,10 +127,10 @@ func (p *runPlan) eluent(u *usage.Usage, sc *scenario.Scenario, coef source.Set)
 	if ch.Loading == scenario.DryLoading {
 		p.drySilica = p.crudeRun * get(KeyDrySorbent)
 		v := p.crudeRun * get(KeyDrySolventPerKg)
-		p.used.Add(loadMix, v)
-		p.dryLoad.Add(loadMix, v)
+		p.used.addMix(loadMix, v)
+		p.dryLoad.addMix(loadMix, v)
 	} else {
-		p.used.Add(loadMix, p.crudeRun*get(KeyLoadSolventPerKg))
+		p.used.addMix(loadMix, p.crudeRun*get(KeyLoadSolventPerKg))
 	}
 	p.fractions = collected // column volumes collected, turned into fractions next
 }
@@ -144,9 +144,9 @@ func (p *runPlan) fractionsAndTLC(u *usage.Usage, sc *scenario.Scenario, coef so
 	analysed := math.Ceil(p.fractions / get(KeyTLCEvery))
 	p.plates2 = math.Ceil(analysed / get(KeyLanes))
 	p.prodFrac = math.Max(1, math.Ceil(p.bandCV*p.v0/p.fracSize))
-	p.used.Add(sc.Chromatography.TLCEluent, p.plates2*get(KeyTLCSolvent))
-	p.productVol = math.Min(p.prodFrac*p.fracSize, p.used.Total())
-	p.evaporated.Add(sc.Chromatography.TLCEluent, p.productVol)
+	p.used.addMix(sc.Chromatography.TLCEluent, p.plates2*get(KeyTLCSolvent))
+	p.productVol = math.Min(p.prodFrac*p.fracSize, p.used.total())
+	p.evaporated.addMix(sc.Chromatography.TLCEluent, p.productVol)
 	fig("fraction_size", "fraction size", p.fracSize, "mL")
 	fig("fractions", "fractions per run", p.fractions, "")
 	fig("tlc_plates", "TLC plates per run", p.plates2, "")
@@ -162,7 +162,7 @@ func (p *runPlan) times(u *usage.Usage, sc *scenario.Scenario, coef source.Set, 
 	if p.e.cartridge != nil {
 		p.flow = p.e.cartridge.Flow
 	}
-	evapRun := p.productVol + p.dryLoad.Total()
+	evapRun := p.productVol + p.dryLoad.total()
 	act := func(name string, elapsed, attended float64) {
 		u.Activities = append(u.Activities, usage.Activity{Name: name, Elapsed: elapsed * p.runs, Attended: elapsed * attended * p.runs})
 	}
@@ -170,7 +170,7 @@ func (p *runPlan) times(u *usage.Usage, sc *scenario.Scenario, coef source.Set, 
 	if ch.Loading != scenario.DryLoading {
 		loadVol = p.crudeRun * get(KeyLoadSolventPerKg)
 	}
-	elution := (p.used.Total() - loadVol - p.dryLoad.Total() - p.plates2*get(KeyTLCSolvent)) / p.flow
+	elution := (p.used.total() - loadVol - p.dryLoad.total() - p.plates2*get(KeyTLCSolvent)) / p.flow
 	if p.e.packedByMe {
 		act("pack the column", math.Min(get(KeyPackBase)+get(KeyPackPerKg)*p.e.silicaRun, get(KeyPackMax)), 1)
 	} else {
@@ -190,11 +190,11 @@ func (p *runPlan) times(u *usage.Usage, sc *scenario.Scenario, coef source.Set, 
 	left := math.Max(get(KeyWorkingDay)-other*3600/p.runs, get(KeyWorkingDay)/4)
 	p.ev = site.Evaporators[ChooseEvaporator(evapRun, left, site.Evaporators)]
 	if ch.Loading == scenario.DryLoading {
-		act("adsorb the crude on silica (dry load)", p.dryLoad.Total()/p.ev.Rate, get(KeyEvapAttended))
+		act("adsorb the crude on silica (dry load)", p.dryLoad.total()/p.ev.Rate, get(KeyEvapAttended))
 	}
 	act("evaporate product fractions", p.productVol/p.ev.Rate, get(KeyEvapAttended))
 	what := "product fractions"
-	if p.dryLoad.Total() > 0 {
+	if p.dryLoad.total() > 0 {
 		what += " and dry-load solvent"
 	}
 	p.evaporatorNote(u, evapRun, what, left)

@@ -313,11 +313,11 @@ func mustSolvent(b *solvent.Book, id string) solvent.Solvent {
 }
 
 // heatToEvaporate is the heat to warm and vaporise the volumes (J).
-func (a analysis) heatToEvaporate(v scenario.Volumes, warmup float64) float64 {
+func (a analysis) heatToEvaporate(v vols, warmup float64) float64 {
 	heat := 0.0
-	for _, id := range v.IDs() {
+	for i, id := range v.ids {
 		s := a.solventOf(id)
-		heat += v[id] * s.density * (s.cp*warmup + s.hvap)
+		heat += v.v[i] * s.density * (s.cp*warmup + s.hvap)
 	}
 	return heat
 }
