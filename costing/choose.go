@@ -26,13 +26,13 @@ func (p *Plan) choose(j int, crudeKg float64, t *prices.Table) (usage.Usage, led
 	m := p.Methods[j]
 	if m.Choices == nil {
 		u := m.Run(crudeKg)
-		l, err := ledger.Price(u, t)
+		l, err := p.pricer(t).Price(u)
 		return u, l, err
 	}
-	cands := m.Choices(crudeKg)
+	cands, full := leanChoices(m, crudeKg)
 	ps, err := p.priceCandidates(cands, t)
 	if err != nil {
-		return ps[len(ps)-1].u, ledger.Ledger{}, err
+		return full(len(ps) - 1), ledger.Ledger{}, err
 	}
 	best := -1
 	for i, c := range ps {
@@ -41,12 +41,26 @@ func (p *Plan) choose(j int, crudeKg float64, t *prices.Table) (usage.Usage, led
 		}
 	}
 	if best < 0 {
-		return ps[0].u, ps[0].l, nil
+		return full(0), ps[0].l, nil
 	}
+	// The kept candidate is worded in full; its ledger is the lean one's,
+	// whose demands are the same (Method.Lean).
+	kept := full(best)
 	if len(ps) > 1 {
-		ps[best].u.Notef(usage.Info, "Chosen as the cheapest per gram of purified product of %d plans priced (loading and equipment): %s.", len(ps), describeChoices(ps, t.Currency))
+		kept.Notef(usage.Info, "Chosen as the cheapest per gram of purified product of %d plans priced (loading and equipment): %s.", len(ps), describeChoices(ps, t.Currency))
 	}
-	return ps[best].u, ps[best].l, nil
+	return kept, ps[best].l, nil
+}
+
+// leanChoices is the method's candidates at a mass made to be ranked, and
+// full(i), the i-th worded as Choices gives it (Method.Lean; the same
+// candidates when the method has no lean form).
+func leanChoices(m Method, crudeKg float64) (cands []usage.Usage, full func(i int) usage.Usage) {
+	if m.Lean != nil {
+		return m.Lean(crudeKg)
+	}
+	cands = m.Choices(crudeKg)
+	return cands, func(i int) usage.Usage { return cands[i] }
 }
 
 // priced is a candidate with its ledger and cost per gram.
@@ -105,7 +119,7 @@ func (p *Plan) priceCandidates(cands []usage.Usage, t *prices.Table) ([]priced, 
 		if ranked && lo[i] > limit {
 			continue
 		}
-		l, err := ledger.Price(c.u, t)
+		l, err := p.pricer(t).Price(c.u)
 		if err != nil {
 			return ps[:i+1], err
 		}
@@ -123,6 +137,17 @@ func (p *Plan) rates(t *prices.Table) *ledger.Rates {
 	r := ledger.NewRates(t)
 	p.rateCache.Store(t, r)
 	return r
+}
+
+// pricer is the price table prepared for pricing (ledger.NewPricer: the
+// ledgers of ledger.Price), made once per table.
+func (p *Plan) pricer(t *prices.Table) *ledger.Pricer {
+	if v, ok := p.pricers.Load(t); ok {
+		return v.(*ledger.Pricer)
+	}
+	pr := ledger.NewPricer(t)
+	p.pricers.Store(t, pr)
+	return pr
 }
 
 // describeChoices lists the four cheapest feasible candidates with their

@@ -32,8 +32,9 @@ type Entry struct {
 	// plans at a mass that only money can settle (the plan prices them and
 	// keeps the cheapest per gram). Called only when Described. quiet asks
 	// for usages made only to be costed (usage.Usage.Quiet): the same
-	// quantities, without the words a model may leave out.
-	Build func(sc *scenario.Scenario, coef source.Set, eq *equipment.Table, quiet bool) (run func(float64) usage.Usage, choices func(float64) []usage.Usage)
+	// quantities, without the words a model may leave out. lean, when
+	// not nil, is choices made to be ranked by cost (Method.Lean).
+	Build func(sc *scenario.Scenario, coef source.Set, eq *equipment.Table, quiet bool) (run func(float64) usage.Usage, choices func(float64) []usage.Usage, lean LeanChoices)
 	// Solvents lists the solvent ids the method's section names.
 	Solvents func(*scenario.Scenario) []string
 	// Cautions lists the method's safety cautions for the scenario.
@@ -51,20 +52,20 @@ var Registry = []Entry{
 	{Name: cryst.Method, Package: "costing/cryst", Use: green.Crystallization,
 		Defaults:  cryst.Defaults,
 		Described: func(sc *scenario.Scenario) bool { return sc.Crystallization != nil },
-		Build: func(sc *scenario.Scenario, coef source.Set, _ *equipment.Table, quiet bool) (func(float64) usage.Usage, func(float64) []usage.Usage) {
+		Build: func(sc *scenario.Scenario, coef source.Set, _ *equipment.Table, quiet bool) (func(float64) usage.Usage, func(float64) []usage.Usage, LeanChoices) {
 			m := cryst.New(sc, coef)
 			m.Quiet = quiet
-			return m.Run, nil
+			return m.Run, nil, nil
 		},
 		Solvents: func(sc *scenario.Scenario) []string { return sc.Crystallization.Solvents() },
 		Cautions: cryst.Cautions},
 	{Name: distil.Method, Package: "costing/distil", Use: green.Distillation,
 		Defaults:  distil.Defaults,
 		Described: func(sc *scenario.Scenario) bool { return sc.Distillation != nil },
-		Build: func(sc *scenario.Scenario, coef source.Set, _ *equipment.Table, quiet bool) (func(float64) usage.Usage, func(float64) []usage.Usage) {
+		Build: func(sc *scenario.Scenario, coef source.Set, _ *equipment.Table, quiet bool) (func(float64) usage.Usage, func(float64) []usage.Usage, LeanChoices) {
 			m := distil.New(sc, coef)
 			m.Quiet = quiet
-			return m.Run, nil
+			return m.Run, nil, nil
 		},
 		Solvents: func(sc *scenario.Scenario) []string { return sc.Distillation.Solvents() },
 		Cautions: distil.Cautions},

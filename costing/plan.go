@@ -30,7 +30,16 @@ type Method struct {
 	// Choices, when set, lists the candidate plans at a mass (loadings,
 	// equipment); the plan prices them and keeps the cheapest per gram.
 	Choices func(crudeKg float64) []usage.Usage
+	// Lean, when set, is Choices made to be ranked by cost (the plan
+	// words only the candidates it reports).
+	Lean LeanChoices
 }
+
+// LeanChoices lists a method's candidate plans at a mass as Choices does,
+// in the same order with the same quantities, demands and equipment, but
+// quiet (usage.Usage.Quiet: no notes or tables); full(i) is the i-th as
+// Choices gives it, notes and all.
+type LeanChoices func(crudeKg float64) (lean []usage.Usage, full func(i int) usage.Usage)
 
 // Plan is a scenario with its model coefficients settled.
 type Plan struct {
@@ -45,6 +54,7 @@ type Plan struct {
 
 	sitePrices sync.Map // *prices.Table → the same with the equipment's charges
 	rateCache  sync.Map // *prices.Table → its *ledger.Rates
+	pricers    sync.Map // *prices.Table → its *ledger.Pricer
 }
 
 // Options are what Prepare takes besides the scenario.
@@ -187,7 +197,7 @@ func newPlan(sc *scenario.Scenario, coef source.Set, eq *equipment.Table, quiet 
 func buildMethod(e Entry, sc *scenario.Scenario, coef source.Set, eq *equipment.Table, quiet bool) Method {
 	m := Method{Name: e.Name, Use: e.Use}
 	if e.Described(sc) {
-		m.Run, m.Choices = e.Build(sc, coef, eq, quiet)
+		m.Run, m.Choices, m.Lean = e.Build(sc, coef, eq, quiet)
 	} else {
 		m.Run = notAssessed(sc, e.Name)
 	}
@@ -227,7 +237,8 @@ func (p *Plan) PerGramLean(j int, crudeKg float64, r *ledger.Rates) (float64, er
 		return perGramRates(m.Run(crudeKg), r)
 	}
 	best := math.NaN()
-	for _, u := range m.Choices(crudeKg) {
+	cands, _ := leanChoices(m, crudeKg)
+	for _, u := range cands {
 		v, err := perGramRates(u, r)
 		if err != nil {
 			return 0, err

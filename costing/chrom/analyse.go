@@ -5,7 +5,9 @@ import (
 	"math"
 
 	"sepcost/costing/scenario"
+	"sepcost/costing/solvent"
 	"sepcost/costing/source"
+	"sepcost/costing/usage"
 )
 
 // analysis is what the TLC, the loading rules and the band model say about
@@ -24,6 +26,37 @@ type analysis struct {
 	why         string  // which rule and why
 	plates      float64 // plates of a bed of the reference height
 	trade       []tradeRow
+	// solvents are each solvent's words and properties, found and worded
+	// once for every candidate (solventOf).
+	solvents map[string]solventInfo
+}
+
+// solventInfo is what a candidate needs of one solvent: its figure key and
+// label, the labels of its purchase and of its recovery, and the
+// properties the waste and the evaporation read.
+type solventInfo struct {
+	key                    usage.FigureKey
+	label, used, recovered string
+	density                float64 // kg/m³
+	cp, hvap               float64 // J/(kg·K), J/kg
+	halogenated            bool
+}
+
+// solventOf is solvent id's words and properties: found in analyse, or
+// here for a solvent the section does not name.
+func (a analysis) solventOf(id string) solventInfo {
+	if si, ok := a.solvents[id]; ok {
+		return si
+	}
+	return newSolventInfo(a.sc.Solvents, id)
+}
+
+// newSolventInfo words one solvent and reads its properties from the
+// scenario's book.
+func newSolventInfo(b *solvent.Book, id string) solventInfo {
+	s := mustSolvent(b, id)
+	return solventInfo{key: usage.SolventFigure(id), label: "solvent: " + id, used: "solvent: " + id, recovered: "recovered for reuse: " + id,
+		density: s.Density.V, cp: s.SpecificCp(), hvap: s.SpecificHVap(), halogenated: s.Halogenated}
 }
 
 // tradeRow is one loading of the trade-off table.
@@ -41,9 +74,21 @@ var tradeSteps = []float64{0.5, 0.7, 1, 1.5, 2.25, 3.5, 5, 8}
 // analyse runs the TLC relations, both loading rules, the ceiling and the
 // band model over the loadings tried.
 func analyse(sc *scenario.Scenario, coef source.Set) analysis {
+	return analyseRows(sc, coef, false)
+}
+
+// analyseRows is analyse; candidatesOnly stops the trade-off table at the
+// row where Model.options stops (a usable loading after one that keeps
+// all but 0.1 % of the eluted product), for a model that never shows the
+// table (quiet): the rows after it would be computed for nothing.
+func analyseRows(sc *scenario.Scenario, coef source.Set, candidatesOnly bool) analysis {
 	ch := sc.Chromatography
 	get := coef.Get
 	a := analysis{sc: sc, sep: Separation{ProductRf: ch.ProductRf, ImpurityRf: ch.ImpurityRf, Product: sc.Purity, Impurity: sc.NearestImpurity}}
+	a.solvents = map[string]solventInfo{}
+	for _, id := range ch.Solvents() {
+		a.solvents[id] = newSolventInfo(sc.Solvents, id)
+	}
 	// Rounded to 1e-9 so that Rf values written to two places (0.35 − 0.25)
 	// compare as the chemist wrote them, not as 0.0999999….
 	a.dRf = math.Round(math.Abs(ch.ProductRf-ch.ImpurityRf)*1e9) / 1e9
@@ -83,8 +128,18 @@ func analyse(sc *scenario.Scenario, coef source.Set) analysis {
 			break
 		}
 		a.trade = append(a.trade, tradeRow{ratio, a.cutAt(1/ratio, a.plates)})
+		if candidatesOnly && a.lastCandidateRow(len(a.trade)-1, coef) {
+			break
+		}
 	}
 	return a
+}
+
+// lastCandidateRow reports whether Model.options stops at trade row k: it
+// is usable and the row before keeps all but 0.1 % of the eluted product
+// (past it, more silica buys nothing).
+func (a analysis) lastCandidateRow(k int, coef source.Set) bool {
+	return k > 0 && usable(a.trade[k].cut, coef) && a.trade[k-1].cut.Recovery >= 0.999 && usable(a.trade[k-1].cut, coef)
 }
 
 // platesFor is the plate count of a bed of height h at the model's flow

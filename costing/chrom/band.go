@@ -60,21 +60,63 @@ func ComponentBand(rf, lf, plates, kg float64) Band {
 //
 // (Φ, φ the standard normal distribution and density; G1 and G2 are the
 // antiderivatives of Φ and tΦ). A band narrower than 10⁻⁶ σ is normal.
+// A cut search asks for many shares of one band: it prepares the band
+// once (b.cdf) and calls cdf.at.
 func (b Band) share(x float64) float64 {
+	c := b.cdf()
+	return c.at(x)
+}
+
+// cdf is a band prepared for share: a mirrored band's reflection and the
+// constants of the closed form (w, 2σ/w²), computed once with the same
+// operations, so that cdf.at(x) is share(x) to the last bit.
+type cdf struct {
+	front, end float64 // the unmirrored triangle, column volumes
+	s          float64 // σ, column volumes
+	k          float64 // 2σ/w²
+	normal     bool    // w ≤ 10⁻⁶ σ: a normal band
+	mirrored   bool    // at(x) = 1 − F(−x)
+}
+
+// cdf prepares the band for share.
+func (b Band) cdf() cdf {
+	c := cdf{front: b.Front, end: b.End, s: b.Kinetic, mirrored: b.mirrored}
 	if b.mirrored {
-		return 1 - Band{Front: -b.End, End: -b.Front, Kinetic: b.Kinetic}.share(-x)
+		c.front, c.end = -b.End, -b.Front
 	}
-	s, w := b.Kinetic, b.End-b.Front
-	if w <= 1e-6*s {
-		return phi(((x - b.End) / s))
+	w := c.end - c.front
+	c.normal = w <= 1e-6*c.s
+	c.k = 2 * c.s / (w * w)
+	return c
+}
+
+// at is the band's share eluted before x (Band.share).
+func (c *cdf) at(x float64) float64 {
+	if c.mirrored {
+		return 1 - c.unmirrored(-x)
 	}
-	g := func(t float64) float64 {
-		P, d := phi(t), math.Exp(-t*t/2)/math.Sqrt(2*math.Pi)
-		return (b.End-x)*(t*P+d) + s*((t*t-1)*P+t*d)/2
+	return c.unmirrored(x)
+}
+
+// unmirrored is F(x) of the triangle from front to end (share's formula).
+func (c *cdf) unmirrored(x float64) float64 {
+	s := c.s
+	if c.normal {
+		return phi(((x - c.end) / s))
 	}
-	f := 2 * s / (w * w) * (g((x-b.Front)/s) - g((x-b.End)/s))
+	r := c.end - x
+	f := c.k * (antiderivative(r, s, (x-c.front)/s) - antiderivative(r, s, (x-c.end)/s))
 	return math.Min(math.Max(f, 0), 1)
 }
+
+// antiderivative is (b − x)·G1(t) + σ·G2(t) of share, r = b − x.
+func antiderivative(r, s, t float64) float64 {
+	P, d := phi(t), math.Exp(-t*t/2)/sqrt2Pi
+	return r*(t*P+d) + s*((t*t-1)*P+t*d)/2
+}
+
+// sqrt2Pi is √(2π), the normal density's divisor.
+var sqrt2Pi = math.Sqrt(2 * math.Pi)
 
 // phi is the standard normal distribution function.
 func phi(t float64) float64 { return 0.5 * math.Erfc(-t/math.Sqrt2) }
@@ -97,31 +139,27 @@ type Cut struct {
 // from the cut point to its end). The cut point is found on a grid of 48
 // points from 6σ before the band's front to 6σ after its end, refined by
 // bisection.
+//
+// Each band is prepared once (Band.cdf), and the shares at the cut point
+// found and at the grid's end are those the search computed, not
+// computed again: the cut is the plain search's to the last bit
+// (TestCutForIsThePlainSearch).
 func CutFor(p, imp Band, first bool, target float64) Cut {
 	if !first { // mirror: the product elutes last
 		p, imp = p.mirror(), imp.mirror()
 	}
-	purity := func(x float64) (float64, float64) { return purityWith(p, x, imp.Kg*imp.share(x)) }
-	// reaches says whether the cut at x reaches the target: purity(x) ≥
-	// target. When the impurity eluted before x is so much that even all
-	// of the product could not dilute it to the target, the answer is no
-	// without the product's share: purity = pr/(pr + im) ≤ P/(P + im),
-	// P the product's mass, and the margin of 10⁻⁹ is far above the
-	// rounding of either side, so the answer is the one purity gives.
-	reaches := func(x float64) bool {
-		im := imp.Kg * imp.share(x)
-		if im > 0 && p.Kg/(p.Kg+im) < target-1e-9 {
-			return false
-		}
-		pu, _ := purityWith(p, x, im)
-		return pu >= target
-	}
+	cs := cutSearch{p: p.cdf(), imp: imp.cdf(), pKg: p.Kg, impKg: imp.Kg, target: target}
 	lo, hi := p.Front-6*p.Kinetic, p.End+6*p.Kinetic
 	const n = 48
 	best := math.NaN()
+	impHi := math.NaN() // the impurity's share at hi, if the grid computed it
 	for i := n; i >= 0; i-- {
 		x := lo + (hi-lo)*float64(i)/n
-		if reaches(x) {
+		ok := cs.reaches(x)
+		if i == n && x == hi {
+			impHi = cs.impShare
+		}
+		if ok {
 			best = x
 			break
 		}
@@ -133,7 +171,7 @@ func CutFor(p, imp Band, first bool, target float64) Cut {
 		a, b := best, best+(hi-lo)/n
 		for i := 0; i < 30; i++ {
 			m := (a + b) / 2
-			if reaches(m) {
+			if cs.reaches(m) {
 				a = m
 			} else {
 				b = m
@@ -141,16 +179,52 @@ func CutFor(p, imp Band, first bool, target float64) Cut {
 		}
 		best = a
 	}
-	pu, rec := purity(best)
-	mixedImp := math.Max(imp.share(hi)-imp.share(best), 0)
+	// best is the last point that reached the target: its shares are kept.
+	pu, rec := cs.at.purity, cs.at.product
+	if math.IsNaN(impHi) {
+		impHi = cs.imp.at(hi)
+	}
+	mixedImp := math.Max(impHi-cs.at.impurity, 0)
 	return Cut{Recovery: rec, Purity: pu, Mixed: 1 - rec, MixedImpurity: mixedImp, OK: rec > 0}
+}
+
+// cutSearch is CutFor's state: the two bands prepared, and the shares at
+// the last cut point that reached the target.
+type cutSearch struct {
+	p, imp     cdf
+	pKg, impKg float64
+	target     float64
+	impShare   float64 // the impurity's share at the last point asked
+	at         struct{ purity, product, impurity float64 }
+}
+
+// reaches says whether the cut at x reaches the target: purity(x) ≥
+// target. When the impurity eluted before x is so much that even all of
+// the product could not dilute it to the target, the answer is no without
+// the product's share: purity = pr/(pr + im) ≤ P/(P + im), P the
+// product's mass, and the margin of 10⁻⁹ is far above the rounding of
+// either side, so the answer is the one purity gives. A point that
+// reaches it has its purity and shares kept in cs.at.
+func (cs *cutSearch) reaches(x float64) bool {
+	is := cs.imp.at(x)
+	cs.impShare = is
+	im := cs.impKg * is
+	if im > 0 && cs.pKg/(cs.pKg+im) < cs.target-1e-9 {
+		return false
+	}
+	pu, ps := purityWith(&cs.p, cs.pKg, x, im)
+	if pu < cs.target {
+		return false
+	}
+	cs.at.purity, cs.at.product, cs.at.impurity = pu, ps, is
+	return true
 }
 
 // purityWith is the purity of the product eluted before x with im kg of
 // impurity, and the product's share eluted.
-func purityWith(p Band, x, im float64) (float64, float64) {
-	ps := p.share(x)
-	pr := p.Kg * ps
+func purityWith(p *cdf, kg, x, im float64) (float64, float64) {
+	ps := p.at(x)
+	pr := kg * ps
 	if pr+im <= 0 {
 		return 1, 0
 	}

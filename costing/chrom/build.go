@@ -3,6 +3,7 @@ package chrom
 import (
 	"fmt"
 	"math"
+	"strconv"
 
 	"sepcost/costing/scenario"
 	"sepcost/costing/source"
@@ -20,9 +21,9 @@ type runPlan struct {
 	cut        Cut
 	plates     float64
 	bandCV     float64
-	used       scenario.Volumes // per run
-	evaporated scenario.Volumes // product fractions, per run
-	dryLoad    scenario.Volumes // dry-load solvent evaporated before the column, per run
+	used       vols // per run
+	evaporated vols // product fractions, per run
+	dryLoad    vols // dry-load solvent evaporated before the column, per run
 	drySilica  float64
 	fracSize   float64
 	fractions  float64
@@ -36,18 +37,32 @@ type runPlan struct {
 	colHours   float64 // h over all runs
 }
 
+// bedCut is a candidate's plates and cut at its own bed, which depend
+// only on the equipment, the loading and the analysis.
+type bedCut struct {
+	plates float64
+	cut    Cut
+}
+
 // build fills one candidate's usage: equipment, cut at its own bed,
-// eluent, fractions, time, energy, product, waste and demands.
-func build(u *usage.Usage, a analysis, sc *scenario.Scenario, coef source.Set, site Site, e equip, ratio float64) {
+// eluent, fractions, time, energy, product, waste and demands. known,
+// when not nil, is the plates and cut an earlier build of the same
+// candidate found; build returns those it used.
+func build(u *usage.Usage, a analysis, sc *scenario.Scenario, coef source.Set, site Site, e equip, ratio float64, known *bedCut) bedCut {
 	p := &runPlan{e: e, ratio: ratio, runs: float64(e.runs), crudeRun: u.CrudeKg / float64(e.runs)}
 	get := coef.Get
 	p.v0 = e.silicaRun * ColumnVolumePerMass(get(KeyBedDensity), get(KeySkeletalDensity))
-	p.plates = platesFor(coef, e.bedHeight)
-	p.cut = a.cutAt(p.crudeRun/e.silicaRun, p.plates)
+	if known != nil {
+		p.plates, p.cut = known.plates, known.cut
+	} else {
+		p.plates = platesFor(coef, e.bedHeight)
+		p.cut = a.cutAt(p.crudeRun/e.silicaRun, p.plates)
+	}
+	bc := bedCut{plates: p.plates, cut: p.cut}
 	if !usable(p.cut, coef) {
 		u.Feasible = false
 		u.Reason = fmt.Sprintf("on %s the bed of %.0f cm (%.0f plates) gives a cut of %.1f %% recovery at %.4g %% purity", e.name, e.bedHeight*100, p.plates, p.cut.Recovery*100, a.target*100)
-		return
+		return bc
 	}
 	p.equipmentFigures(u, coef)
 	p.eluent(u, sc, coef)
@@ -58,26 +73,16 @@ func build(u *usage.Usage, a analysis, sc *scenario.Scenario, coef source.Set, s
 	if sc.Chromatography.RerunMixed {
 		second = p.rerun(u, a, sc, coef, site)
 	}
-	p.wasteAndDemands(u, sc, coef)
+	p.wasteAndDemands(u, a, sc, coef)
 	if second != nil {
 		mergeRerun(u, second)
 	}
+	return bc
 }
 
 // equipmentFigures reports the equipment and the silica.
 func (p *runPlan) equipmentFigures(u *usage.Usage, coef source.Set) {
 	e, fig := p.e, u.AddFigure
-	runs := ""
-	if e.runs > 1 {
-		runs = fmt.Sprintf(" × %d runs", e.runs)
-	}
-	if e.cartridge != nil {
-		u.Equipment = e.name + " (prepacked)" + runs
-		u.EquipmentID = u.Equipment
-	} else {
-		u.Equipment = fmt.Sprintf("%s, %.0f cm bed%s", e.name, e.bedHeight*100, runs)
-		u.EquipmentID = e.name + runs // the bed height follows the mass smoothly
-	}
 	fig("ratio_used", "silica : crude used (the loading chosen)", e.silicaRun*p.runs/u.CrudeKg, "")
 	fig("silica_needed", "silica needed at the loading chosen", u.CrudeKg*p.ratio, "g")
 	fig("column_diameter", "column inner diameter", e.diameter, "mm")
@@ -96,23 +101,23 @@ func (p *runPlan) equipmentFigures(u *usage.Usage, coef source.Set) {
 // the loading solvent.
 func (p *runPlan) eluent(u *usage.Usage, sc *scenario.Scenario, coef source.Set) {
 	ch, get := sc.Chromatography, coef.Get
-	p.used, p.evaporated, p.dryLoad = scenario.Volumes{}, scenario.Volumes{}, scenario.Volumes{}
+	p.used, p.evaporated, p.dryLoad = newVols(), newVols(), newVols()
 	first := ch.TLCEluent
 	if len(ch.Gradient) > 0 {
 		first = ch.Gradient[0].Eluent
 	}
-	p.used.Add(first, get(KeyEquilibrationCV)*p.v0)
+	p.used.addMix(first, get(KeyEquilibrationCV)*p.v0)
 	collected := 0.0
 	for _, st := range ch.Gradient {
-		p.used.Add(st.Eluent, st.ColumnVolumes*p.v0)
+		p.used.addMix(st.Eluent, st.ColumnVolumes*p.v0)
 		collected += st.ColumnVolumes
 	}
 	b := ComponentBand(ch.ProductRf, p.crudeRun*sc.Purity/(get(KeyQs)*p.e.silicaRun), p.plates, 1)
 	p.bandCV = b.End - b.Front + 4*b.Kinetic
 	elute := b.End + 2*b.Kinetic + get(KeyTailCV) + get(KeyFlushCV)
-	p.used.Add(ch.TLCEluent, elute*p.v0)
+	p.used.addMix(ch.TLCEluent, elute*p.v0)
 	collected += elute
-	u.AddFigure("eluent_cv", "eluent per run (column volumes)", p.used.Total()/p.v0, "")
+	u.AddFigure("eluent_cv", "eluent per run (column volumes)", p.used.total()/p.v0, "")
 	u.AddFigure("band_cv", "product band width, front to rear ±2σ (column volumes)", p.bandCV, "")
 	u.MarkDetail("band_cv") // the method sheet and JSON only
 	loadMix := ch.TLCEluent
@@ -122,10 +127,10 @@ func (p *runPlan) eluent(u *usage.Usage, sc *scenario.Scenario, coef source.Set)
 	if ch.Loading == scenario.DryLoading {
 		p.drySilica = p.crudeRun * get(KeyDrySorbent)
 		v := p.crudeRun * get(KeyDrySolventPerKg)
-		p.used.Add(loadMix, v)
-		p.dryLoad.Add(loadMix, v)
+		p.used.addMix(loadMix, v)
+		p.dryLoad.addMix(loadMix, v)
 	} else {
-		p.used.Add(loadMix, p.crudeRun*get(KeyLoadSolventPerKg))
+		p.used.addMix(loadMix, p.crudeRun*get(KeyLoadSolventPerKg))
 	}
 	p.fractions = collected // column volumes collected, turned into fractions next
 }
@@ -139,9 +144,9 @@ func (p *runPlan) fractionsAndTLC(u *usage.Usage, sc *scenario.Scenario, coef so
 	analysed := math.Ceil(p.fractions / get(KeyTLCEvery))
 	p.plates2 = math.Ceil(analysed / get(KeyLanes))
 	p.prodFrac = math.Max(1, math.Ceil(p.bandCV*p.v0/p.fracSize))
-	p.used.Add(sc.Chromatography.TLCEluent, p.plates2*get(KeyTLCSolvent))
-	p.productVol = math.Min(p.prodFrac*p.fracSize, p.used.Total())
-	p.evaporated.Add(sc.Chromatography.TLCEluent, p.productVol)
+	p.used.addMix(sc.Chromatography.TLCEluent, p.plates2*get(KeyTLCSolvent))
+	p.productVol = math.Min(p.prodFrac*p.fracSize, p.used.total())
+	p.evaporated.addMix(sc.Chromatography.TLCEluent, p.productVol)
 	fig("fraction_size", "fraction size", p.fracSize, "mL")
 	fig("fractions", "fractions per run", p.fractions, "")
 	fig("tlc_plates", "TLC plates per run", p.plates2, "")
@@ -157,7 +162,7 @@ func (p *runPlan) times(u *usage.Usage, sc *scenario.Scenario, coef source.Set, 
 	if p.e.cartridge != nil {
 		p.flow = p.e.cartridge.Flow
 	}
-	evapRun := p.productVol + p.dryLoad.Total()
+	evapRun := p.productVol + p.dryLoad.total()
 	act := func(name string, elapsed, attended float64) {
 		u.Activities = append(u.Activities, usage.Activity{Name: name, Elapsed: elapsed * p.runs, Attended: elapsed * attended * p.runs})
 	}
@@ -165,7 +170,7 @@ func (p *runPlan) times(u *usage.Usage, sc *scenario.Scenario, coef source.Set, 
 	if ch.Loading != scenario.DryLoading {
 		loadVol = p.crudeRun * get(KeyLoadSolventPerKg)
 	}
-	elution := (p.used.Total() - loadVol - p.dryLoad.Total() - p.plates2*get(KeyTLCSolvent)) / p.flow
+	elution := (p.used.total() - loadVol - p.dryLoad.total() - p.plates2*get(KeyTLCSolvent)) / p.flow
 	if p.e.packedByMe {
 		act("pack the column", math.Min(get(KeyPackBase)+get(KeyPackPerKg)*p.e.silicaRun, get(KeyPackMax)), 1)
 	} else {
@@ -185,11 +190,11 @@ func (p *runPlan) times(u *usage.Usage, sc *scenario.Scenario, coef source.Set, 
 	left := math.Max(get(KeyWorkingDay)-other*3600/p.runs, get(KeyWorkingDay)/4)
 	p.ev = site.Evaporators[ChooseEvaporator(evapRun, left, site.Evaporators)]
 	if ch.Loading == scenario.DryLoading {
-		act("adsorb the crude on silica (dry load)", p.dryLoad.Total()/p.ev.Rate, get(KeyEvapAttended))
+		act("adsorb the crude on silica (dry load)", p.dryLoad.total()/p.ev.Rate, get(KeyEvapAttended))
 	}
 	act("evaporate product fractions", p.productVol/p.ev.Rate, get(KeyEvapAttended))
 	what := "product fractions"
-	if p.dryLoad.Total() > 0 {
+	if p.dryLoad.total() > 0 {
 		what += " and dry-load solvent"
 	}
 	p.evaporatorNote(u, evapRun, what, left)
@@ -198,8 +203,34 @@ func (p *runPlan) times(u *usage.Usage, sc *scenario.Scenario, coef source.Set, 
 	p.colHours = elapsed - p.evapHours
 	p.workingDays(u, coef, elapsed, attended)
 	u.AddFigure("flow", "flow rate", p.flow, "mL/min")
-	u.Equipment += "; " + p.ev.Name
-	u.EquipmentID += "; " + p.ev.Name
+	u.Equipment = p.equipmentWords(true)
+	u.EquipmentID = p.equipmentWords(false) // the bed height follows the mass smoothly
+}
+
+// equipmentWords names the equipment: "name (prepacked)" or "name, H cm
+// bed" (without the bed when bed is false: the equipment's identity,
+// usage.Usage.EquipmentID), " × n runs" when there are several, and "; "
+// the evaporator's name; written in one buffer (no fmt), as fmt's %s,
+// %.0f and %d write them.
+func (p *runPlan) equipmentWords(bed bool) string {
+	e := p.e
+	b := make([]byte, 0, len(e.name)+len(p.ev.Name)+32)
+	b = append(b, e.name...)
+	if e.cartridge != nil {
+		b = append(b, " (prepacked)"...)
+	} else if bed {
+		b = append(b, ", "...)
+		b = strconv.AppendFloat(b, e.bedHeight*100, 'f', 0, 64)
+		b = append(b, " cm bed"...)
+	}
+	if e.runs > 1 {
+		b = append(b, " × "...)
+		b = strconv.AppendInt(b, int64(e.runs), 10)
+		b = append(b, " runs"...)
+	}
+	b = append(b, "; "...)
+	b = append(b, p.ev.Name...)
+	return string(b)
 }
 
 // workingDays reports runs per day and elapsed working days, and warns

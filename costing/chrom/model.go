@@ -3,6 +3,7 @@ package chrom
 import (
 	"fmt"
 	"math"
+	"strconv"
 
 	"sepcost/costing/scenario"
 	"sepcost/costing/solvent"
@@ -57,23 +58,34 @@ func NewModel(sc *scenario.Scenario, coef source.Set, site Site) *Model {
 // NewModel gives, without notes, the trade-off table or the worded
 // reason (and the ΔRf search behind it) when no loading is feasible.
 func NewModelWith(sc *scenario.Scenario, coef source.Set, site Site, quiet bool) *Model {
-	md := &Model{sc: sc, coef: coef, site: site, a: analyse(sc, coef), quiet: quiet}
+	md := &Model{sc: sc, coef: coef, site: site, a: analyseRows(sc, coef, quiet), quiet: quiet}
 	if sc.Chromatography != nil {
 		md.head = md.a.header(sc, coef, quiet)
 	}
 	return md
 }
 
-// start is a candidate's usage at crudeKg: the header's figures, notes
-// and tables, copied so that the candidate can add to them.
-func (md *Model) start(crudeKg float64) usage.Usage {
-	u := usage.New(Method, crudeKg, crudeKg*md.sc.Purity)
-	u.Quiet = md.quiet
+// start is a candidate's usage at crudeKg: the header's figures, and
+// unless quiet its notes and tables, copied so that the candidate can add
+// to them.
+func (md *Model) start(crudeKg float64, quiet bool) usage.Usage {
+	// A candidate adds 31 figures of its own, one per solvent and two
+	// for a re-run; 13 demands, one per solvent and the recovery's.
+	room := len(md.head.Figures) + 33 + len(md.a.solvents)
+	u := usage.NewWithRoom(Method, crudeKg, crudeKg*md.sc.Purity, room, 13+2*len(md.a.solvents))
+	u.Quiet = quiet
 	u.Figures = append(u.Figures, md.head.Figures...)
-	u.Notes = append([]usage.Note(nil), md.head.Notes...)
-	u.Tables = append([]usage.Table(nil), md.head.Tables...)
+	u.Activities = make([]usage.Activity, 0, activities)
+	if !quiet {
+		u.Notes = append([]usage.Note(nil), md.head.Notes...)
+		u.Tables = append([]usage.Table(nil), md.head.Tables...)
+	}
 	return u
 }
+
+// activities is the room start makes for a candidate's activities: pack
+// or mount, load, elute, TLC, combine, clean, dry load, evaporate.
+const activities = 8
 
 // Run is the package-level Run on a prepared model.
 func (md *Model) Run(crudeKg float64) usage.Usage {
@@ -101,45 +113,134 @@ func Candidates(sc *scenario.Scenario, coef source.Set, site Site, crudeKg float
 
 // Candidates is the package-level Candidates on a prepared model.
 func (md *Model) Candidates(crudeKg float64) []usage.Usage {
-	a, sc, coef, site := md.a, md.sc, md.coef, md.site
-	if len(site.Evaporators) == 0 || len(site.Columns)+len(site.Cartridges) == 0 {
-		u := usage.New(Method, crudeKg, crudeKg*sc.Purity)
-		u.Feasible = false
-		u.Reason = "the site lists no column or cartridge, or no evaporator"
-		return []usage.Usage{u}
+	opts, why := md.options(crudeKg)
+	if why != "" {
+		return []usage.Usage{md.none(crudeKg, why, md.quiet)}
 	}
-	var out []usage.Usage
-	seen := map[string]bool{} // a cartridge holds what it holds: several loadings may give the same plan
+	out := make([]usage.Usage, len(opts))
+	for i := range opts {
+		out[i] = md.start(crudeKg, md.quiet)
+		build(&out[i], md.a, md.sc, md.coef, md.site, opts[i].e, opts[i].ratio, nil)
+	}
+	return out
+}
+
+// Lean is Candidates made to be ranked by cost: the same candidates in
+// the same order, each built quiet (usage.Usage.Quiet: the same
+// quantities, demands and equipment, no notes or tables), and full(i),
+// the i-th as Candidates gives it, for the few a report words. full
+// builds again on the same code with the cut the lean build found, so
+// the two share every quantity (TestLeanCandidatesAreTheFullOnes).
+func (md *Model) Lean(crudeKg float64) (lean []usage.Usage, full func(i int) usage.Usage) {
+	opts, why := md.options(crudeKg)
+	if why != "" {
+		return []usage.Usage{md.none(crudeKg, why, true)}, func(int) usage.Usage { return md.none(crudeKg, why, md.quiet) }
+	}
+	lean = make([]usage.Usage, len(opts))
+	cuts := make([]bedCut, len(opts))
+	for i := range opts {
+		lean[i] = md.start(crudeKg, true)
+		cuts[i] = build(&lean[i], md.a, md.sc, md.coef, md.site, opts[i].e, opts[i].ratio, nil)
+	}
+	return lean, func(i int) usage.Usage {
+		u := md.start(crudeKg, md.quiet)
+		build(&u, md.a, md.sc, md.coef, md.site, opts[i].e, opts[i].ratio, &cuts[i])
+		return u
+	}
+}
+
+// option is one candidate plan: equipment at a loading (silica : crude).
+type option struct {
+	e     equip
+	ratio float64
+}
+
+// Reasons options gives when there is no candidate to build.
+const (
+	noSite     = "the site lists no column or cartridge, or no evaporator"
+	noLoading  = "no loading"
+	optionsCap = 24 // room for the usual 8 loadings × column and cartridge
+)
+
+// options lists the candidate plans at crudeKg: every usable loading of
+// the trade-off table up to the first that keeps all but 0.1 % of the
+// eluted product, each on the column and the cartridge the site offers,
+// a plan repeated (the same equipment, runs and silica per run) listed
+// once. why is noSite or noLoading when there is none.
+func (md *Model) options(crudeKg float64) (opts []option, why string) {
+	a, coef, site := md.a, md.coef, md.site
+	if len(site.Evaporators) == 0 || len(site.Columns)+len(site.Cartridges) == 0 {
+		return nil, noSite
+	}
+	opts = make([]option, 0, optionsCap)
+	var seen []planKey // a cartridge holds what it holds: several loadings may give the same plan
 	for k, row := range a.trade {
 		if !usable(row.cut, coef) {
 			continue
 		}
 		// Past the first loading that keeps all but 0.1 % of the eluted
-		// product, more silica buys nothing: stop.
-		if k > 0 && a.trade[k-1].cut.Recovery >= 0.999 && usable(a.trade[k-1].cut, coef) {
+		// product, more silica buys nothing: stop (a quiet model's
+		// trade-off table ends here, analyseRows).
+		if a.lastCandidateRow(k, coef) {
 			break
 		}
 		for _, e := range equipmentFor(a, coef, site, crudeKg*row.ratio, crudeKg) {
-			key := fmt.Sprintf("%s|%d|%.9g", e.name, e.runs, e.silicaRun)
-			if seen[key] {
+			key := keyOf(e)
+			if key.in(seen) {
 				continue
 			}
-			seen[key] = true
-			u := md.start(crudeKg)
-			build(&u, a, sc, coef, site, e, row.ratio)
-			out = append(out, u)
+			seen = append(seen, key)
+			opts = append(opts, option{e: e, ratio: row.ratio})
 		}
 	}
-	if len(out) == 0 {
-		u := md.start(crudeKg)
+	if len(opts) == 0 {
+		return nil, noLoading
+	}
+	return opts, ""
+}
+
+// planKey tells plans apart: equipment name, runs, and the silica per
+// run to nine significant digits.
+type planKey struct {
+	name   string
+	runs   int
+	silica [32]byte
+	n      int
+}
+
+// keyOf is the key of a plan.
+func keyOf(e equip) planKey {
+	k := planKey{name: e.name, runs: e.runs}
+	k.n = len(strconv.AppendFloat(k.silica[:0], e.silicaRun, 'g', 9, 64))
+	return k
+}
+
+// in reports whether the key is among seen.
+func (k planKey) in(seen []planKey) bool {
+	for _, s := range seen {
+		if s == k {
+			return true
+		}
+	}
+	return false
+}
+
+// none is the one candidate, not feasible, when options found none: why
+// noSite, or noLoading worded (the ΔRf that would do) unless quiet.
+func (md *Model) none(crudeKg float64, why string, quiet bool) usage.Usage {
+	if why == noSite {
+		u := usage.New(Method, crudeKg, crudeKg*md.sc.Purity)
 		u.Feasible = false
-		u.Reason = quietInfeasible
-		if !md.quiet {
-			u.Reason = a.infeasible(coef)
-		}
-		return []usage.Usage{u}
+		u.Reason = why
+		return u
 	}
-	return out
+	u := md.start(crudeKg, quiet)
+	u.Feasible = false
+	u.Reason = quietInfeasible
+	if !quiet {
+		u.Reason = md.a.infeasible(md.coef)
+	}
+	return u
 }
 
 // quietInfeasible is the reason a quiet model gives when no loading is
@@ -212,11 +313,11 @@ func mustSolvent(b *solvent.Book, id string) solvent.Solvent {
 }
 
 // heatToEvaporate is the heat to warm and vaporise the volumes (J).
-func heatToEvaporate(b *solvent.Book, v scenario.Volumes, warmup float64) float64 {
+func (a analysis) heatToEvaporate(v vols, warmup float64) float64 {
 	heat := 0.0
-	for _, id := range v.IDs() {
-		s := mustSolvent(b, id)
-		heat += v[id] * s.Density.V * (s.SpecificCp()*warmup + s.SpecificHVap())
+	for i, id := range v.ids {
+		s := a.solventOf(id)
+		heat += v.v[i] * s.density * (s.cp*warmup + s.hvap)
 	}
 	return heat
 }

@@ -53,6 +53,9 @@ func (a analysis) infeasible(coef source.Set) string {
 // equipmentNotes words the equipment chosen: repeated runs, a large
 // column's static and pressure caution, a loading far above the usual.
 func (p *runPlan) equipmentNotes(u *usage.Usage, coef source.Set) {
+	if u.Quiet { // the notes' numbers would be worded for nothing
+		return
+	}
 	e := p.e
 	if e.runs > 1 {
 		u.Notef(usage.RepeatLevel(e.runs), "The batch needs %.3g kg of silica, more than the largest %s holds: %d runs of %s of crude each.%s", u.CrudeKg*p.ratio, kindWord(e), e.runs, units.FormatMass(p.crudeRun), impractical(e.runs, kindWord(e)+" runs"))
@@ -75,20 +78,23 @@ func kindWord(e equip) string {
 
 // evaporatorNote says which evaporator was taken and why.
 func (p *runPlan) evaporatorNote(u *usage.Usage, evapRun float64, what string, left float64) {
+	if u.Quiet {
+		return
+	}
 	u.Notef(usage.Info, "Evaporator: %s (%.3g L/h), the smallest the site lists that takes a run's %.3g L of %s within the %.1f h the working day leaves after the column work, or else the fastest.",
 		p.ev.Name, p.ev.Rate*3.6e6, evapRun*1000, what, left/3600)
 }
 
 // weekNote warns when the runs exceed one chemist's working week.
 func (p *runPlan) weekNote(u *usage.Usage, elapsed, attended, day, week float64) {
-	if attended > week || elapsed > week {
+	if !u.Quiet && attended > week || elapsed > week {
 		u.Notef(usage.Warning, "%d runs take %.0f h elapsed (%.1f working days of %.0f h), %.0f h of them at the bench: more than one chemist's working week of %.0f h; plan larger equipment, a second chemist or another method.", int(p.runs), elapsed, elapsed/day, day, attended, week)
 	}
 }
 
 // cutNote says how much of the eluted product the pure cut keeps.
 func (p *runPlan) cutNote(u *usage.Usage, a analysis) {
-	if p.cut.Recovery < 0.9 {
+	if !u.Quiet && p.cut.Recovery < 0.9 {
 		u.Notef(usage.Info, "The cut for %.4g %% purity keeps %.0f %% of the eluted product; the rest is in mixed fractions.", a.target*100, p.cut.Recovery*100)
 	}
 }

@@ -40,8 +40,11 @@ func (p *runPlan) rerun(u *usage.Usage, a analysis, sc *scenario.Scenario, coef 
 	}
 	v := usage.New(Method, crude2, mp)
 	v.Quiet = u.Quiet
-	build(&v, a2, &sc2, coef, site, *e2, p.ratio)
+	build(&v, a2, &sc2, coef, site, *e2, p.ratio, nil)
 	if !v.Feasible {
+		if u.Quiet {
+			return nil
+		}
 		u.Notef(usage.Info, "The mixed fractions (%s of product) cannot be cut to the purity asked on a second run (%s): they are set aside.", units.FormatMass(mp), v.Reason)
 		return nil
 	}
@@ -92,6 +95,9 @@ func mergeRerun(u, v *usage.Usage) {
 	}
 	u.Equipment += "; mixed fractions re-run on " + v.Equipment
 	u.EquipmentID += "; mixed fractions re-run on " + v.EquipmentID
+	if u.Quiet {
+		return
+	}
 	u.Notef(usage.Info, "The mixed fractions (%s of crude) are pooled, evaporated and run once more at the same loading: %s more product, %.1f %% of the product in the crude.",
 		units.FormatMass(v.CrudeKg), units.FormatMass(gained), gained/u.ProductInKg*100)
 }

@@ -4,7 +4,6 @@ import (
 	"math"
 
 	"sepcost/costing/scenario"
-	"sepcost/costing/solvent"
 	"sepcost/costing/source"
 	"sepcost/costing/units"
 	"sepcost/costing/usage"
@@ -16,16 +15,9 @@ import (
 // solvent, evaporated before the column, is collected on its own; the rest
 // of the eluent, with the impurities and mixed fractions, is liquid waste;
 // a share distilled for reuse leaves as recovered solvent.
-func (p *runPlan) wasteAndDemands(u *usage.Usage, sc *scenario.Scenario, coef source.Set) {
-	ch, get, book := sc.Chromatography, coef.Get, sc.Solvents
-	used := scenario.Volumes{}
-	for id, v := range p.used {
-		used[id] = v * p.runs
-	}
-	dry := scenario.Volumes{}
-	for id, v := range p.dryLoad {
-		dry[id] = v * p.runs
-	}
+func (p *runPlan) wasteAndDemands(u *usage.Usage, a analysis, sc *scenario.Scenario, coef source.Set) {
+	ch, get := sc.Chromatography, coef.Get
+	used, dry := p.used.times(p.runs), p.dryLoad.times(p.runs)
 	silicaTotal := (p.e.silicaBuy + p.drySilica) * p.runs
 	silicaWaste := (p.e.silicaRun + p.drySilica) * p.runs
 	area := math.Pi * p.e.diameter * p.e.diameter / 4
@@ -34,21 +26,23 @@ func (p *runPlan) wasteAndDemands(u *usage.Usage, sc *scenario.Scenario, coef so
 		sand = get(KeySandHeight) * area * get(KeySandDensity) * p.runs
 	}
 	tlcPlates := p.plates2 * p.runs
-	u.AddFigure(usage.FigSolventTotal, "solvent used", used.Total(), "L")
-	for _, id := range used.IDs() {
-		u.AddFigure(usage.SolventFigure(id), "solvent: "+id, used[id], "L")
+	u.AddFigure(usage.FigSolventTotal, "solvent used", used.total(), "L")
+	for i, id := range used.ids {
+		si := a.solventOf(id)
+		u.AddFigure(si.key, si.label, used.v[i], "L")
 	}
-	liquid := scenario.Volumes{}
-	for id, v := range used {
-		liquid[id] = v - dry[id]
+	liquid := used.times(1)
+	for i, id := range liquid.ids {
+		liquid.v[i] = used.v[i] - dry.get(id)
 	}
-	wetSolvent := scenario.Volumes{}
-	wetSolvent.Add(ch.TLCEluent, silicaWaste*get(KeyPoreVolume))
-	for id, v := range wetSolvent {
-		liquid[id] -= v
-		if liquid[id] < 0 {
-			wetSolvent[id] += liquid[id]
-			liquid[id] = 0
+	wetSolvent := newVols()
+	wetSolvent.addMix(ch.TLCEluent, silicaWaste*get(KeyPoreVolume))
+	for i, id := range wetSolvent.ids {
+		l := liquid.slot(id)
+		liquid.v[l] -= wetSolvent.v[i]
+		if liquid.v[l] < 0 {
+			wetSolvent.v[i] += liquid.v[l]
+			liquid.v[l] = 0
 		}
 	}
 	recovered := p.recover(u, liquid, coef, ch.RecoverSolvent)
@@ -58,32 +52,32 @@ func (p *runPlan) wasteAndDemands(u *usage.Usage, sc *scenario.Scenario, coef so
 	lostSilica := u.ProductInKg * get(KeyRetainedLoss)
 	u.ImpurityOutKg = impurityInProduct
 	u.AddFigure(usage.FigImpurityInProduct, "nearest impurity in the isolated product", impurityInProduct, "g")
-	spent := solventStream("spent eluent and mixed fractions", liquid, book)
+	spent := a.solventStream("spent eluent and mixed fractions", liquid)
 	spent.Components = append(spent.Components,
 		usage.Component{Name: "impurities", Kg: u.CrudeKg - u.ProductInKg - impurityInProduct - p.rerunI},
 		usage.Component{Name: "product in mixed fractions", Kg: lostMixed})
 	wet := usage.Stream{Name: "solvent-wet silica, sand and TLC plates", Class: usage.WetSolids}
 	wet.Components = append(wet.Components, usage.Component{Name: "silica gel", Kg: silicaWaste}, usage.Component{Name: "sea sand", Kg: sand}, usage.Component{Name: "TLC plates", Kg: tlcPlates * get(KeyPlateMass)})
-	for _, id := range wetSolvent.IDs() {
-		wet.Components = append(wet.Components, usage.Component{Name: id, Kg: wetSolvent[id] * mustSolvent(book, id).Density.V, Solvent: true})
+	for i, id := range wetSolvent.ids {
+		wet.Components = append(wet.Components, usage.Component{Name: id, Kg: wetSolvent.v[i] * a.solventOf(id).density, Solvent: true})
 	}
 	wet.Components = append(wet.Components, usage.Component{Name: "product retained on silica", Kg: lostSilica})
 	u.Waste = []usage.Stream{spent, wet}
-	if dry.Total() > 0 {
-		u.Waste = append(u.Waste, solventStream("dry-load solvent (evaporated before the column)", dry, book))
+	if dry.total() > 0 {
+		u.Waste = append(u.Waste, a.solventStream("dry-load solvent (evaporated before the column)", dry))
 	}
-	p.demands(u, sc, coef, used, recovered, silicaTotal, sand, tlcPlates, lostMixed+lostSilica)
+	p.demands(u, a, coef, used, recovered, silicaTotal, sand, tlcPlates, lostMixed+lostSilica)
 }
 
 // solventStream is a stream of solvents, halogenated when any is.
-func solventStream(name string, v scenario.Volumes, book *solvent.Book) usage.Stream {
-	st := usage.Stream{Name: name, Class: usage.NonHalogenated, VolumeM3: v.Total()}
-	for _, id := range v.IDs() {
-		s := mustSolvent(book, id)
-		if s.Halogenated && v[id] > 0 {
+func (a analysis) solventStream(name string, v vols) usage.Stream {
+	st := usage.Stream{Name: name, Class: usage.NonHalogenated, VolumeM3: v.total(), Components: make([]usage.Component, 0, len(v.ids)+2)}
+	for i, id := range v.ids {
+		s := a.solventOf(id)
+		if s.halogenated && v.v[i] > 0 {
 			st.Class = usage.Halogenated
 		}
-		st.Components = append(st.Components, usage.Component{Name: id, Kg: v[id] * s.Density.V, Solvent: true})
+		st.Components = append(st.Components, usage.Component{Name: id, Kg: v.v[i] * s.density, Solvent: true})
 	}
 	return st
 }
@@ -91,17 +85,20 @@ func solventStream(name string, v scenario.Volumes, book *solvent.Book) usage.St
 // recover takes the share of the spent eluent distilled for reuse out of
 // the liquid waste: the scenario's share times the distillation's yield,
 // at most the share of recovered eluent a later run may take.
-func (p *runPlan) recover(u *usage.Usage, liquid scenario.Volumes, coef source.Set, share float64) scenario.Volumes {
-	recovered := scenario.Volumes{}
+func (p *runPlan) recover(u *usage.Usage, liquid vols, coef source.Set, share float64) vols {
 	if share <= 0 {
-		return recovered
+		return vols{}
 	}
 	eff := share * coef.Get(KeyRecoveryYield)
 	limit := coef.Get(KeyReuseShare)
-	for id, v := range liquid {
+	recovered := liquid.times(0)
+	for i, v := range liquid.v {
 		r := math.Min(v*eff, limit*v)
-		recovered[id] = r
-		liquid[id] -= r
+		recovered.v[i] = r
+		liquid.v[i] -= r
+	}
+	if u.Quiet {
+		return recovered
 	}
 	u.Notef(usage.Info, "%.0f %% of the spent eluent is sent to distillation for reuse; at a yield of %.0f %% it returns %.0f %% (at most %.0f %% of a later run's eluent may be recovered solvent); recovered solvent is credited at its purchase price and its distillation charged as electricity.",
 		share*100, coef.Get(KeyRecoveryYield)*100, math.Min(eff, limit)*100, limit*100)
@@ -109,16 +106,13 @@ func (p *runPlan) recover(u *usage.Usage, liquid scenario.Volumes, coef source.S
 }
 
 // demands asks the ledger for every quantity of the candidate.
-func (p *runPlan) demands(u *usage.Usage, sc *scenario.Scenario, coef source.Set, used, recovered scenario.Volumes, silica, sand, tlcPlates, lost float64) {
-	book, get := sc.Solvents, coef.Get
-	evap := scenario.Volumes{}
-	for id, v := range p.evaporated {
-		evap[id] = v * p.runs
+func (p *runPlan) demands(u *usage.Usage, a analysis, coef source.Set, used, recovered vols, silica, sand, tlcPlates, lost float64) {
+	get := coef.Get
+	evap := p.evaporated.times(p.runs)
+	for i, id := range p.dryLoad.ids {
+		evap.add(id, p.dryLoad.v[i]*p.runs)
 	}
-	for id, v := range p.dryLoad {
-		evap[id] += v * p.runs
-	}
-	heat := heatToEvaporate(book, evap, get(KeyBathDelta))
+	heat := a.heatToEvaporate(evap, get(KeyBathDelta))
 	u.AddFigure("evaporation_heat", "heat to evaporate product fractions and dry-load solvent", heat, "kWh")
 	_, attended := u.Hours()
 	d := u.AddDemand
@@ -128,8 +122,8 @@ func (p *runPlan) demands(u *usage.Usage, sc *scenario.Scenario, coef source.Set
 	if sand > 0 {
 		d(ItemSand, "sand layers", usage.Materials, sand, units.Mass)
 	}
-	for _, id := range used.IDs() {
-		d(id, "solvent: "+id, usage.Materials, used[id], units.Volume)
+	for i, id := range used.ids {
+		d(id, a.solventOf(id).used, usage.Materials, used.v[i], units.Volume)
 	}
 	u.AddCountedDemand(ItemTLCPlate, "TLC plates for fractions", usage.Materials, tlcPlates, tlcPlates*get(KeyPlateMass))
 	d(ItemLabour, "hands-on time", usage.Labour, attended*3600, units.Time)
@@ -137,10 +131,10 @@ func (p *runPlan) demands(u *usage.Usage, sc *scenario.Scenario, coef source.Set
 	addDemandsOfEquipment(u, p.e, p.ev, p.colHours*3600, p.evapHours*3600)
 	u.AddDisposals()
 	d(ItemProduct, "product lost (mixed fractions, retained on silica)", usage.ProductLoss, lost, units.Mass)
-	if len(recovered) > 0 {
-		for _, id := range recovered.IDs() {
-			d(id, "recovered for reuse: "+id, usage.Credit, -recovered[id], units.Volume)
+	if len(recovered.ids) > 0 {
+		for i, id := range recovered.ids {
+			d(id, a.solventOf(id).recovered, usage.Credit, -recovered.v[i], units.Volume)
 		}
-		d(ItemElectricity, "distilling the recovered eluent", usage.Energy, evaporationElectricity(coef, heatToEvaporate(book, recovered, get(KeyBathDelta))), units.Energy)
+		d(ItemElectricity, "distilling the recovered eluent", usage.Energy, evaporationElectricity(coef, a.heatToEvaporate(recovered, get(KeyBathDelta))), units.Energy)
 	}
 }

@@ -64,19 +64,38 @@ type outcome struct {
 	rinseSolvent                   solvent.Solvent
 }
 
-// compute runs the physics of one batch mass, stage by stage.
-func (m *Model) compute(crudeKg float64) outcome {
+// separation runs the stages that do not depend on the batch mass, up to
+// the shortcut design (stDesign) or the one that fails; New keeps it.
+func (m *Model) separation() outcome {
 	d := m.d
-	o := outcome{crudeKg: crudeKg, productIn: crudeKg * d.FeedPurity, wF: d.FeedPurity, wT: d.TargetPurity, reached: stNone}
+	o := outcome{wF: d.FeedPurity, wT: d.TargetPurity, reached: stNone}
 	o.P = newSpecies(d.Product, 0, m.coef)
 	o.I = newSpecies(d.Impurity, o.P.M, m.coef)
-	steps := []func(*outcome) bool{m.volatile, m.pressure, m.volatility, m.design, m.still, m.batch}
-	for i, step := range steps {
+	for i, step := range [...]func(*outcome) bool{m.volatile, m.pressure, m.volatility, m.design} {
 		if !step(&o) {
 			return o
 		}
 		o.reached = stage(i)
 	}
+	return o
+}
+
+// compute runs the physics of one batch mass, stage by stage, from the
+// stages New found (separation).
+func (m *Model) compute(crudeKg float64) outcome {
+	o := m.sep
+	o.crudeKg, o.productIn = crudeKg, crudeKg*m.d.FeedPurity
+	if o.reached != stDesign {
+		return o
+	}
+	if !m.still(&o) {
+		return o
+	}
+	o.reached = stStill
+	if !m.batch(&o) {
+		return o
+	}
+	o.reached = stDone
 	m.energy(&o)
 	m.times(&o)
 	m.rinse(&o)

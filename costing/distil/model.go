@@ -26,6 +26,10 @@ type Model struct {
 	coef source.Set
 	p    params
 	bad  string // why the coefficients make the model meaningless; "" when they do not
+	// sep is the outcome of the stages that do not depend on the batch
+	// mass (compounds, pressure, volatility, design), found once by New;
+	// compute starts every mass from a copy.
+	sep outcome
 	// Quiet makes usages that are only costed (usage.Usage.Quiet: no
 	// notes); every quantity is the same.
 	Quiet bool
@@ -35,6 +39,9 @@ type Model struct {
 func New(sc *scenario.Scenario, coef source.Set) *Model {
 	m := &Model{sc: sc, d: sc.Distillation, coef: coef}
 	m.p, m.bad = readParams(coef)
+	if m.d != nil && m.bad == "" {
+		m.sep = m.separation()
+	}
 	return m
 }
 

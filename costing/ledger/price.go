@@ -120,9 +120,24 @@ func PriceAll(us []usage.Usage, t *prices.Table) ([]Ledger, error) {
 // price builds the ledger of one usage, adding missing items to miss and
 // returning the other problems.
 func price(u usage.Usage, t *prices.Table, miss *missingSet, purchase map[string]float64) (Ledger, []error) {
+	return priceWith(u, t, miss, purchase, nil)
+}
+
+// priceLines is price on a prepared table (Pricer), the purchases those of
+// one batch.
+func priceLines(u usage.Usage, t *prices.Table, miss *missingSet, pr *Pricer) (Ledger, []error) {
+	return priceWith(u, t, miss, nil, pr)
+}
+
+// priceWith is price; with a Pricer (pr not nil) rows are found by its
+// index and lines priced in integer minor units where they fit, and
+// purchase is filled only when needed. The lines and total are the same.
+func priceWith(u usage.Usage, t *prices.Table, miss *missingSet, purchase map[string]float64, pr *Pricer) (Ledger, []error) {
 	places := prices.MinorUnits(t.Currency)
 	l := Ledger{Currency: t.Currency, Places: places, Total: decimal.Zero, Lines: make([]Line, 0, len(u.Demands))}
 	var errs []error
+	var minor int64 // the total of the lines priced in integers, minor units
+	intLines := 0
 	for _, d := range u.Demands {
 		if strings.TrimSpace(d.Item) == "" {
 			errs = append(errs, &QuantityError{Method: u.Method, Label: d.Label, Qty: d.Qty,
@@ -134,7 +149,13 @@ func price(u usage.Usage, t *prices.Table, miss *missingSet, purchase map[string
 				Msg: fmt.Sprintf("quantity is %v; the model produced no usable number", d.Qty)})
 			continue
 		}
-		idx, ok := t.FindFor(d.Item, purchase[itemKey(d.Item)])
+		var idx int
+		var ok bool
+		if pr != nil {
+			idx, ok = pr.row(u, d, &purchase)
+		} else {
+			idx, ok = t.FindFor(d.Item, purchase[itemKey(d.Item)])
+		}
 		if !ok {
 			miss.add(u.Method, d)
 			continue
@@ -158,20 +179,33 @@ func price(u usage.Usage, t *prices.Table, miss *missingSet, purchase map[string
 				Msg: fmt.Sprintf("quantity is %v %s after conversion to the price unit; the model produced no usable number", q, it.Unit)})
 			continue
 		}
-		qty := decimal.NewFromFloat(q).Round(QtyPlaces)
-		amount := qty.Mul(it.Price).Round(places)
-		l.Lines = append(l.Lines, Line{
-			Demand:    d,
-			PriceRow:  idx,
-			Qty:       qty,
-			Unit:      it.Unit,
-			UnitPrice: it.Price,
-			Amount:    amount,
-			Band:      band(t, idx),
-		})
-		l.Total = l.Total.Add(amount)
+		line := Line{Demand: d, PriceRow: idx, Unit: it.Unit, UnitPrice: it.Price}
+		if pr == nil {
+			line.Band = band(t, idx)
+		} else {
+			line.Band = pr.band[idx]
+			if qm, mn, ok := pr.amount(q, idx); ok && !addOverflows(minor, mn) {
+				line.Qty, line.Amount = pr.decimalsOf(qm, mn)
+				minor += mn
+				intLines++
+				l.Lines = append(l.Lines, line)
+				continue
+			}
+		}
+		line.Qty = decimal.NewFromFloat(q).Round(QtyPlaces)
+		line.Amount = line.Qty.Mul(it.Price).Round(places)
+		l.Lines = append(l.Lines, line)
+		l.Total = l.Total.Add(line.Amount)
+	}
+	if intLines > 0 {
+		l.Total = l.Total.Add(decimal.New(minor, -places))
 	}
 	return l, errs
+}
+
+// addOverflows reports whether a + b passes the range of int64.
+func addOverflows(a, b int64) bool {
+	return (b > 0 && a > math.MaxInt64-b) || (b < 0 && a < math.MinInt64-b)
 }
 
 // Purchases is each item's purchase over a campaign of batches (SI units,

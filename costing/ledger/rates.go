@@ -21,6 +21,7 @@ import (
 type Rates struct {
 	table  *prices.Table
 	index  map[string][]int // item name as itemKey → its rows, by ascending From
+	exact  map[string]int   // an item name exactly as the table writes it → its row, for items with one line
 	price  []float64        // per row: price per the item's unit
 	factor []float64        // per row: the unit's factor to SI
 	scale  float64          // 10^minor units
@@ -39,6 +40,12 @@ func NewRates(t *prices.Table) *Rates {
 	}
 	for _, rows := range r.index {
 		sort.SliceStable(rows, func(a, b int) bool { return t.Items[rows[a]].FromSI < t.Items[rows[b]].FromSI })
+	}
+	r.exact = make(map[string]int, len(t.Items))
+	for i, it := range t.Items {
+		if rows := r.index[itemKey(it.Name)]; len(rows) == 1 && rows[0] == i {
+			r.exact[it.Name] = i
+		}
 	}
 	return r
 }
@@ -103,6 +110,9 @@ func (r *Rates) TotalBound(u usage.Usage) (total, bound float64, err error) {
 // row is the price row of an item for this usage: its one line, or the
 // band its purchase (the usage's positive demands of it) falls in.
 func (r *Rates) row(u usage.Usage, item string) (int, bool) {
+	if i, ok := r.exact[item]; ok {
+		return i, true
+	}
 	key := itemKey(item)
 	rows, ok := r.index[key]
 	if !ok {

@@ -73,12 +73,29 @@ const (
 // WasteClasses lists the classes in print order.
 var WasteClasses = []WasteClass{NonHalogenated, Halogenated, WetSolids, Aqueous}
 
-// DisposalItem is the price-table item for disposing of a class.
-func (c WasteClass) DisposalItem() string { return "disposal: " + string(c) }
+// DisposalItem is the price-table item for disposing of a class:
+// "disposal: " and the class (the classes' items are constants, so that
+// naming one allocates nothing).
+func (c WasteClass) DisposalItem() string {
+	switch c {
+	case NonHalogenated:
+		return disposalPrefix + string(NonHalogenated)
+	case Halogenated:
+		return disposalPrefix + string(Halogenated)
+	case WetSolids:
+		return disposalPrefix + string(WetSolids)
+	case Aqueous:
+		return disposalPrefix + string(Aqueous)
+	}
+	return disposalPrefix + string(c)
+}
+
+// disposalPrefix begins a disposal item's name and a disposal demand's label.
+const disposalPrefix = "disposal: "
 
 // DisposalLabel is the ledger label of the demand that pays for disposing
 // of a stream; reports use it to find the stream's disposal line.
-func (s Stream) DisposalLabel() string { return "disposal: " + s.Name }
+func (s Stream) DisposalLabel() string { return disposalPrefix + s.Name }
 
 // Composition is the stream's make-up by mass, largest first:
 // "n-heptane 72.1 %; ethyl acetate 20.3 %; ...".
@@ -216,8 +233,15 @@ type Table struct {
 // New starts the usage of a method at a crude mass, feasible until a model
 // says otherwise.
 func New(method string, crudeKg, productInKg float64) Usage {
+	return NewWithRoom(method, crudeKg, productInKg, 64, 16)
+}
+
+// NewWithRoom is New with room for the number of figures and demands a
+// model knows it will add (a model that makes many usages, most of them
+// only costed, should not reserve more).
+func NewWithRoom(method string, crudeKg, productInKg float64, figures, demands int) Usage {
 	return Usage{Method: method, CrudeKg: crudeKg, ProductInKg: productInKg, Feasible: true,
-		Figures: make([]Figure, 0, 64), Demands: make([]Demand, 0, 16)}
+		Figures: make([]Figure, 0, figures), Demands: make([]Demand, 0, demands)}
 }
 
 // Compact gives the usage's figures and demands slices of their own
