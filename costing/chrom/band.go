@@ -111,8 +111,29 @@ func (c *cdf) unmirrored(x float64) float64 {
 
 // antiderivative is (b − x)·G1(t) + σ·G2(t) of share, r = b − x.
 func antiderivative(r, s, t float64) float64 {
-	P, d := phi(t), math.Exp(-t*t/2)/sqrt2Pi
+	P, d := tails(t)
 	return r*(t*P+d) + s*((t*t-1)*P+t*d)/2
+}
+
+// tails is Φ(t) and φ(t), the standard normal distribution and density.
+// Far in either tail they are the values math.Erfc and math.Exp return
+// there, without calling them: beyond |t| = 40 the density e^(−t²/2)
+// underflows to 0 (t²/2 > 745, the exponent below which math.Exp returns
+// 0), and Φ is 0 below t = −40 (math.Erfc returns 0 from x = 28 on, here
+// x = −t/√2 > 28.28) and 1 above t = 8.5 (math.Erfc returns 2 − 10⁻³⁰⁰,
+// which is 2, below x = −6). The values are those of the full calls to
+// the last bit (TestTailsAreTheCalls); a band far from the cut point,
+// the common case in the cut search, costs no special function.
+func tails(t float64) (P, d float64) {
+	switch {
+	case t < -40:
+		return 0, 0
+	case t > 40:
+		return 1, 0
+	case t > 8.5:
+		return 1, math.Exp(-t*t/2) / sqrt2Pi
+	}
+	return phi(t), math.Exp(-t*t/2) / sqrt2Pi
 }
 
 // sqrt2Pi is √(2π), the normal density's divisor.

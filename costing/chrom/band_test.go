@@ -73,3 +73,24 @@ func TestOverloadWidth(t *testing.T) {
 		t.Error("Lf above 1 is capped")
 	}
 }
+
+// tails gives Φ and φ as math.Erfc and math.Exp do, to the last bit, on
+// a fine grid across and beyond its thresholds (the limits of the two
+// library functions stated beside it).
+func TestTailsAreTheCalls(t *testing.T) {
+	t.Parallel()
+	xs := []float64{}
+	for _, th := range []float64{-40, 8.5, 40} {
+		xs = append(xs, math.Nextafter(th, math.Inf(-1)), th, math.Nextafter(th, math.Inf(1)))
+	}
+	for k := -200000; k <= 200000; k++ {
+		xs = append(xs, float64(k)/2000) // −100 to 100 in steps of 0.0005
+	}
+	for _, x := range xs {
+		P, d := tails(x)
+		wantP, wantD := phi(x), math.Exp(-x*x/2)/sqrt2Pi
+		if math.Float64bits(P) != math.Float64bits(wantP) || math.Float64bits(d) != math.Float64bits(wantD) {
+			t.Fatalf("t = %v: tails %v %v, calls %v %v", x, P, d, wantP, wantD)
+		}
+	}
+}
