@@ -16,10 +16,12 @@ import (
 // so that its memory stays flat in the number of masses. The models,
 // ledger and metrics are pure functions of the plan, the prices and the
 // mass, so the result recomputed is the one first computed
-// (TestRecomputedResultsAreTheHeld). 256 keeps every estimate and the
-// usual sweeps of a few dozen masses whole, at about 5 MB (common
-// practice, no source).
-const HeldMasses = 256
+// (TestRecomputedResultsAreTheHeld). 1,000 keeps every estimate and the
+// sweeps people draw (a few dozen to a thousand masses) whole, at a peak
+// heap under 100 MB (BenchmarkSweepMemory), and spares them the
+// recomputation, which costs a long sweep's workbook two more passes of
+// the models (common practice, no source).
+const HeldMasses = 1000
 
 // walkChunk is how many masses a sweep runs, and a Walker recomputes, at
 // once: enough to keep every core busy, few enough to hold a few MB (common
