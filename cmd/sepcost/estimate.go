@@ -90,6 +90,7 @@ func runEstimate(_ context.Context, opts *estimateOptions, stdout, stderr io.Wri
 		return err
 	}
 	masses := massesOr(opts.masses, plan.Scenario)
+	defer boundMemory(len(masses))()
 	r, err := scale.EstimateWith(plan, t, masses, scale.Options{Draws: opts.draws, Seed: opts.seed, Progress: newProgress(stderr, opts.draws), TargetKg: target, TargetWhy: why})
 	if err != nil {
 		return err

@@ -102,6 +102,7 @@ func runSweep(_ context.Context, opts *sweepOptions, stdout, stderr io.Writer) e
 	if err != nil {
 		return err
 	}
+	defer boundMemory(len(masses))()
 	r, err := scale.SweepWith(plan, t, masses, scale.Options{Draws: opts.draws, Seed: opts.seed, Progress: newProgress(stderr, opts.draws), TargetKg: target, TargetWhy: why})
 	if err != nil {
 		return err
