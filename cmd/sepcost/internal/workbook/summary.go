@@ -230,6 +230,9 @@ func decisionRows(r *scale.Report) int {
 	if d.Confidence > 0 && finite(d.Confidence) {
 		n++
 	}
+	if campaignShown(r) {
+		n++ // campaign cost
+	}
 	return n + len(d.Infeasible)
 }
 
@@ -318,6 +321,10 @@ func writeRecommendation(g *grid, st *styles, r *scale.Report, m money, row int,
 	}
 	row++
 
+	if campaignShown(r) {
+		row = writeCampaignCost(g, st, r, f, row, lay)
+	}
+
 	label(row, "Elapsed time")
 	f.put(g, row, 2, f.batch(f.elapsed, recommended), hours, st.hours)
 	if tab.first > 0 {
@@ -394,6 +401,42 @@ func winnerResult(r *scale.Report, d *scale.Decision) *scale.Row {
 		}
 	}
 	return nil
+}
+
+// campaignShown says whether the recommendation shows the campaign's
+// cost: the decision is made on a campaign whose costs the Budget sheet
+// lists.
+func campaignShown(r *scale.Report) bool {
+	d := r.Decision
+	return d != nil && d.OnCampaign && r.Campaign != nil && r.Budget != nil && d.Winner != ""
+}
+
+// writeCampaignCost writes the recommended method's campaign cost (the
+// Budget sheet's campaign column in the row of the cheapest per gram, a
+// formula like the rest of the block) and returns the next row.
+func writeCampaignCost(g *grid, st *styles, r *scale.Report, f decisionFormulas, row int, lay *layout) int {
+	g.text(row, 1, "Campaign cost", st.bold)
+	total, words := nan, ""
+	if k, ok := r.Campaign.Cost(r.Decision.Winner); ok {
+		total = k.Total.InexactFloat64()
+		noun := "batches"
+		if k.Batches == 1 {
+			noun = "batch"
+		}
+		words = fmt.Sprintf("%d %s of %s of crude, one-time costs and capital charged once (Budget sheet)", k.Batches, noun, units.FormatMass(k.BatchKg))
+		if first, last := campaignRows(r); last >= first && f.pg != "" {
+			lay.add(sheetSummary, cellName(2, row), k.Total, "campaign cost")
+		}
+	}
+	formula := ""
+	if first, last := campaignRows(r); last >= first {
+		formula = f.pick(sheetRef(sheetBudget, absName(cTotal, first)+":"+absName(cTotal, last)), 1, "")
+	}
+	f.put(g, row, 2, formula, total, st.money)
+	if words != "" {
+		g.set(row, 3, cell{value: words, style: st.textIndent, spill: true})
+	}
+	return row + 1
 }
 
 // decisionFormulas writes the recommendation's formulas. pg is the range
