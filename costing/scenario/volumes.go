@@ -23,11 +23,20 @@ func (v Volumes) IDs() []string {
 	return ids
 }
 
-// Total is the sum of the volumes.
+// Total is the sum of the volumes, added in the order of their ids
+// (IDs), so that a total of three or more is the same to the last bit on
+// every run (a map's order changes from run to run, and floating-point
+// addition of three terms depends on their order; of two it does not).
 func (v Volumes) Total() float64 {
 	t := 0.0
-	for _, x := range v {
-		t += x
+	if len(v) <= 2 {
+		for _, x := range v {
+			t += x
+		}
+		return t
+	}
+	for _, id := range v.IDs() {
+		t += v[id]
 	}
 	return t
 }
