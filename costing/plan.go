@@ -7,13 +7,13 @@ package costing
 import (
 	"fmt"
 	"math"
-	"runtime"
 	"sort"
 	"sync"
 
 	"sepcost/costing/equipment"
 	"sepcost/costing/green"
 	"sepcost/costing/ledger"
+	"sepcost/costing/parallel"
 	"sepcost/costing/prices"
 	"sepcost/costing/scenario"
 	"sepcost/costing/source"
@@ -302,28 +302,15 @@ func (p *Plan) Run(massesKg []float64, t *prices.Table) ([][]Result, error) {
 	us := make([]usage.Usage, len(massesKg)*n)
 	rs := make([]Result, len(us))
 	errs := make([]error, len(us))
-	jobs := make(chan int)
-	var wg sync.WaitGroup
-	for w := 0; w < runtime.GOMAXPROCS(0); w++ {
-		wg.Add(1)
-		go func() {
-			defer wg.Done()
-			for k := range jobs {
-				var l ledger.Ledger
-				var err error
-				us[k], l, err = p.runPriced(k%n, massesKg[k/n], t)
-				if err == nil {
-					rs[k], err = p.result(us[k], l)
-				}
-				errs[k] = err
-			}
-		}()
-	}
-	for k := range us {
-		jobs <- k
-	}
-	close(jobs)
-	wg.Wait()
+	parallel.For(len(us), func(k int) {
+		var l ledger.Ledger
+		var err error
+		us[k], l, err = p.runPriced(k%n, massesKg[k/n], t)
+		if err == nil {
+			rs[k], err = p.result(us[k], l)
+		}
+		errs[k] = err
+	})
 	for _, err := range errs {
 		if err != nil {
 			// Price everything together so that every missing price

@@ -3,11 +3,10 @@ package scale
 import (
 	"fmt"
 	"math"
-	"runtime"
 	"sort"
-	"sync"
 
 	"sepcost/costing"
+	"sepcost/costing/parallel"
 	"sepcost/costing/prices"
 	"sepcost/costing/source"
 )
@@ -153,28 +152,15 @@ type trial struct {
 // per gram and swing; the first error in trial order is returned.
 func runTrials(p *costing.Plan, t *prices.Table, m float64, tries []trial) error {
 	errs := make([]error, len(tries))
-	jobs := make(chan int)
-	var wg sync.WaitGroup
-	for w := 0; w < runtime.GOMAXPROCS(0); w++ {
-		wg.Add(1)
-		go func() {
-			defer wg.Done()
-			for k := range jobs {
-				tr := &tries[k]
-				var err error
-				if tr.a.PerGramLo, err = runWith(p, t, tr.j, m, tr.lo); err == nil {
-					tr.a.PerGramHi, err = runWith(p, t, tr.j, m, tr.hi)
-				}
-				tr.a.Swing = swing(tr.a.PerGram, tr.a.PerGramLo, tr.a.PerGramHi)
-				errs[k] = err
-			}
-		}()
-	}
-	for k := range tries {
-		jobs <- k
-	}
-	close(jobs)
-	wg.Wait()
+	parallel.For(len(tries), func(k int) {
+		tr := &tries[k]
+		var err error
+		if tr.a.PerGramLo, err = runWith(p, t, tr.j, m, tr.lo); err == nil {
+			tr.a.PerGramHi, err = runWith(p, t, tr.j, m, tr.hi)
+		}
+		tr.a.Swing = swing(tr.a.PerGram, tr.a.PerGramLo, tr.a.PerGramHi)
+		errs[k] = err
+	})
 	for _, err := range errs {
 		if err != nil {
 			return err

@@ -3,10 +3,10 @@ package scale
 import (
 	"fmt"
 	"math"
-	"runtime"
 	"sync"
 
 	"sepcost/costing"
+	"sepcost/costing/parallel"
 	"sepcost/costing/prices"
 )
 
@@ -290,22 +290,7 @@ func findDecisionCrossovers(names []string, masses []float64, grid [][]point, e 
 func eachInterval(n int, search func(k int) ([]Crossover, error)) ([]Crossover, error) {
 	outs := make([][]Crossover, max(n, 0))
 	errs := make([]error, len(outs))
-	jobs := make(chan int)
-	var wg sync.WaitGroup
-	for w := 0; w < runtime.GOMAXPROCS(0); w++ {
-		wg.Add(1)
-		go func() {
-			defer wg.Done()
-			for k := range jobs {
-				outs[k], errs[k] = search(k)
-			}
-		}()
-	}
-	for k := range outs {
-		jobs <- k
-	}
-	close(jobs)
-	wg.Wait()
+	parallel.For(len(outs), func(k int) { outs[k], errs[k] = search(k) })
 	var all []Crossover
 	for k, out := range outs {
 		if errs[k] != nil {
