@@ -34,7 +34,7 @@ func (p *Plan) PerGramBound(j int, crudeKg float64, t *prices.Table) (u usage.Us
 	if m.Choices == nil {
 		cands = []usage.Usage{m.Run(crudeKg)}
 	} else {
-		cands = m.Choices(crudeKg)
+		cands, _ = leanChoices(m, crudeKg) // the candidates choose ranks
 	}
 	r := p.rates(t)
 	lo := make([]float64, len(cands))
