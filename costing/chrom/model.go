@@ -72,8 +72,11 @@ func (md *Model) start(crudeKg float64, quiet bool) usage.Usage {
 	// A candidate adds 31 figures of its own, one per solvent and two
 	// for a re-run; 13 demands, one per solvent and the recovery's.
 	room := len(md.head.Figures) + 33 + len(md.a.solvents)
+	if md.quiet {
+		room = 0 // a quiet model's usages are only costed: no figures (usage.Usage.CostOnly)
+	}
 	u := usage.NewWithRoom(Method, crudeKg, crudeKg*md.sc.Purity, room, 13+2*len(md.a.solvents))
-	u.Quiet = quiet
+	u.Quiet, u.CostOnly = quiet, md.quiet
 	u.Figures = append(u.Figures, md.head.Figures...)
 	u.Activities = make([]usage.Activity, 0, activities)
 	if !quiet {
@@ -253,7 +256,7 @@ const quietInfeasible = "no loading reaches the purity asked"
 func (a analysis) header(sc *scenario.Scenario, coef source.Set, quiet bool) usage.Usage {
 	ch := sc.Chromatography
 	u := usage.New(Method, 0, 0)
-	u.Quiet = quiet
+	u.Quiet, u.CostOnly = quiet, quiet
 	fig := u.AddFigure
 	fig("k_product", "retention factor k of the product", RetentionFactor(ch.ProductRf), "")
 	u.MarkDetail("k_product") // the method sheet and JSON only

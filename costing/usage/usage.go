@@ -212,6 +212,11 @@ type Usage struct {
 	// is never read for its words, and wording them is a good part of
 	// its cost. Figures, demands and waste are the same either way.
 	Quiet bool `json:"-"`
+	// CostOnly, when set, also drops figures as they are added
+	// (AddFigure records nothing): a usage of a quiet plan (a Monte Carlo
+	// draw, a search over masses, a trial of a setting) is read only for
+	// its demands, product, feasibility and equipment, never shown.
+	CostOnly bool `json:"-"`
 	// EquipmentID names the pieces of equipment the plan uses and how many
 	// runs or batches, without what changes continuously with the mass
 	// (a bed height): e.g. "300 mm column × 51 runs; rotary evaporator
@@ -267,7 +272,7 @@ func (u *Usage) Notef(l Level, format string, a ...any) {
 // AddFigure adds a figure; a NaN or infinite value is left out (never
 // shown). One solvent's volume (SolventFigure) is a detail figure.
 func (u *Usage) AddFigure(key FigureKey, label string, si float64, unit string) {
-	if math.IsNaN(si) || math.IsInf(si, 0) {
+	if math.IsNaN(si) || math.IsInf(si, 0) || u.CostOnly {
 		return
 	}
 	u.Figures = append(u.Figures, Figure{Key: key, Label: label, SI: si, Unit: unit, Detail: key.PerSolvent()})
