@@ -1,6 +1,7 @@
 package workbook
 
 import (
+	"archive/zip"
 	"bytes"
 	"fmt"
 	"io"
@@ -150,8 +151,15 @@ func BenchmarkStreamBaseline(b *testing.B) {
 
 // rawWrite is excelize alone writing the cells readCells read back: as
 // many number styles as the workbook has style ids, the sheets, each row
-// through the StreamWriter, and the file to io.Discard.
+// through the StreamWriter, and the file to io.Discard, its parts
+// deflated by the standard library as excelize does.
 func rawWrite(b testing.TB, sheets []baselineSheet, maxStyle int) {
+	rawWriteWith(b, sheets, maxStyle, false)
+}
+
+// rawWriteWith is rawWrite; sameDeflate deflates the parts with the
+// writer's own compressor (pooledDeflate) instead.
+func rawWriteWith(b testing.TB, sheets []baselineSheet, maxStyle int, sameDeflate bool) {
 	f := excelize.NewFile()
 	defer f.Close()
 	for k := 0; k < maxStyle; k++ {
@@ -185,6 +193,13 @@ func rawWrite(b testing.TB, sheets []baselineSheet, maxStyle int) {
 			b.Fatal(err)
 		}
 	}
+	if sameDeflate {
+		f.SetZipWriter(func(w io.Writer) excelize.ZipWriter {
+			zw := zip.NewWriter(w)
+			zw.RegisterCompressor(zip.Deflate, pooledDeflate)
+			return zw
+		})
+	}
 	if err := f.Write(io.Discard); err != nil {
 		b.Fatal(err)
 	}
@@ -198,7 +213,10 @@ func rawWrite(b testing.TB, sheets []baselineSheet, maxStyle int) {
 // take turns going first. "cpu-ratio" is the same ratio of processor time
 // (all threads, the garbage collector's included), which other programs
 // on a shared machine disturb less; garbage one side leaves may still be
-// collected while the other runs.
+// collected while the other runs. "ratio-same-deflate" pairs the workbook
+// with rawWrite deflating its parts as the writer does (pooledDeflate):
+// what is left is the writer's own work and the library work the cells
+// alone do not ask for (charts, styles, merges, page setup).
 func BenchmarkWorkbookOverRaw(b *testing.B) {
 	for _, c := range realCases {
 		b.Run(c.name, func(b *testing.B) {
@@ -208,7 +226,7 @@ func BenchmarkWorkbookOverRaw(b *testing.B) {
 				b.Fatal(err)
 			}
 			sheets, cells, maxStyle := readCells(b, buf.Bytes())
-			var ours, raw, oursCPU, rawCPU time.Duration
+			var ours, raw, same, oursCPU, rawCPU, sameCPU time.Duration
 			timed := func(clock, cpu *time.Duration, write func()) {
 				c0, t0 := cpuTime(), time.Now()
 				write()
@@ -221,6 +239,7 @@ func BenchmarkWorkbookOverRaw(b *testing.B) {
 				}
 			}
 			writeRaw := func() { rawWrite(b, sheets, maxStyle) }
+			writeSame := func() { rawWriteWith(b, sheets, maxStyle, true) }
 			b.ReportAllocs()
 			for k := 0; b.Loop(); k++ {
 				// Each goes first in every other iteration, so that neither
@@ -228,7 +247,9 @@ func BenchmarkWorkbookOverRaw(b *testing.B) {
 				if k%2 == 0 {
 					timed(&ours, &oursCPU, writeOurs)
 					timed(&raw, &rawCPU, writeRaw)
+					timed(&same, &sameCPU, writeSame)
 				} else {
+					timed(&same, &sameCPU, writeSame)
 					timed(&raw, &rawCPU, writeRaw)
 					timed(&ours, &oursCPU, writeOurs)
 				}
@@ -236,6 +257,9 @@ func BenchmarkWorkbookOverRaw(b *testing.B) {
 			b.ReportMetric(float64(ours)/float64(raw), "ratio")
 			if rawCPU > 0 {
 				b.ReportMetric(float64(oursCPU)/float64(rawCPU), "cpu-ratio")
+			}
+			if same > 0 {
+				b.ReportMetric(float64(ours)/float64(same), "ratio-same-deflate")
 			}
 			b.ReportMetric(float64(ours.Microseconds())/float64(b.N)/1000, "workbook-ms/op")
 			b.ReportMetric(float64(raw.Microseconds())/float64(b.N)/1000, "raw-ms/op")

@@ -99,8 +99,9 @@ func Write(w io.Writer, r *scale.Report, opt Options) error {
 // File.Write assembles the whole package in a bytes.Buffer and then copies
 // it to w; its zip writer hook (File.SetZipWriter) is handed that buffer,
 // and the hook here writes to w instead, so the buffer stays empty and
-// the package is compressed into w part by part. The bytes are those of
-// the buffered path (the same archive/zip writer, the same parts). What
+// the package is compressed into w part by part. The parts are those of
+// the buffered path, byte for byte; they are deflated by pooledDeflate
+// rather than the standard library's compressor. What
 // the buffered path adds is a rewrite of the local headers of parts of
 // more than 4 GiB (zip64); no part of these workbooks comes near that.
 // A failed write to w is reported even where excelize would not pass it
@@ -108,7 +109,12 @@ func Write(w io.Writer, r *scale.Report, opt Options) error {
 func writePackage(f *excelize.File, w io.Writer) error {
 	ew := &errWriter{w: w}
 	hooked := false
-	f.SetZipWriter(func(io.Writer) excelize.ZipWriter { hooked = true; return zip.NewWriter(ew) })
+	f.SetZipWriter(func(io.Writer) excelize.ZipWriter {
+		hooked = true
+		zw := zip.NewWriter(ew)
+		zw.RegisterCompressor(zip.Deflate, pooledDeflate)
+		return zw
+	})
 	var rest bytes.Buffer // what excelize copies out of its own buffer: nothing when hooked
 	err := f.Write(&rest)
 	switch {
