@@ -195,7 +195,8 @@ func (d *Decision) weigh(u *Uncertainty) {
 			continue
 		}
 		d.Confidence = b.Cheapest
-		line := fmt.Sprintf("In %d draws of the measured values, the models' coefficients and the prices within their stated uncertainty, %s is cheapest in %.0f %% (P10–P90 %.2f–%.2f per gram).", u.Draws, d.Winner, b.Cheapest*100, b.P10, b.P90)
+		lo, hi := units.Sig3Range(b.P10, b.P90)
+		line := fmt.Sprintf("In %d draws of the measured values, the models' coefficients and the prices within their stated uncertainty, %s is cheapest in %.0f %% (P10–P90 %s–%s per gram).", u.Draws, d.Winner, b.Cheapest*100, lo, hi)
 		if b.Cheapest < ConfidentShare && !d.Tie {
 			d.Tie = true
 			line += " That is not a clear win: treat the methods as tied and choose on other grounds."

@@ -127,3 +127,29 @@ func percent(v float64) string {
 	}
 	return s
 }
+
+// Sig3Range writes the two ends of a range (a P10–P90 band, say) with the
+// same number of decimals: those Sig3 gives the end nearer zero, trailing
+// zeros kept, thousands separated: (1.42, 2) → "1.42", "2.00"; (0.0042,
+// 0.0061) → "0.00420", "0.00610"; (950, 1234) → "950", "1,234". Ends that
+// are zero or not finite are written as Sig3 writes them.
+func Sig3Range(lo, hi float64) (string, string) {
+	places := -1
+	for _, v := range []float64{lo, hi} {
+		if v == 0 || math.IsNaN(v) || math.IsInf(v, 0) {
+			continue
+		}
+		r, _ := strconv.ParseFloat(strconv.FormatFloat(v, 'e', 2, 64), 64)
+		places = max(places, 2-int(math.Floor(math.Log10(math.Abs(r)))), 0)
+	}
+	if places < 0 {
+		return Sig3(lo), Sig3(hi)
+	}
+	end := func(v float64) string {
+		if v == 0 || math.IsNaN(v) || math.IsInf(v, 0) {
+			return Sig3(v)
+		}
+		return Group(strconv.FormatFloat(v, 'f', places, 64))
+	}
+	return end(lo), end(hi)
+}

@@ -85,7 +85,8 @@ func textDecision(ew *errWriter, r *scale.Report) {
 			one = " for one batch"
 		}
 		if b, ok := band(r, d.Winner); ok {
-			line += fmt.Sprintf(" (P10–P90%s %s to %s over %d draws)", one, units.Sig3(b.P10), units.Sig3(b.P90), r.Uncertainty.Draws)
+			lo, hi := units.Sig3Range(b.P10, b.P90)
+			line += fmt.Sprintf(" (P10–P90%s %s to %s over %d draws)", one, lo, hi, r.Uncertainty.Draws)
 		}
 		fmt.Fprintf(tw, "  recommended\t%s\n", line)
 		if w := winner(r, d); w != nil {

@@ -294,8 +294,9 @@ func writeRecommendation(g *grid, st *styles, r *scale.Report, m money, row int,
 				if d.OnCampaign {
 					one = " of one batch"
 				}
+				lo, hi := units.Sig3Range(b.P10, b.P90)
 				words(row, 3, fmt.Sprintf("P10–P90%s %s to %s %s/g over %d draws of the uncertain inputs (Uncertainty sheet)",
-					one, units.SigFigs(b.P10, 3), units.SigFigs(b.P90, 3), m.currency, u.Draws))
+					one, lo, hi, m.currency, u.Draws))
 			}
 		}
 	}
