@@ -26,7 +26,7 @@ func (p *Plan) choose(j int, crudeKg float64, t *prices.Table) (usage.Usage, led
 	m := p.Methods[j]
 	if m.Choices == nil {
 		u := m.Run(crudeKg)
-		l, err := p.pricer(t).Price(u)
+		l, err := p.Pricer(t).Price(u)
 		return u, l, err
 	}
 	cands, full := leanChoices(m, crudeKg)
@@ -119,7 +119,7 @@ func (p *Plan) priceCandidates(cands []usage.Usage, t *prices.Table) ([]priced, 
 		if ranked && lo[i] > limit {
 			continue
 		}
-		l, err := p.pricer(t).Price(c.u)
+		l, err := p.Pricer(t).Price(c.u)
 		if err != nil {
 			return ps[:i+1], err
 		}
@@ -139,9 +139,10 @@ func (p *Plan) rates(t *prices.Table) *ledger.Rates {
 	return r
 }
 
-// pricer is the price table prepared for pricing (ledger.NewPricer: the
-// ledgers of ledger.Price), made once per table.
-func (p *Plan) pricer(t *prices.Table) *ledger.Pricer {
+// Pricer is the price table prepared for pricing (ledger.NewPricer: the
+// ledgers of ledger.Price and ledger.PriceCampaign), made once per table
+// and kept by the plan; t must not change while the plan is in use.
+func (p *Plan) Pricer(t *prices.Table) *ledger.Pricer {
 	if v, ok := p.pricers.Load(t); ok {
 		return v.(*ledger.Pricer)
 	}

@@ -532,7 +532,7 @@ func costMethod(p *costing.Plan, j int, row PlanRow, t *prices.Table, bears bool
 	if !u.Feasible || u.ProductOutKg <= 0 {
 		return nil, u.Reason, nil
 	}
-	c, err := campaign.Run(u, t, max(row.Runs, 1), decimal.Zero, campaign.DefaultShifts)
+	c, err := campaign.RunWith(u, p.Pricer(t), max(row.Runs, 1), decimal.Zero, campaign.DefaultShifts)
 	if err != nil {
 		return nil, "", err
 	}

@@ -120,19 +120,14 @@ func PriceAll(us []usage.Usage, t *prices.Table) ([]Ledger, error) {
 // price builds the ledger of one usage, adding missing items to miss and
 // returning the other problems.
 func price(u usage.Usage, t *prices.Table, miss *missingSet, purchase map[string]float64) (Ledger, []error) {
-	return priceWith(u, t, miss, purchase, nil)
-}
-
-// priceLines is price on a prepared table (Pricer), the purchases those of
-// one batch.
-func priceLines(u usage.Usage, t *prices.Table, miss *missingSet, pr *Pricer) (Ledger, []error) {
-	return priceWith(u, t, miss, nil, pr)
+	return priceWith(u, t, miss, purchase, nil, 1)
 }
 
 // priceWith is price; with a Pricer (pr not nil) rows are found by its
 // index and lines priced in integer minor units where they fit, and
-// purchase is filled only when needed. The lines and total are the same.
-func priceWith(u usage.Usage, t *prices.Table, miss *missingSet, purchase map[string]float64, pr *Pricer) (Ledger, []error) {
+// purchase is filled only when needed, as Purchases(u, batches). The
+// lines and total are the same.
+func priceWith(u usage.Usage, t *prices.Table, miss *missingSet, purchase map[string]float64, pr *Pricer, batches int) (Ledger, []error) {
 	places := prices.MinorUnits(t.Currency)
 	l := Ledger{Currency: t.Currency, Places: places, Total: decimal.Zero, Lines: make([]Line, 0, len(u.Demands))}
 	var errs []error
@@ -152,7 +147,7 @@ func priceWith(u usage.Usage, t *prices.Table, miss *missingSet, purchase map[st
 		var idx int
 		var ok bool
 		if pr != nil {
-			idx, ok = pr.row(u, d, &purchase)
+			idx, ok = pr.row(u, d, &purchase, batches)
 		} else {
 			idx, ok = t.FindFor(d.Item, purchase[itemKey(d.Item)])
 		}

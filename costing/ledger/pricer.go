@@ -55,11 +55,17 @@ func NewPricer(t *prices.Table) *Pricer {
 
 // Price is Price(u, t) on the prepared table.
 func (pr *Pricer) Price(u usage.Usage) (Ledger, error) {
+	return pr.PriceCampaign(u, 1)
+}
+
+// PriceCampaign is PriceCampaign(u, t, batches) on the prepared table:
+// the same lines, at the bands of the campaign's purchases, and total.
+func (pr *Pricer) PriceCampaign(u usage.Usage, batches int) (Ledger, error) {
 	if pr.t == nil {
 		return Ledger{}, errors.New("ledger: no price table")
 	}
 	var miss missingSet
-	l, errs := priceLines(u, pr.t, &miss, pr)
+	l, errs := priceWith(u, pr.t, &miss, nil, pr, batches)
 	if e := miss.err(pr.t.File, pr.t.Currency); e != nil {
 		errs = append(errs, e)
 	}
@@ -70,15 +76,15 @@ func (pr *Pricer) Price(u usage.Usage) (Ledger, error) {
 }
 
 // row is the table row that prices demand d of u, as FindFor gives it for
-// the item's purchase in u (Purchases, computed once per usage and only
-// for an item with price bands or a name written otherwise than in the
-// table).
-func (pr *Pricer) row(u usage.Usage, d usage.Demand, purchase *map[string]float64) (int, bool) {
+// the item's purchase in u over a campaign of batches (Purchases,
+// computed once per usage and only for an item with price bands or a
+// name written otherwise than in the table).
+func (pr *Pricer) row(u usage.Usage, d usage.Demand, purchase *map[string]float64, batches int) (int, bool) {
 	if i, ok := pr.byName[d.Item]; ok {
 		return i, true
 	}
 	if *purchase == nil {
-		*purchase = Purchases(u, 1)
+		*purchase = Purchases(u, batches)
 	}
 	return pr.t.FindFor(d.Item, (*purchase)[itemKey(d.Item)])
 }

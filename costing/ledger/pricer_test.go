@@ -96,3 +96,39 @@ func sameLedger(t *testing.T, got, want ledger.Ledger) {
 		}
 	}
 }
+
+// A Pricer prices a campaign's batch as PriceCampaign does: on the band
+// table, whose n-heptane lines change band at 25 L and 200 L of purchase
+// over the campaign (hand-set test prices, bandTable), with recurring and
+// one-time demands, at 1 to 200 batches and with the item's name written
+// otherwise than in the table (PriceCampaign, in decimal, is the
+// reference).
+func TestPricerPricesCampaigns(t *testing.T) {
+	t.Parallel()
+	tb := bandTable(t)
+	pr := ledger.NewPricer(tb)
+	rng := rand.New(rand.NewPCG(5, 6))
+	for k := 0; k < 2000; k++ {
+		u := usage.Usage{Method: "m"}
+		for n := 0; n < 1+rng.IntN(4); n++ {
+			it := tb.Items[rng.IntN(len(tb.Items))]
+			g := usage.Materials
+			if rng.IntN(3) == 0 {
+				g = usage.OneTime
+			}
+			name := it.Name
+			if rng.IntN(5) == 0 {
+				name = " " + name + " "
+			}
+			u.Demands = append(u.Demands, usage.Demand{Item: name, Label: "l", Group: g, Dim: it.Per.Dim,
+				Qty: it.Per.Factor * math.Pow(10, -1+3*rng.Float64())})
+		}
+		batches := 1 + rng.IntN(200)
+		want, errW := ledger.PriceCampaign(u, tb, batches)
+		got, errG := pr.PriceCampaign(u, batches)
+		if (errW == nil) != (errG == nil) || errW != nil && errW.Error() != errG.Error() {
+			t.Fatalf("%d batches: errors %v, PriceCampaign gives %v", batches, errG, errW)
+		}
+		sameLedger(t, got, want)
+	}
+}
