@@ -34,6 +34,7 @@ type styles struct {
 	headerIndent, wrapIndent           int // header and wrapped text set off from numbers on their left
 	kgFine                             int // kg with up to six decimals, for batches of milligrams
 	days                               int // working days, "2.5 working days of 8 h"
+	hoursUnit                          int // hours with their unit, "11.03 h", where no header names it
 	textIndent                         int // words beside a figure, set off from it
 	wrapSmall                          int // wrapped text in a smaller font (cautions)
 	wrapNote                           int // wrapped italic text (a reason in a table)
@@ -119,6 +120,7 @@ func newStyles(f *excelize.File, m money) (*styles, error) {
 		{&st.wrapNote, excelize.Style{Font: &excelize.Font{Italic: true}, Alignment: &excelize.Alignment{WrapText: true, Vertical: "top"}}, fmtMeta{places: -1}},
 		{&st.wrapSmall, excelize.Style{Font: &excelize.Font{Size: 9}, Alignment: &excelize.Alignment{WrapText: true, Vertical: "top"}}, fmtMeta{places: -1}},
 		{&st.ruleNumber, excelize.Style{Alignment: &excelize.Alignment{Horizontal: "left", Vertical: "top"}}, fmtMeta{places: -1}},
+		{&st.hoursUnit, excelize.Style{CustomNumFmt: str(`[>=100]#,##0" h";0.00" h"`), Alignment: &excelize.Alignment{Vertical: "top"}}, fmtMeta{2, true, 2}},
 	}
 	for _, d := range defs {
 		s := d.s

@@ -327,7 +327,7 @@ func writeRecommendation(g *grid, st *styles, r *scale.Report, m money, row int,
 	}
 
 	label(row, "Elapsed time")
-	f.put(g, row, 2, f.batch(f.elapsed, recommended), hours, st.hours)
+	f.put(g, row, 2, f.batch(f.elapsed, recommended), hours, st.hoursUnit)
 	if tab.first > 0 {
 		g.formula(row, 3, "IF(ISNUMBER(B"+fmt.Sprint(row)+"),B"+fmt.Sprint(row)+"/"+fmt.Sprint(hoursPerDay)+",\"\")", hours/hoursPerDay, st.days)
 	} else if finite(hours) {
