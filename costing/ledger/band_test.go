@@ -73,13 +73,13 @@ func TestPriceBands(t *testing.T) {
 		}
 	}
 	// A small purchase (a 10 mL demand) is priced at the bottle, the band
-	// from zero: 0.01 L × 12.00 = 0.12.
+	// the first band: 0.01 L × 12.00 = 0.12.
 	small := usage.Usage{Method: "m", Demands: []usage.Demand{{Item: "n-heptane", Group: usage.Materials, Qty: 1e-5, Dim: units.Volume}}}
 	l, err := ledger.Price(small, tb)
 	if err != nil {
 		t.Fatal(err)
 	}
-	if l.Lines[0].PriceRow != 0 || l.Total.StringFixed(2) != "0.12" || l.Lines[0].Band != "from zero" {
+	if l.Lines[0].PriceRow != 0 || l.Total.StringFixed(2) != "0.12" || l.Lines[0].Band != "from 0 L" {
 		t.Errorf("small purchase: row %d, total %s, band %q; want row 0, 0.12, the first band", l.Lines[0].PriceRow, l.Total.StringFixed(2), l.Lines[0].Band)
 	}
 }

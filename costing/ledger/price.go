@@ -227,14 +227,16 @@ func Purchases(u usage.Usage, batches int) map[string]float64 {
 // itemKey is the form in which Purchases keys item names.
 func itemKey(s string) string { return strings.ToLower(strings.TrimSpace(s)) }
 
-// band describes the price band of line idx, "" when its item has one line.
+// band describes the price band of line idx, "" when its item has one line:
+// "from " and the band's lower limit as the table writes it ("from 25",
+// "from 200 L"), "from 0 L" for the first band.
 func band(t *prices.Table, idx int) string {
 	it := t.Items[idx]
 	if !t.Banded(it.Name) {
 		return ""
 	}
 	if it.FromSI == 0 {
-		return "from zero"
+		return "from 0 " + it.Unit
 	}
 	return "from " + it.From
 }

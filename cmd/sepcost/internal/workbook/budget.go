@@ -128,24 +128,26 @@ func buildBudget(g *grid, st *styles, r *scale.Report, m money, outs []methodOut
 	g.text(tot, 1, "Total request", st.bold)
 	g.formula(tot, 2, fmt.Sprintf("B%d+B%d", sub, cont), b.Total.InexactFloat64(), st.moneyBold)
 	lay.add(sheetBudget, cellName(2, tot), b.Total, "total")
-	g.text(bP50Row, 1, "P50 cost per gram of a batch (Monte Carlo draws at the batch mass)", st.text)
+	g.text(bP50Row, 1, "P50 cost per gram of a batch", st.text)
 	g.num(bP50Row, 2, b.P50, st.perGram)
 	g.text(bP90Row, 1, "P90 cost per gram of a batch", st.text)
 	g.num(bP90Row, 2, b.P90, st.perGram)
-	g.set(bP90Row+1, 1, cell{value: "The contingency is the cost above the median that one draw in ten exceeds (P90 − P50), a common way to size it (common practice). Price bands are those of the campaign's purchases; editing the number of batches does not move a line to another band.", style: st.note, spill: true})
+	g.set(bP90Row+1, 1, cell{value: "The contingency is the cost above the median of the Monte Carlo draws at the batch mass that one draw in ten exceeds (P90 − P50; common practice). Price bands are those of the campaign's purchases; editing the batches does not move a line to another band.", style: st.note, spill: true})
 	ledgerBlock(g, st, r, m, lay, bLedgerHead, lines, b.CapitalItems, fmt.Sprintf("$B$%d", bBatchesRow), b.Batches)
 	end := campaignTable(g, st, r)
 	first, last, methods, end := campaignMapAndPayback(g, st, r, end+1)
 	if len(methods) > 0 {
 		g.extra = func(f *excelize.File, _ map[int]float64) error {
-			part, err := addChartTo(f, sheetBudget, cellName(len(methods)+3, first-2), paybackChart(first, last, methods))
+			part, err := addChartTo(f, sheetBudget, cellName(len(methods)+3, first-1), paybackChart(first, last, methods))
 			if err != nil {
 				return err
 			}
 			return logXAxes(f, []string{part})
 		}
-		// Below the chart, which is suChartH px tall from first-2.
-		end = max(end, first-2+suChartH/20+1)
+		// Below the chart, which is suChartH px tall from first-1
+		// (beside the table, below the note that spills over the
+		// columns it stands in).
+		end = max(end, first-1+suChartH/20+1)
 	}
 	campaignMoney(g, st, r, m, outs, lay, end+2)
 }
@@ -156,7 +158,7 @@ func capitalRow(g *grid, st *styles, r *scale.Report, row int) {
 	b := r.Budget
 	if len(b.CapitalItems) == 0 || r.Equipment == nil {
 		g.num(row, 2, 0, st.money)
-		g.set(row, 3, cell{value: "no equipment to buy: the campaign uses what the equipment table lists as owned", style: st.note, spill: true})
+		g.set(row, 3, cell{value: "no equipment to buy: the campaign uses what the equipment table lists as owned", style: st.textIndent, spill: true})
 		return
 	}
 	refs := make([]string, len(b.CapitalItems))
@@ -197,7 +199,10 @@ func capitalRate(r *scale.Report, items []scale.CapitalItem, item string) (strin
 func ledgerBlock(g *grid, st *styles, r *scale.Report, m money, lay *layout, head int, lines []ledger.Line, items []scale.CapitalItem, timesF string, batches int) {
 	for c, h := range []string{"Item", "Line", "Heading", "Quantity per batch", "Unit", "Unit price", "Per batch", "Times", "Campaign", "Price band"} {
 		style := st.header
-		if c+1 >= bQty && c+1 != bUnit && c+1 != bBand {
+		switch {
+		case c+1 == bBand || c+1 == bUnit:
+			style = st.headerIndent
+		case c+1 >= bQty && c+1 != bUnit:
 			style = st.headerRight
 		}
 		g.text(head, c+1, h, style)
@@ -212,7 +217,7 @@ func ledgerBlock(g *grid, st *styles, r *scale.Report, m money, lay *layout, hea
 		g.set(row, bLabel, cell{value: l.Demand.Label, style: st.wrap, wrap: true})
 		g.text(row, bHeading, headingOf(l.Demand.Group), st.text)
 		g.num(row, bQty, l.Qty.InexactFloat64(), st.figure)
-		g.text(row, bUnit, l.Unit, st.text)
+		g.text(row, bUnit, l.Unit, st.textIndent)
 		ref := priceRef(l.PriceRow)
 		if f, ok := capitalRate(r, items, l.Demand.Item); ok {
 			ref = f
@@ -230,7 +235,7 @@ func ledgerBlock(g *grid, st *styles, r *scale.Report, m money, lay *layout, hea
 		g.formula(row, bCampaign, fmt.Sprintf("%s*%s", cellName(bPerBatch, row), cellName(bTimes, row)), campaign.InexactFloat64(), st.money)
 		lay.add(sheetBudget, cellName(bCampaign, row), campaign, "line")
 		if l.Band != "" {
-			g.text(row, bBand, l.Band, st.text)
+			g.text(row, bBand, l.Band, st.textIndent)
 		}
 	}
 }
@@ -450,6 +455,7 @@ func (src campaignSource) write(g *grid, st *styles, lay *layout, row int, cost 
 func campaignMapAndPayback(g *grid, st *styles, r *scale.Report, row int) (first, last int, methods []string, end int) {
 	mp := r.Campaign.Map
 	row++
+	g.pageBreaks = append(g.pageBreaks, row) // the map and the payback on a printed page of their own
 	g.set(row, 1, cell{value: "Cheapest method per gram over a campaign: crude per batch (rows) × number of batches (columns)", style: st.heading, spill: true})
 	row++
 	g.text(row, 1, "Crude per batch, g", st.header)
@@ -458,17 +464,17 @@ func campaignMapAndPayback(g *grid, st *styles, r *scale.Report, row int) (first
 		if n == 1 {
 			label = "1 batch"
 		}
-		g.text(row, k+2, label, st.headerRight)
+		g.text(row, k+2, label, st.headerIndent)
 	}
 	for i, kg := range mp.MassesKg {
 		row++
-		g.num(row, 1, kg*1000, st.figure)
+		g.num(row, 1, kg*1000, st.kg)
 		for k := range mp.Batches {
 			w := mp.Winner[i][k]
 			if w == "" {
 				w = "none feasible"
 			}
-			g.text(row, k+2, w, st.text)
+			g.text(row, k+2, w, st.textIndent)
 		}
 	}
 	for name := range mp.Payback {
@@ -481,6 +487,8 @@ func campaignMapAndPayback(g *grid, st *styles, r *scale.Report, row int) (first
 	row += 2
 	g.set(row, 1, cell{value: "Batches after which developing the method pays back against chromatography", style: st.heading, spill: true})
 	row++
+	g.set(row, 1, cell{value: "Above the curve (more batches than shown at that batch mass) the developed method is cheaper per gram over the campaign; below it, columns are. An empty cell: it never pays back at that batch mass (or cannot run there).", style: st.note, spill: true})
+	row++
 	g.text(row, 1, "Crude per batch, g", st.header)
 	for k, name := range methods {
 		g.text(row, k+2, capitalize(name), st.headerRight)
@@ -488,15 +496,14 @@ func campaignMapAndPayback(g *grid, st *styles, r *scale.Report, row int) (first
 	first = row + 1
 	for i, kg := range mp.MassesKg {
 		row++
-		g.num(row, 1, kg*1000, st.figure)
+		g.num(row, 1, kg*1000, st.kg)
 		for k, name := range methods {
 			if n := mp.Payback[name][i]; n > 0 {
 				g.num(row, k+2, float64(n), st.general)
 			}
 		}
 	}
-	g.set(row+1, 1, cell{value: "Above the curve (more batches than shown at that batch mass) the developed method is cheaper per gram over the campaign; below it, columns are. An empty cell: it never pays back at that batch mass (or cannot run there).", style: st.note, spill: true})
-	return first, row, methods, row + 1
+	return first, row, methods, row
 }
 
 // paybackChart is the payback table drawn: batches to pay back against

@@ -3,10 +3,12 @@ package workbook
 import (
 	"bytes"
 	"context"
+	"fmt"
 	"math"
 	"os"
 	"os/exec"
 	"path/filepath"
+	"regexp"
 	"strconv"
 	"strings"
 	"testing"
@@ -280,5 +282,29 @@ func TestCampaignRowsAreFormulas(t *testing.T) {
 	c, _ := r.Campaign.Cost("chromatography")
 	if one := batchLedger(t, r, "chromatography"); c.Method == r.Budget.Method || samePriced(&one, &c.Ledger) {
 		t.Errorf("at 20 g × 20 batches chromatography's campaign ledger is its method sheet's, or the budget's: the Budget sheet's own ledger of it is not exercised")
+	}
+}
+
+// The Budget sheet prints the campaign map and the payback table with its
+// chart on a page of their own: a manual row break stands just above the
+// map's heading (a break's id is the last row of the page before it, as
+// excelize v2.11.1's InsertPageBreak writes it: read in its source).
+func TestBudgetMapStartsAPage(t *testing.T) {
+	t.Parallel()
+	b, _ := render(t, demoReport(t), Options{})
+	f := open(t, b)
+	idx, err := f.GetSheetIndex(sheetBudget)
+	if err != nil || idx < 0 {
+		t.Fatalf("no %s sheet: %v", sheetBudget, err)
+	}
+	part := packageParts(t, b)[fmt.Sprintf("xl/worksheets/sheet%d.xml", idx+1)]
+	m := regexp.MustCompile(`<brk id="(\d+)"`).FindAllSubmatch(part, -1)
+	if len(m) != 1 {
+		t.Fatalf("%s: %d row breaks, want 1", sheetBudget, len(m))
+	}
+	last, _ := strconv.Atoi(string(m[0][1]))
+	v, _ := f.GetCellValue(sheetBudget, cellName(1, last+1))
+	if !strings.HasPrefix(v, "Cheapest method per gram over a campaign") {
+		t.Errorf("the page break stands above %q, want the campaign map's heading", v)
 	}
 }

@@ -50,6 +50,7 @@ type grid struct {
 	onePage    bool            // print on one page, wide and tall
 	printCols  int             // columns printed (the print area), 0 for all
 	printRows  int             // rows printed, with printCols
+	pageBreaks []int           // rows a printed page starts with
 	// extra runs once the sheet's StreamWriter exists and the column
 	// widths are known, before any row is written (charts are added here).
 	extra func(f *excelize.File, widths map[int]float64) error
@@ -280,6 +281,11 @@ func (g *grid) flush(f *excelize.File, st *styles, omit bool, title string) erro
 	}
 	if err := printTitles(f, g.name, titles); err != nil {
 		return err
+	}
+	for _, row := range g.pageBreaks {
+		if err := f.InsertPageBreak(g.name, cellName(1, row)); err != nil {
+			return fmt.Errorf("workbook: sheet %s: page break: %w", g.name, err)
+		}
 	}
 	sw, err := f.NewStreamWriter(g.name)
 	if err != nil {

@@ -135,7 +135,7 @@ func newStyles(f *excelize.File, m money) (*styles, error) {
 	// minor unit up to pricePlaces (e.g. 95.00 EUR and 0.185 EUR).
 	st.price = map[int32]int{}
 	for p := m.places; p <= m.pricePlaces; p++ {
-		id, err := f.NewStyle(&excelize.Style{CustomNumFmt: str(currencyFormat(m.currency, p, ""))})
+		id, err := f.NewStyle(&excelize.Style{CustomNumFmt: str(currencyFormat(m.currency, p, "")), Alignment: &excelize.Alignment{Vertical: "top"}})
 		if err != nil {
 			return nil, fmt.Errorf("workbook: style: %w", err)
 		}
