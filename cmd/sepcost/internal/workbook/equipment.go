@@ -29,9 +29,17 @@ func eqRef(col, k int) string { return sheetRef(sheetEquipment, absName(col, k+2
 // order.
 func buildEquipment(g *grid, st *styles, r *scale.Report) {
 	for c, h := range []string{"Item", "Kind", "Size", "Throughput, L/h", "Hourly rate", "Ownership", "Price", "Currency", "Service life", "Source"} {
-		g.text(1, c+1, h, st.header)
+		style := st.header
+		switch c + 1 {
+		case 4, eqRate, eqPrice: // numbers: their headers right-aligned over them
+			style = st.headerRight
+		case 6, 8: // words after a number, set off from it
+			style = st.headerIndent
+		}
+		g.text(1, c+1, h, style)
 	}
 	g.freeze(1, 1)
+	g.minWidths[6] = 14 // "Ownership" on one line (the indented header wraps)
 	for k, it := range r.Equipment.Items {
 		row := k + 2
 		g.text(row, 1, it.Name, st.text)
@@ -47,11 +55,11 @@ func buildEquipment(g *grid, st *styles, r *scale.Report) {
 		if it.Owned {
 			own = equipment.OwnedWord
 		}
-		g.text(row, 6, own, st.text)
+		g.text(row, 6, own, st.textIndent)
 		if !it.Owned {
 			g.num(row, eqPrice, it.Price.InexactFloat64(), st.priceStyle(it.Price))
 		}
-		g.text(row, 8, it.Currency, st.text)
+		g.text(row, 8, it.Currency, st.textIndent)
 		switch {
 		case it.Life > 0 && it.LifeDim == units.Time:
 			g.text(row, 9, units.SigFigs(it.Life/3600, 6)+" h", st.text)
