@@ -159,23 +159,29 @@ func (ms *methodSheet) head() {
 	ms.row = 5
 }
 
-// section writes a bold section heading and a header row.
-func (ms *methodSheet) section(title string, fixed []string, block [2]string) {
+// section writes a bold section heading and a header row; the last
+// numeric of the fixed columns hold numbers, as every block column does,
+// and their headers are right-aligned over them.
+func (ms *methodSheet) section(title string, fixed []string, numeric int, block [2]string) {
 	g, st := ms.g, ms.st
 	g.set(ms.row, 1, cell{value: title, style: st.heading, spill: true})
 	ms.row++
 	for c, h := range fixed {
-		g.text(ms.row, c+1, h, st.header)
+		style := st.header
+		if c >= len(fixed)-numeric {
+			style = st.headerRight
+		}
+		g.text(ms.row, c+1, h, style)
 	}
 	for c := len(fixed) + 1; c < firstBlock; c++ {
 		g.blank(ms.row, c, st.header)
 	}
-	for i := range ms.r.MassesKg {
-		g.text(ms.row, blockCol(i), block[0], st.header)
+	for i := range ms.r.MassesKg { // numbers below: headers right-aligned over them
+		g.text(ms.row, blockCol(i), block[0], st.headerRight)
 		if block[1] == "" {
 			g.blank(ms.row, blockCol(i)+1, st.header)
 		} else {
-			g.text(ms.row, blockCol(i)+1, block[1], st.header)
+			g.text(ms.row, blockCol(i)+1, block[1], st.headerRight)
 		}
 	}
 	ms.row++
@@ -191,7 +197,7 @@ func (ms *methodSheet) section(title string, fixed []string, block [2]string) {
 // first-seen order, each in the display unit of its first occurrence.
 func (ms *methodSheet) figures() error {
 	g, st := ms.g, ms.st
-	ms.section("Physical figures", []string{"Figure", "Key", "Unit"}, [2]string{"Value", ""})
+	ms.section("Physical figures", []string{"Figure", "Key", "Unit"}, 0, [2]string{"Value", ""})
 	gram := func(kg float64) float64 { return units.MustTo(kg, "g") }
 	crudeRow, inRow, outRow := ms.row, ms.row+1, ms.row+2
 	recRow := ms.row + 3
@@ -297,7 +303,7 @@ type ledgerRow struct {
 // where m_out is not positive.
 func (ms *methodSheet) ledger() error {
 	g, st := ms.g, ms.st
-	ms.section("Bill of materials and costs", []string{"Item", "Label", "Unit", "Unit price"}, [2]string{"Qty", "Cost"})
+	ms.section("Bill of materials and costs", []string{"Item", "Label", "Unit", "Unit price"}, 1, [2]string{"Qty", "Cost"})
 
 	byGroup := map[usage.Group][]*ledgerRow{}
 	rows := map[[3]any]*ledgerRow{}

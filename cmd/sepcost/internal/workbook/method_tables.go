@@ -18,13 +18,14 @@ func (ms *methodSheet) tables() {
 	}
 }
 
-// table writes one table: a heading, a header row and the rows.
+// table writes one table: a heading, a header row (right-aligned over
+// the numbers) and the rows.
 func (ms *methodSheet) table(t usage.Table) {
 	g, st := ms.g, ms.st
 	g.set(ms.row, 1, cell{value: t.Title, style: st.heading, spill: true})
 	ms.row++
 	for c, h := range t.Columns {
-		g.text(ms.row, c+1, h, st.header)
+		g.text(ms.row, c+1, h, st.headerRight) // every column holds numbers
 	}
 	ms.row++
 	for _, r := range t.Rows {

@@ -12,7 +12,7 @@ import (
 // "n/a" rather than a SUM over a text cell.
 func (ms *methodSheet) time() {
 	g, st := ms.g, ms.st
-	ms.section("Time", []string{"Activity"}, [2]string{"Elapsed h", "Hands-on h"})
+	ms.section("Time", []string{"Activity"}, 0, [2]string{"Elapsed h", "Hands-on h"})
 	var rows union
 	vals := make([]map[rowKey][2]float64, len(ms.res))
 	for i, res := range ms.res {

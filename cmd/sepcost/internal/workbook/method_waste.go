@@ -11,7 +11,7 @@ import (
 // total mass, a SUM formula whose cached value is usage.Usage.WasteKg.
 func (ms *methodSheet) waste() {
 	g, st := ms.g, ms.st
-	ms.section("Waste streams", []string{"Stream", "Class"}, [2]string{"kg", "L"})
+	ms.section("Waste streams", []string{"Stream", "Class"}, 0, [2]string{"kg", "L"})
 	var rows union
 	type kgL struct{ kg, l float64 }
 	vals := make([]map[rowKey]kgL, len(ms.res))
