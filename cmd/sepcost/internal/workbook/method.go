@@ -6,6 +6,7 @@ import (
 
 	"github.com/shopspring/decimal"
 
+	"sepcost/costing"
 	"sepcost/costing/ledger"
 	"sepcost/costing/units"
 	"sepcost/costing/usage"
@@ -114,6 +115,12 @@ func buildMethod(g *grid, st *styles, r *scale.Report, m money, j int, lay *layo
 		return methodOut{}, err
 	}
 	ms.head()
+	if ms.notAssessed() {
+		// The scenario does not describe the method: a line saying so
+		// rather than empty tables.
+		ms.g.set(ms.row, colTitle, cell{value: "Not assessed at any batch mass: " + costing.Detail(ms.res[0].Usage.Reason) + ". Describe the method in the scenario to cost it.", style: ms.st.note, spill: true})
+		return methodOut{sheet: g.name, mass: ms.out}, nil
+	}
 	if err := ms.figures(); err != nil {
 		return methodOut{}, err
 	}
@@ -128,6 +135,17 @@ func buildMethod(g *grid, st *styles, r *scale.Report, m money, j int, lay *layo
 }
 
 func (ms *methodSheet) feasible(i int) bool { return ms.res[i].Usage.Feasible }
+
+// notAssessed reports whether the method is not assessed at every mass
+// (costing.StatusNotAssessed: the scenario does not describe it).
+func (ms *methodSheet) notAssessed() bool {
+	for _, res := range ms.res {
+		if res.Status() != costing.StatusNotAssessed {
+			return false
+		}
+	}
+	return len(ms.res) > 0
+}
 
 func (ms *methodSheet) where(i int) string {
 	return fmt.Sprintf("workbook: %s at %s", ms.r.Methods[ms.j], units.FormatMass(ms.r.MassesKg[i]))

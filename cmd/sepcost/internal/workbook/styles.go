@@ -35,6 +35,7 @@ type styles struct {
 	kgFine                             int // kg with up to six decimals, for batches of milligrams
 	days                               int // working days, "2.5 working days of 8 h"
 	hoursUnit                          int // hours with their unit, "11.03 h", where no header names it
+	boldIndent                         int // a bold word set off from a number on its left
 	textIndent                         int // words beside a figure, set off from it
 	wrapSmall                          int // wrapped text in a smaller font (cautions)
 	wrapNote                           int // wrapped italic text (a reason in a table)
@@ -87,7 +88,7 @@ func newStyles(f *excelize.File, m money) (*styles, error) {
 		{&st.massHeader, excelize.Style{Font: &excelize.Font{Bold: true}, Border: bottom,
 			Alignment: &excelize.Alignment{Horizontal: "center"}}, fmtMeta{places: -1}},
 		{&st.text, excelize.Style{Alignment: &excelize.Alignment{Vertical: "top"}}, fmtMeta{places: -1}},
-		{&st.bold, excelize.Style{Font: &excelize.Font{Bold: true}}, fmtMeta{places: -1}},
+		{&st.bold, excelize.Style{Font: &excelize.Font{Bold: true}, Alignment: &excelize.Alignment{Vertical: "top"}}, fmtMeta{places: -1}},
 		{&st.wrap, excelize.Style{Alignment: &excelize.Alignment{WrapText: true, Vertical: "top"}}, fmtMeta{places: -1}},
 		{&st.note, excelize.Style{Font: &excelize.Font{Italic: true}}, fmtMeta{places: -1}},
 		{&st.general, excelize.Style{Alignment: &excelize.Alignment{Vertical: "top"}}, fmtMeta{places: -1}},
@@ -121,6 +122,7 @@ func newStyles(f *excelize.File, m money) (*styles, error) {
 		{&st.wrapSmall, excelize.Style{Font: &excelize.Font{Size: 9}, Alignment: &excelize.Alignment{WrapText: true, Vertical: "top"}}, fmtMeta{places: -1}},
 		{&st.ruleNumber, excelize.Style{Alignment: &excelize.Alignment{Horizontal: "left", Vertical: "top"}}, fmtMeta{places: -1}},
 		{&st.hoursUnit, excelize.Style{CustomNumFmt: str(`[>=100]#,##0" h";0.00" h"`), Alignment: &excelize.Alignment{Vertical: "top"}}, fmtMeta{2, true, 2}},
+		{&st.boldIndent, excelize.Style{Font: &excelize.Font{Bold: true}, Alignment: &excelize.Alignment{Vertical: "top", Horizontal: "left", Indent: 1}}, fmtMeta{places: -1}},
 	}
 	for _, d := range defs {
 		s := d.s

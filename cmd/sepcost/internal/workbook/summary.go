@@ -140,8 +140,11 @@ func writeSummaryTable(g *grid, st *styles, r *scale.Report, methods []methodOut
 	g.set(top, 1, cell{value: "Cost, time and waste by batch mass and method", style: st.heading, spill: true})
 	for c, h := range head {
 		style := st.headerRight
-		if c < 3 {
+		switch {
+		case c < 3:
 			style = st.header
+		case cheapest && c+1 == lastCol: // the cheapest mark: a word after the numbers
+			style = st.headerIndent
 		}
 		g.text(top+1, c+1, h, style)
 	}
@@ -204,7 +207,7 @@ func writeSummaryTable(g *grid, st *styles, r *scale.Report, methods []methodOut
 					mark = "cheapest"
 				}
 				at := first + j
-				g.formula(at, lastCol, "IF("+cellName(pgCol, at)+"=MIN("+rng+"),\"cheapest\",\"\")", mark, st.bold)
+				g.formula(at, lastCol, "IF("+cellName(pgCol, at)+"=MIN("+rng+"),\"cheapest\",\"\")", mark, st.boldIndent)
 			}
 		}
 	}
