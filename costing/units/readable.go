@@ -77,13 +77,7 @@ func Sig3(v float64) string {
 	if v == 0 || math.IsNaN(v) || math.IsInf(v, 0) {
 		return strconv.FormatFloat(v, 'f', -1, 64)
 	}
-	// Round to three significant figures first, so that 999.6 becomes
-	// 1,000 and is written with no decimals.
-	r, _ := strconv.ParseFloat(strconv.FormatFloat(v, 'e', 2, 64), 64)
-	places := 2 - int(math.Floor(math.Log10(math.Abs(r))))
-	if places < 0 {
-		places = 0
-	}
+	r, places := sig3Places(v)
 	s := strconv.FormatFloat(r, 'f', places, 64)
 	if strings.Contains(s, ".") {
 		s = strings.TrimRight(strings.TrimRight(s, "0"), ".")
@@ -139,8 +133,8 @@ func Sig3Range(lo, hi float64) (string, string) {
 		if v == 0 || math.IsNaN(v) || math.IsInf(v, 0) {
 			continue
 		}
-		r, _ := strconv.ParseFloat(strconv.FormatFloat(v, 'e', 2, 64), 64)
-		places = max(places, 2-int(math.Floor(math.Log10(math.Abs(r)))), 0)
+		_, p := sig3Places(v)
+		places = max(places, p)
 	}
 	if places < 0 {
 		return Sig3(lo), Sig3(hi)
@@ -152,4 +146,12 @@ func Sig3Range(lo, hi float64) (string, string) {
 		return Group(strconv.FormatFloat(v, 'f', places, 64))
 	}
 	return end(lo), end(hi)
+}
+
+// sig3Places is v rounded to three significant figures and the decimals
+// that shows them (none from 100 on): rounding first, so that 999.6
+// becomes 1,000 and is written with no decimals. v is finite and not 0.
+func sig3Places(v float64) (float64, int) {
+	r, _ := strconv.ParseFloat(strconv.FormatFloat(v, 'e', 2, 64), 64)
+	return r, max(2-int(math.Floor(math.Log10(math.Abs(r)))), 0)
 }
