@@ -205,7 +205,13 @@ func (d *Decision) weigh(u *Uncertainty) {
 	}
 }
 
-// topDrivers returns a method's n largest cost items.
+// minDriverShare is the least share of a method's total an item must
+// have to be named a cost driver: one that would print as "0 %" is not
+// one (a presentational threshold, no source).
+const minDriverShare = 0.005
+
+// topDrivers returns a method's n largest cost items, each at least
+// minDriverShare of its total.
 func topDrivers(method string, r costing.Result, n int) []Driver {
 	byItem := map[string]decimal.Decimal{}
 	var order []string
@@ -228,6 +234,9 @@ func topDrivers(method string, r costing.Result, n int) []Driver {
 		share := 0.0
 		if total > 0 {
 			share = byItem[it].InexactFloat64() / total
+		}
+		if share < minDriverShare {
+			break
 		}
 		out = append(out, Driver{Method: method, Item: it, Amount: byItem[it], Share: share})
 	}

@@ -9,6 +9,7 @@ import (
 
 	"sepcost/costing"
 	"sepcost/costing/costingtest"
+	"sepcost/costing/ledger"
 	"sepcost/costing/prices"
 	"sepcost/costing/usage"
 	"sepcost/templates"
@@ -211,6 +212,35 @@ func TestDevelopmentCostSpread(t *testing.T) {
 			t.Errorf("%g kg: %.2f per g, not below %.2f", m, pg, prev)
 		} else {
 			prev = pg
+		}
+	}
+}
+
+// A cost driver is an item with at least half a percent of the method's
+// cost (one that would print as "0 %" is not named): of lines of 60.00,
+// 39.70 and 0.30 (0.3 %), the first two are drivers (a presentational
+// rule of this project, no source).
+func TestDriversLeaveOutCrumbs(t *testing.T) {
+	t.Parallel()
+	line := func(item, amount string) ledger.Line {
+		return ledger.Line{Demand: usage.Demand{Item: item, Group: usage.Materials}, Amount: decimal.RequireFromString(amount)}
+	}
+	r := costing.Result{Ledger: ledger.Ledger{Total: decimal.RequireFromString("100.00"),
+		Lines: []ledger.Line{line("silica gel", "60.00"), line("n-heptane", "39.70"), line("sand", "0.30")}}}
+	got := topDrivers("chromatography", r, 3)
+	if len(got) != 2 || got[0].Item != "silica gel" || got[1].Item != "n-heptane" {
+		t.Errorf("drivers %+v, want silica gel and n-heptane only", got)
+	}
+	for _, y := range [][]byte{templates.Scenario, templates.Liquid} {
+		p, pt := plan(t, y)
+		r, err := EstimateWith(p, pt, []float64{p.Scenario.TargetKg}, Options{})
+		if err != nil {
+			t.Fatal(err)
+		}
+		for _, d := range r.Decision.Drivers {
+			if d.Share < minDriverShare {
+				t.Errorf("%s: driver %s at %.2f %% of its cost", d.Method, d.Item, d.Share*100)
+			}
 		}
 	}
 }

@@ -57,9 +57,11 @@ func money(d decimal.Decimal, places int32, currency string) string {
 	return units.Group(d.StringFixed(places)) + " " + currency
 }
 
-// perGram writes a cost per gram to three significant figures.
+// perGram writes a cost per gram to three significant figures, trailing
+// zeros kept as money is written: 5.80, not 5.8.
 func perGram(v float64, currency string) string {
-	return units.Sig3(v) + " " + currency + "/g"
+	s, _ := units.Sig3Range(v, v)
+	return s + " " + currency + "/g"
 }
 
 // textDecision writes the recommendation at the target mass.
