@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"math"
 	"sort"
+	"strings"
 
 	"sepcost/costing/prices"
 	"sepcost/costing/usage"
@@ -123,7 +124,7 @@ func (r *Rates) row(u usage.Usage, item string) (int, bool) {
 	}
 	purchase := 0.0
 	for _, d := range u.Demands {
-		if d.Qty > 0 && !math.IsInf(d.Qty, 0) && itemKey(d.Item) == key {
+		if d.Qty > 0 && !math.IsInf(d.Qty, 0) && sameItemKey(d.Item, item, key) {
 			purchase += d.Qty
 		}
 	}
@@ -134,4 +135,41 @@ func (r *Rates) row(u usage.Usage, item string) (int, bool) {
 		}
 	}
 	return i, true
+}
+
+// sameItemKey reports whether itemKey(name) == key, key being
+// itemKey(item): at once when name is item as written, and without
+// allocating when both are ASCII (where strings.ToLower lowers A–Z
+// only); else by itemKey itself.
+func sameItemKey(name, item, key string) bool {
+	if name == item {
+		return true
+	}
+	n := strings.TrimSpace(name)
+	if !isASCII(n) || !isASCII(key) {
+		return itemKey(name) == key
+	}
+	if len(n) != len(key) { // ASCII lowering keeps the length
+		return false
+	}
+	for i := 0; i < len(n); i++ {
+		c := n[i]
+		if 'A' <= c && c <= 'Z' {
+			c += 'a' - 'A'
+		}
+		if c != key[i] {
+			return false
+		}
+	}
+	return true
+}
+
+// isASCII reports whether s holds only ASCII bytes.
+func isASCII(s string) bool {
+	for i := 0; i < len(s); i++ {
+		if s[i] >= 0x80 {
+			return false
+		}
+	}
+	return true
 }
