@@ -94,8 +94,12 @@ func writeGreenMetrics(g *grid, st *styles, r *scale.Report, masses []int, shown
 	}
 	row++
 	var notCounted []string
+	skip := notDescribedMethods(r)
 	for k, i := range masses {
 		for j, meth := range r.Methods {
+			if skip[j] {
+				continue // one line under the table says so
+			}
 			res := shown[k][j]
 			g.text(row, 1, units.FormatMass(r.MassesKg[i]), st.text)
 			g.text(row, 2, capitalize(meth), st.text)
@@ -116,6 +120,10 @@ func writeGreenMetrics(g *grid, st *styles, r *scale.Report, masses []int, shown
 			}
 			row++
 		}
+	}
+	if line := notDescribedLine(r, skip); line != "" {
+		g.set(row, 1, cell{value: line, style: st.note, spill: true})
+		row++
 	}
 	if len(notCounted) > 0 {
 		wrapped(g, st, row, "Not counted among the inputs (material demands with no mass, such as items counted by number): "+

@@ -447,3 +447,36 @@ func (ms *methodSheet) ledger() error {
 	ms.row = perRow + 2
 	return nil
 }
+
+// notDescribedMethods marks the methods the scenario does not describe:
+// not assessed at any batch mass (costing.StatusNotAssessed). Tables of
+// streams and metrics leave them out and say so in one line
+// (notDescribedLine).
+func notDescribedMethods(r *scale.Report) []bool {
+	skip := make([]bool, len(r.Methods))
+	for j := range r.Methods {
+		skip[j] = len(r.MassesKg) > 0
+		for i := range r.MassesKg {
+			if row := r.RowAt(i, j); costing.StatusOf(row.Feasible, row.Reason) != costing.StatusNotAssessed {
+				skip[j] = false
+				break
+			}
+		}
+	}
+	return skip
+}
+
+// notDescribedLine is the line under a table that left out the methods
+// skip marks, with their reason at the first mass; "" when none.
+func notDescribedLine(r *scale.Report, skip []bool) string {
+	var parts []string
+	for j, m := range r.Methods {
+		if skip[j] {
+			parts = append(parts, m+" ("+costing.Detail(r.RowAt(0, j).Reason)+")")
+		}
+	}
+	if len(parts) == 0 {
+		return ""
+	}
+	return "Not assessed, so not in the table: " + strings.Join(parts, "; ") + "."
+}

@@ -138,10 +138,14 @@ func buildWaste(g *grid, st *styles, r *scale.Report, m money, details bool, lay
 	var cautions []string
 	var used []waste.Code
 	seenCode := map[string]bool{}
+	skip := notDescribedMethods(r)
 	for k, i := range masses {
 		kg := r.MassesKg[i]
 		for j, meth := range r.Methods {
 			res := shown[k][j]
+			if skip[j] {
+				continue // one line under the table says so
+			}
 			if !res.Usage.Feasible {
 				g.text(row, wMass, units.FormatMass(kg), st.text)
 				g.text(row, wMethod, capitalize(meth), st.text)
@@ -198,6 +202,10 @@ func buildWaste(g *grid, st *styles, r *scale.Report, m money, details bool, lay
 				row++
 			}
 		}
+	}
+	if line := notDescribedLine(r, skip); line != "" {
+		g.set(row, 1, cell{value: line, style: st.note, spill: true})
+		row++
 	}
 	row++
 	caution := wasteCostingOnly + " " + wasteCautionPlain

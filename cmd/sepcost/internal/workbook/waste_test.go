@@ -597,3 +597,30 @@ func TestMarkMeaningsCoverSpread(t *testing.T) {
 		}
 	}
 }
+
+// The demo's scenario has no distillation section: the Waste sheet lists
+// no distillation rows and says once, under the table, that the method was
+// not assessed (the Summary says why as well).
+func TestWasteLeavesOutMethodsNotDescribed(t *testing.T) {
+	t.Parallel()
+	b, _ := render(t, demoReport(t), Options{})
+	f := open(t, b)
+	rows, err := f.GetRows(sheetWaste)
+	if err != nil {
+		t.Fatal(err)
+	}
+	lines := 0
+	for _, row := range rows {
+		if len(row) > wMethod-1 && row[wMethod-1] == "Distillation" {
+			t.Errorf("a distillation row on the Waste sheet: %q", row)
+		}
+		for _, c := range row {
+			if strings.HasPrefix(c, "Not assessed, so not in the table: distillation") {
+				lines++
+			}
+		}
+	}
+	if lines != 2 { // the streams and the green metrics
+		t.Errorf("%d lines say distillation was not assessed, want 2 (streams, green metrics)", lines)
+	}
+}
