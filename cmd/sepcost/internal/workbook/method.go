@@ -260,7 +260,8 @@ func (ms *methodSheet) figures() error {
 	}
 	for _, k := range rows.order {
 		f0 := first[k.a]
-		g.text(ms.row, colTitle, f0.Label, st.text)
+		// Wrapped: a long label would otherwise run under the key beside it.
+		g.set(ms.row, colTitle, cell{value: f0.Label, style: st.wrap, wrap: true})
 		g.text(ms.row, colLabel, string(f0.Key), st.text)
 		g.text(ms.row, colUnit, unitLabel(f0.Unit), st.text)
 		for i, res := range ms.res {
