@@ -711,9 +711,20 @@ func scaleUpHead(sw *excelize.StreamWriter, st *styles, r *scale.Report, m money
 			"per gram and the charts. Run `sepcost estimate SCENARIO --mass %s` for the details at chosen masses.",
 			len(r.MassesKg), MaxDetailMasses, m.places, massFlag(exampleMass(r)))
 	}
+	// Each note wraps across the printed columns (the print area ends at
+	// Equipment), so that none is cut at the page's edge.
+	width := 0.0
+	for c := 1; c <= suEquipment; c++ {
+		width += widths[c]
+	}
 	for k, s := range notes {
-		if err := sw.SetRow(cellName(1, suTitleRow+1+k), []any{excelize.Cell{StyleID: st.note, Value: s}}); err != nil {
+		row := suTitleRow + 1 + k
+		h := excelize.RowOpts{Height: lineHeight * float64(wrappedLines(s, width))}
+		if err := sw.SetRow(cellName(1, row), []any{excelize.Cell{StyleID: st.wrapNote, Value: s}}, h); err != nil {
 			return fmt.Errorf("workbook: sheet %s: %w", sheetScaleUp, err)
+		}
+		if err := sw.MergeCell(cellName(1, row), cellName(suEquipment, row)); err != nil {
+			return fmt.Errorf("workbook: sheet %s: merge: %w", sheetScaleUp, err)
 		}
 	}
 	if hasQty {
