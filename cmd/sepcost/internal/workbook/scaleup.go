@@ -531,8 +531,14 @@ func (w *widths) num(col int, v float64, style int) {
 	w.neg[col] = w.neg[col] || v < 0
 }
 
+// equipmentMaxWidth is the Scale-up sheet's widest Equipment column: the
+// last printed column, whose words ("1000 mm steel process column, 19 cm
+// bed × 9 runs; falling-film evaporator") would otherwise be cut at the
+// page's edge.
+const equipmentMaxWidth = 80.0
+
 // fit gives each column its widest content plus two characters, between
-// minWidth and maxWidth.
+// minWidth and maxWidth (equipmentMaxWidth for Equipment).
 func (w *widths) fit() map[int]float64 {
 	out := map[int]float64{}
 	for col := 1; col < len(w.need); col++ {
@@ -544,7 +550,11 @@ func (w *widths) fit() map[int]float64 {
 			}
 			n = max(n, d)
 		}
-		out[col] = math.Min(math.Max(float64(n+2), minWidth), maxWidth)
+		most := maxWidth
+		if col == suEquipment {
+			most = equipmentMaxWidth
+		}
+		out[col] = math.Min(math.Max(float64(n+2), minWidth), most)
 	}
 	return out
 }
