@@ -88,7 +88,7 @@ func runCheck(_ context.Context, opts *checkOptions, stdout io.Writer) error {
 		fmt.Fprintf(stdout, "\n%s to fix.\n", plural(n, "problem", "problems"))
 		return errCheckFailed
 	}
-	fmt.Fprintf(stdout, "%s: scenario %q reads cleanly (%d batch masses, methods: %v)\n", opts.scenario, sc.Name, len(sc.MassesKg), plan.MethodNames())
+	fmt.Fprintf(stdout, "%s: scenario %q reads cleanly (%s; %s)\n", opts.scenario, sc.Name, plural(len(sc.MassesKg), "batch mass", "batch masses"), describedWords(plan))
 	fmt.Fprintf(stdout, "%s: %d prices in %s; every item the models need is priced\n", t.File, len(t.Items), t.Currency)
 	warned := 0
 	for i, m := range sc.MassesKg {
@@ -96,7 +96,7 @@ func runCheck(_ context.Context, opts *checkOptions, stdout io.Writer) error {
 			u := results[i][j].Usage
 			switch {
 			case !u.Feasible && strings.HasPrefix(u.Reason, costing.NotAssessed):
-				fmt.Fprintf(stdout, "%s, %s: %s\n", units.FormatMass(m), name, u.Reason)
+				// Said once above (describedWords), not at every mass.
 			case !u.Feasible:
 				fmt.Fprintf(stdout, "%s, %s: not feasible: %s\n", units.FormatMass(m), name, u.Reason)
 				warned++
@@ -148,4 +148,26 @@ func plural(n int, one, many string) string {
 		return "1 " + one
 	}
 	return fmt.Sprintf("%d %s", n, many)
+}
+
+// describedWords names the methods the scenario describes and those it
+// does not ("methods described: chromatography, crystallization; not
+// described: distillation").
+func describedWords(plan *costing.Plan) string {
+	var yes, no []string
+	for j, m := range plan.Methods {
+		if !costing.Registry[j].Described(plan.Scenario) {
+			no = append(no, m.Name)
+		} else {
+			yes = append(yes, m.Name)
+		}
+	}
+	out := "methods described: " + strings.Join(yes, ", ")
+	if len(yes) == 0 {
+		out = "no method described"
+	}
+	if len(no) > 0 {
+		out += "; not described: " + strings.Join(no, ", ")
+	}
+	return out
 }

@@ -146,6 +146,11 @@ func TestCheck(t *testing.T) {
 	if err != nil || !strings.Contains(out, "reads cleanly") {
 		t.Fatalf("check good: %v\n%s", err, out)
 	}
+	// The starter scenario describes chromatography and crystallization,
+	// not distillation: said once, not at every mass.
+	if !strings.Contains(out, "methods described: chromatography, crystallization; not described: distillation") || strings.Contains(out, "not assessed") {
+		t.Errorf("check names the described methods once:\n%s", out)
+	}
 
 	// Break both files: several problems, all listed, exit 1.
 	y, _ := os.ReadFile(sc)
