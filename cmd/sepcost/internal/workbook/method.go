@@ -115,7 +115,7 @@ func buildMethod(g *grid, st *styles, r *scale.Report, m money, j int, lay *layo
 		return methodOut{}, err
 	}
 	ms.head()
-	if ms.notAssessed() {
+	if notDescribed(ms.r, ms.j) {
 		// The scenario does not describe the method: a line saying so
 		// rather than empty tables.
 		ms.g.set(ms.row, colTitle, cell{value: "Not assessed at any batch mass: " + costing.Detail(ms.res[0].Usage.Reason) + ". Describe the method in the scenario to cost it.", style: ms.st.note, spill: true})
@@ -135,17 +135,6 @@ func buildMethod(g *grid, st *styles, r *scale.Report, m money, j int, lay *layo
 }
 
 func (ms *methodSheet) feasible(i int) bool { return ms.res[i].Usage.Feasible }
-
-// notAssessed reports whether the method is not assessed at every mass
-// (costing.StatusNotAssessed: the scenario does not describe it).
-func (ms *methodSheet) notAssessed() bool {
-	for _, res := range ms.res {
-		if res.Status() != costing.StatusNotAssessed {
-			return false
-		}
-	}
-	return len(ms.res) > 0
-}
 
 func (ms *methodSheet) where(i int) string {
 	return fmt.Sprintf("workbook: %s at %s", ms.r.Methods[ms.j], units.FormatMass(ms.r.MassesKg[i]))
@@ -456,15 +445,21 @@ func (ms *methodSheet) ledger() error {
 func notDescribedMethods(r *scale.Report) []bool {
 	skip := make([]bool, len(r.Methods))
 	for j := range r.Methods {
-		skip[j] = len(r.MassesKg) > 0
-		for i := range r.MassesKg {
-			if row := r.RowAt(i, j); costing.StatusOf(row.Feasible, row.Reason) != costing.StatusNotAssessed {
-				skip[j] = false
-				break
-			}
-		}
+		skip[j] = notDescribed(r, j)
 	}
 	return skip
+}
+
+// notDescribed reports whether method j is not assessed at any batch mass
+// (costing.StatusNotAssessed: the scenario does not describe it); its
+// sheet then holds one line instead of tables.
+func notDescribed(r *scale.Report, j int) bool {
+	for i := range r.MassesKg {
+		if row := r.RowAt(i, j); costing.StatusOf(row.Feasible, row.Reason) != costing.StatusNotAssessed {
+			return false
+		}
+	}
+	return len(r.MassesKg) > 0
 }
 
 // notDescribedLine is the line under a table that left out the methods
