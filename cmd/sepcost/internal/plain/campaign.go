@@ -3,7 +3,6 @@ package plain
 import (
 	"fmt"
 	"math"
-	"strconv"
 
 	"github.com/shopspring/decimal"
 
@@ -111,7 +110,7 @@ func budgetCSV(r *scale.Report) [][]string {
 		return nil
 	}
 	label := fmt.Sprintf("campaign of %d batches of %s", b.Batches, units.FormatMass(b.BatchKg))
-	mass := strconv.FormatFloat(b.BatchKg, 'g', -1, 64)
+	mass := kgText(b.BatchKg)
 	var rows [][]string
 	for _, h := range []struct {
 		item string

@@ -28,7 +28,7 @@ func CSV(w io.Writer, r *scale.Report) error {
 		m := r.MassesKg[i]
 		for j, name := range r.Methods {
 			res := results[j]
-			mass := strconv.FormatFloat(m, 'g', -1, 64)
+			mass := kgText(m)
 			for _, l := range res.Ledger.Lines {
 				row := []string{mass, Safe(name), Safe(string(l.Demand.Group)), Safe(l.Demand.Item), Safe(l.Demand.Label),
 					l.Qty.String(), Safe(l.Unit), l.UnitPrice.String(), l.Amount.StringFixed(res.Ledger.Places), Safe(res.Ledger.Currency)}
@@ -62,3 +62,10 @@ func Safe(s string) string {
 	}
 	return s
 }
+
+// kgText writes a batch mass in kg for a CSV cell to twelve significant
+// digits, so that the float noise of a unit conversion does not show:
+// "100 mg" is 0.0001, not 9.999999999999999e-05 (100 × 10⁻⁶ in binary).
+// Twelve digits keep every mass a sweep spaces apart distinct and far
+// below any weighing's resolution.
+func kgText(kg float64) string { return strconv.FormatFloat(kg, 'g', 12, 64) }

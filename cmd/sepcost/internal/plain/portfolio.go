@@ -87,7 +87,7 @@ func PortfolioCSV(w io.Writer, pf *scale.Portfolio) error {
 	for _, l := range pf.Lines {
 		el, at := l.Result.Usage.Hours()
 		runs := float64(l.Runs)
-		rec := []string{strconv.Itoa(l.Line), Safe(l.Title), strconv.FormatFloat(l.MassKg, 'g', -1, 64), strconv.Itoa(l.Runs), Safe(l.Method), strconv.FormatBool(l.Forced),
+		rec := []string{strconv.Itoa(l.Line), Safe(l.Title), kgText(l.MassKg), strconv.Itoa(l.Runs), Safe(l.Method), strconv.FormatBool(l.Forced),
 			l.PerBatch.StringFixed(pf.Places), l.OneTime.StringFixed(pf.Places), l.Total.StringFixed(pf.Places), Safe(pf.Currency),
 			strconv.FormatFloat(l.Result.Usage.WasteKg()*runs, 'f', 4, 64), strconv.FormatFloat(el*runs, 'f', 3, 64), strconv.FormatFloat(at*runs, 'f', 3, 64), Safe(l.Date), l.Quarter}
 		if err := cw.Write(rec); err != nil {

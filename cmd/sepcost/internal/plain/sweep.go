@@ -28,7 +28,7 @@ func SweepCSV(w io.Writer, r *scale.Report) error {
 		return strconv.FormatFloat(v, 'g', 8, 64)
 	}
 	for _, row := range r.Rows() {
-		rec := []string{strconv.FormatFloat(row.CrudeKg, 'g', -1, 64), Safe(row.Method), strconv.FormatBool(row.Feasible), Safe(row.Reason),
+		rec := []string{kgText(row.CrudeKg), Safe(row.Method), strconv.FormatBool(row.Feasible), Safe(row.Reason),
 			row.Total.StringFixed(row.Places), Safe(r.Prices.Currency), f(row.PerGram), f(row.ProductKg), f(row.SolventL), f(row.WasteKg),
 			f(row.HoursElapsed), f(row.HoursAttended), f(row.EFactor), f(row.PMI), Safe(row.Equipment)}
 		if err := cw.Write(rec); err != nil {

@@ -36,7 +36,7 @@ func WasteCSV(w io.Writer, r *scale.Report) error {
 		if row.HasDisposal {
 			cost = row.Disposal.StringFixed(r.RowAt(row.Mass, row.Col).Places)
 		}
-		rec := []string{Safe(r.Title), strconv.FormatFloat(row.CrudeKg, 'g', -1, 64), Safe(row.Method), recommended(r, row), Safe(row.Stream.Name),
+		rec := []string{Safe(r.Title), kgText(row.CrudeKg), Safe(row.Method), recommended(r, row), Safe(row.Stream.Name),
 			Safe(string(row.Stream.Class)), strconv.FormatFloat(row.Kg, 'f', 4, 64), strconv.FormatFloat(row.Litres, 'f', 4, 64),
 			Safe(row.Stream.Composition()), Safe(row.Classification.SchemeCodes("EU LoW")), Safe(row.Classification.SchemeCodes("US EPA")),
 			Safe(strings.Join(row.Classification.Rules, " | ")), cost, Safe(cur), Safe(row.Classification.Caution)}
