@@ -51,7 +51,11 @@ func writeDecision(g *grid, st *styles, r *scale.Report, m money, row, lastCol i
 		row++
 	} else {
 		for c, h := range []string{"Method", "Item", "Cost", "Share of total"} {
-			g.text(row, c+1, h, st.header)
+			style := st.header
+			if c >= 2 { // numbers: headers right-aligned over them
+				style = st.headerRight
+			}
+			g.text(row, c+1, h, style)
 		}
 		row++
 		for _, dr := range d.Drivers {
@@ -64,14 +68,24 @@ func writeDecision(g *grid, st *styles, r *scale.Report, m money, row, lastCol i
 	}
 
 	row++
-	g.set(row, 1, cell{value: "Break-even prices at " + units.FormatMass(target), style: st.heading, spill: true})
+	title := "Break-even prices at " + units.FormatMass(target)
+	if len(d.Flips) > 0 {
+		title += ": the decision flips to " + d.RunnerUp
+	}
+	g.set(row, 1, cell{value: title, style: st.heading, spill: true})
 	row++
 	switch {
 	case len(d.Flips) > 0:
-		head := []string{"Item", "Unit", "Price now", "Break-even price", "Ratio to now", "The decision flips to " + d.RunnerUp + " if the price"}
+		head := []string{"Item", "Unit", "Price now", "Break-even price", "Ratio to now", "If the price"}
 		for c, h := range head {
-			// The last column's words run over the empty cells to its right.
-			g.set(row, c+1, cell{value: h, style: st.header, spill: c == len(head)-1})
+			style := st.header
+			switch {
+			case c >= 2 && c <= 4: // numbers: headers right-aligned over them
+				style = st.headerRight
+			case c == 5: // words after a number, set off from it
+				style = st.headerIndent
+			}
+			g.text(row, c+1, h, style)
 		}
 		row++
 		for _, fl := range d.Flips {
@@ -94,7 +108,7 @@ func writeDecision(g *grid, st *styles, r *scale.Report, m money, row, lastCol i
 			if !fl.Rising {
 				dir = "falls below the break-even price"
 			}
-			g.set(row, 6, cell{value: dir, style: st.text, spill: true})
+			g.set(row, 6, cell{value: dir, style: st.textIndent, spill: true})
 			row++
 		}
 	case d.RunnerUp == "":
